@@ -1,0 +1,10 @@
+/**
+ * Documented size limits, shared by validation in the browser, the API and the worker.
+ * A 2-million-node grid holds 16 MB of Float64 travel times per shot: large enough for
+ * any engineering refraction line at sub-metre spacing, small enough to solve in seconds.
+ */
+export const MAX_GRID_NODES = 2_000_000;
+/** Rows in one pick file (one row per pick). */
+export const MAX_PICK_ROWS = 200_000;
+/** Bytes in one uploaded pick file. */
+export const MAX_PICK_FILE_BYTES = 20 * 1024 * 1024;
