@@ -1,0 +1,94 @@
+/**
+ * zod 4 schema for the velocity model file "timefield-model/1" (FORMATS.md §1).
+ * The API validates request bodies with `modelFileSchema`; the same schema, plus the
+ * rule checks in shared/model/rules.ts, is what parseModelFile runs.
+ *
+ * Structural checks (types, signs, sizes) live here; geometric rules (x increasing,
+ * coverage, grid size, velocity count) run afterwards as one superRefine, so a file with
+ * a structural error gets those errors first. Unknown keys are kept (looseObject) so an
+ * editor's extras survive a round trip.
+ */
+import { z } from 'zod';
+import { checkModelRules } from '../model/rules';
+
+/** Missing keys say "is required"; present but wrong values say what was expected. */
+const expect = (what: string, text: string) => (issue: { input?: unknown }) =>
+  issue.input === undefined ? `${what} is required` : `${what} ${text}`;
+const finite = (what: string) => z.number({ error: expect(what, 'must be a finite number') });
+const positive = (what: string) => finite(what).positive({ error: `${what} must be > 0` });
+const count = (what: string) =>
+  z.number({ error: expect(what, 'must be a whole number') }).int({ error: `${what} must be a whole number` });
+
+export const gridSchema = z.looseObject({
+  x0: finite('x0'),
+  dx: positive('dx'),
+  nx: count('nx').min(2, { error: 'nx must be at least 2' }),
+  z0: finite('z0'),
+  dz: positive('dz'),
+  nz: count('nz').min(2, { error: 'nz must be at least 2' }),
+}, { error: expect('grid', 'must be an object {x0, dx, nx, z0, dz, nz}') });
+
+/** A polyline vertex [x, z] in metres (x along the line, z elevation). */
+export const pointSchema = z.tuple([finite('x'), finite('z')], { error: 'must be a point [x, z]' });
+export const polylineSchema = z
+  .array(pointSchema, { error: 'must be a list of points [[x, z], ...]' })
+  .min(2, { error: 'needs at least two points' });
+
+export const layerSchema = z.looseObject({
+  name: z.string({ error: 'name must be text' }).optional(),
+  base: polylineSchema.optional(),
+  v_top: positive('v_top'),
+  v_base: positive('v_base'),
+});
+
+/**
+ * A painted cell over the rasterised result (our extension, FORMATS.md allows extra keys):
+ * node (ix, iz) gets velocity v (m/s). Later edits of the same node win. Edits on air
+ * nodes do not turn them into ground.
+ */
+export const editSchema = z.looseObject({
+  ix: count('ix').min(0, { error: 'ix must be ≥ 0' }),
+  iz: count('iz').min(0, { error: 'iz must be ≥ 0' }),
+  v: positive('v'),
+});
+
+/** Up to this many per-value errors are reported for a raw velocity grid. */
+const MAX_VELOCITY_ISSUES = 20;
+
+/**
+ * Raw velocity grid, checked with a plain loop: z.array(z.number()) would build one
+ * issue object per bad value, which for a two-million-node grid of garbage is too many.
+ */
+export const velocityGridSchema = z
+  .custom<number[]>((v) => Array.isArray(v), { error: 'velocity must be a list of numbers' })
+  .superRefine((values, ctx) => {
+    let reported = 0;
+    for (let i = 0; i < values.length && reported < MAX_VELOCITY_ISSUES; i++) {
+      const v = values[i];
+      if (typeof v !== 'number' || !Number.isFinite(v) || v <= 0) {
+        reported++;
+        ctx.addIssue({ code: 'custom', path: [i], message: `${JSON.stringify(v)} is not a velocity > 0 (m/s)` });
+      }
+    }
+  });
+
+export const MODEL_FORMAT = 'timefield-model/1';
+
+export const modelFileSchema = z
+  .looseObject({
+    format: z.literal(MODEL_FORMAT, { error: `format must be "${MODEL_FORMAT}"` }),
+    grid: gridSchema,
+    surface: polylineSchema.optional(),
+    velocity: velocityGridSchema.optional(),
+    layers: z.array(layerSchema, { error: 'layers must be a list' }).min(1, { error: 'needs at least one layer' }).optional(),
+    edits: z.array(editSchema, { error: 'edits must be a list' }).optional(),
+  }, { error: 'a model file must be a JSON object' })
+  .superRefine((model, ctx) => {
+    for (const issue of checkModelRules(model)) ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
+  });
+
+export type ModelFile = z.infer<typeof modelFileSchema>;
+export type ModelGrid = z.infer<typeof gridSchema>;
+export type ModelLayer = z.infer<typeof layerSchema>;
+export type ModelEdit = z.infer<typeof editSchema>;
+export type PolylinePoints = z.infer<typeof polylineSchema>;
