@@ -1,0 +1,65 @@
+#!/usr/bin/env bash
+# npm start: install what is missing, start PostgreSQL and Redis on loopback, migrate,
+# seed the demo scenario, build the client, then run the API and the worker until Ctrl-C.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/setup.sh
+
+TF_DATA=${TF_DATA:-.data/dev}
+TF_PG_PORT=${TF_PG_PORT:-55432}
+TF_REDIS_PORT=${TF_REDIS_PORT:-56379}
+TF_DB=${TF_DB:-timefield}
+TF_REDIS_DURABLE=1
+PORT=${PORT:-8080}
+
+ensure_system_packages
+ensure_node_modules
+resolve_data_dir
+start_postgres
+start_redis
+export_service_env
+export PORT NODE_ENV=production
+# A stable session secret per checkout, so sign-ins survive a restart.
+[ -f "$TF_DATA/session-secret" ] || node -e "console.log(require('crypto').randomBytes(32).toString('hex'))" > "$TF_DATA/session-secret"
+export SESSION_SECRET=${SESSION_SECRET:-$(cat "$TF_DATA/session-secret")}
+
+node --import tsx scripts/migrate.ts
+node --import tsx scripts/seed.ts
+log "building the client"
+npx vite build --logLevel error
+
+pids=()
+shutdown() {
+  trap - INT TERM EXIT
+  log "stopping"
+  for pid in "${pids[@]}"; do kill -TERM "$pid" 2>/dev/null || true; done
+  wait 2>/dev/null || true
+  stop_redis
+  stop_postgres
+  log "stopped"
+}
+trap shutdown INT TERM EXIT
+
+node --import tsx worker/index.ts & pids+=($!)
+node --import tsx server/index.ts & pids+=($!)
+
+for _ in $(seq 1 100); do
+  curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break
+  sleep 0.2
+done
+cat <<MSG
+
+  Timefield is running at http://127.0.0.1:$PORT
+
+  Demo sign-ins (local demo only; password for all: timefield-demo)
+    admin@timefield.test   administrator
+    geo@timefield.test     geophysicist
+    tech@timefield.test    field technician
+    lead@timefield.test    project lead
+    client@timefield.test  client
+
+  Press Ctrl-C to stop.
+
+MSG
+# Stop everything if either process exits on its own.
+wait -n "${pids[@]}" || true

@@ -1,0 +1,59 @@
+import 'reflect-metadata';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import type { Redis } from 'ioredis';
+import type pg from 'pg';
+import { requireCsrfToken } from './auth/csrf';
+import { passport } from './auth/passport';
+import { sessionMiddleware } from './auth/session';
+import { errorHandler, notFoundApi } from './http/errors';
+import { authRouter } from './routes/auth';
+import { healthRouter } from './routes/health';
+import { linesRouter } from './routes/lines';
+import { projectsRouter } from './routes/projects';
+import { usersRouter } from './routes/users';
+
+export interface AppDeps {
+  redis: Redis;
+  pgPool: pg.Pool;
+  /** Folder of the built client; served with a fallback to index.html when present. */
+  clientDir?: string;
+}
+
+/** The whole HTTP app, without listening: tests drive it with supertest. */
+export function createApp({ redis, pgPool, clientDir = path.resolve('dist') }: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Plotly sets inline styles; the preview solver runs in a Web Worker from a blob in dev builds.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'worker-src': ["'self'", 'blob:'],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'upgrade-insecure-requests': null,
+        },
+      },
+      strictTransportSecurity: false,
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+  app.use(sessionMiddleware(pgPool));
+  app.use(passport.session());
+
+  const api = express.Router();
+  api.use(requireCsrfToken);
+  api.use(healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter());
+  api.use(notFoundApi);
+  app.use('/api', api);
+
+  if (existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

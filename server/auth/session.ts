@@ -1,0 +1,23 @@
+import connectPgSimple from 'connect-pg-simple';
+import session from 'express-session';
+import pg from 'pg';
+import { config } from '../config';
+
+const PgStore = connectPgSimple(session);
+
+/** Sessions live in PostgreSQL (table `session`, made by the first migration). */
+export function sessionMiddleware(pool: pg.Pool) {
+  return session({
+    name: 'tf.sid',
+    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
+    secret: config.sessionSecret,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: config.cookieSecure, maxAge: 8 * 60 * 60 * 1000 },
+  });
+}
+
+export function createPgPool(): pg.Pool {
+  return new pg.Pool({ ...config.pg, max: 5 });
+}

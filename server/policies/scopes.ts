@@ -1,0 +1,23 @@
+import type { Request } from 'express';
+import { dataSource } from '../db/dataSource';
+import { SurveyLine } from '../entities';
+
+/** Finds the project an object belongs to, from the route's parameters; null when there is none. */
+export type ProjectScope = (req: Request) => Promise<string | null>;
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+export const isUuid = (s: unknown): s is string => typeof s === 'string' && UUID.test(s);
+
+export const projectFromParam: ProjectScope = async (req) => {
+  const id = req.params.projectId;
+  if (!isUuid(id)) return null;
+  const found = await dataSource.query('SELECT id FROM projects WHERE id = $1', [id]);
+  return found.length ? id : null;
+};
+
+export const projectOfLine: ProjectScope = async (req) => {
+  const id = req.params.lineId;
+  if (!isUuid(id)) return null;
+  const line = await dataSource.getRepository(SurveyLine).findOne({ where: { id }, select: { projectId: true } });
+  return line?.projectId ?? null;
+};

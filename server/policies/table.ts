@@ -1,0 +1,39 @@
+import type { ProjectRole } from '../../shared/schemas/projects';
+
+/**
+ * The one table of permissions. Every route names an action from it; nothing else decides access.
+ *
+ * - 'anyone': no sign-in needed.
+ * - 'signed_in': any active account.
+ * - { admin, roles, leadAnywhere }: allowed for the global admin (admin: true), for members of the
+ *   object's project with one of `roles`, or (for actions not tied to one project) for an account
+ *   that leads at least one project (leadAnywhere: true).
+ */
+export type Rule = 'anyone' | 'signed_in' | { admin?: boolean; roles?: readonly ProjectRole[]; leadAnywhere?: boolean };
+
+const MEMBERS = ['geophysicist', 'field_tech', 'lead', 'client'] as const;
+const STAFF = ['geophysicist', 'field_tech', 'lead'] as const;
+
+export const policyTable = {
+  'health.read': 'anyone',
+  'auth.csrf': 'anyone',
+  'auth.login': 'anyone',
+  'auth.logout': 'signed_in',
+  'auth.me': 'signed_in',
+
+  'users.list': { admin: true },
+  'users.create': { admin: true },
+  'users.update': { admin: true },
+  'users.directory': { admin: true, leadAnywhere: true },
+
+  'projects.list': 'signed_in',
+  'projects.create': { admin: true, leadAnywhere: true },
+  'project.read': { admin: true, roles: MEMBERS },
+  'project.members.add': { admin: true, roles: ['lead'] },
+  'project.members.remove': { admin: true, roles: ['lead'] },
+  'project.lines.create': { roles: STAFF },
+
+  'line.read': { roles: STAFF },
+} as const satisfies Record<string, Rule>;
+
+export type Action = keyof typeof policyTable;

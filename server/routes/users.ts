@@ -1,0 +1,39 @@
+import { Router } from 'express';
+import { createUserBody, updateUserBody } from '../../shared/schemas/accounts';
+import { dataSource } from '../db/dataSource';
+import { User } from '../entities';
+import { parse } from '../http/parse';
+import { authorize } from '../policies/authorize';
+import { isUuid } from '../policies/scopes';
+import { HttpError } from '../http/errors';
+import { presentUser } from '../presenters/user';
+import { createUser, updateUser } from '../services/users';
+
+export function usersRouter(): Router {
+  const r = Router();
+
+  r.get('/users', authorize('users.list'), async (_req, res) => {
+    const users = await dataSource.getRepository(User).find({ order: { name: 'ASC' } });
+    res.json(users.map(presentUser));
+  });
+
+  r.post('/users', authorize('users.create'), async (req, res) => {
+    const user = await createUser(req.user!.id, parse(createUserBody, req.body));
+    res.status(201).json(presentUser(user));
+  });
+
+  // Names and e-mails of active accounts, for choosing project members.
+  r.get('/users/directory', authorize('users.directory'), async (_req, res) => {
+    const users = await dataSource.getRepository(User).find({ where: { active: true }, order: { name: 'ASC' } });
+    res.json(users.map((u) => ({ id: u.id, name: u.name, email: u.email })));
+  });
+
+  r.patch('/users/:userId', authorize('users.update'), async (req, res) => {
+    const userId = req.params.userId as string;
+    if (!isUuid(userId)) throw new HttpError(404, 'user_not_found', 'No such account.');
+    const user = await updateUser(req.user!.id, userId, parse(updateUserBody, req.body));
+    res.json(presentUser(user));
+  });
+
+  return r;
+}

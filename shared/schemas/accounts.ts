@@ -1,0 +1,31 @@
+import { z } from 'zod';
+
+export const email = z.string().trim().toLowerCase().email('must be an e-mail address').max(254);
+
+export const loginBody = z.strictObject({
+  email: z.string().trim().toLowerCase().min(1, 'is required').max(254),
+  password: z.string().min(1, 'is required').max(200),
+});
+
+export const password = z.string().min(10, 'must be at least 10 characters').max(200);
+export const globalRole = z.enum(['admin']).nullable();
+
+export const createUserBody = z.strictObject({
+  email,
+  name: z.string().trim().min(1, 'is required').max(120),
+  password,
+  globalRole: globalRole.optional().default(null),
+});
+
+export const updateUserBody = z
+  .strictObject({
+    name: z.string().trim().min(1, 'is required').max(120).optional(),
+    globalRole: globalRole.optional(),
+    active: z.boolean().optional(),
+    password: password.optional(),
+  })
+  .refine((b) => Object.keys(b).length > 0, 'give at least one field to change');
+
+export type LoginBody = z.infer<typeof loginBody>;
+export type CreateUserBody = z.infer<typeof createUserBody>;
+export type UpdateUserBody = z.infer<typeof updateUserBody>;
