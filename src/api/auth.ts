@@ -1,0 +1,62 @@
+import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { apiRequest, resetCsrfToken } from './client';
+import { isApiError } from './errors';
+import { queryKeys } from './keys';
+import type { Me, SignInBody } from './types';
+
+/**
+ * Drop every cached resource except "me", which is then overwritten. Keeping the "me"
+ * query object (rather than clearing the whole cache) keeps its observers attached.
+ */
+function forgetEverythingButMe(queryClient: QueryClient): void {
+  queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== queryKeys.me[0] });
+}
+
+/** The signed-in user, or null when the session is absent (401). */
+export function useMe() {
+  return useQuery({
+    queryKey: queryKeys.me,
+    queryFn: async ({ signal }): Promise<Me | null> => {
+      try {
+        return await apiRequest<Me>('/api/auth/me', { signal });
+      } catch (err) {
+        if (isApiError(err, 401)) return null;
+        throw err;
+      }
+    },
+    staleTime: 60_000,
+  });
+}
+
+export function useSignIn() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (body: SignInBody) => {
+      resetCsrfToken(); // a token from a previous session may be stale
+      return apiRequest<Me>('/api/auth/login', { method: 'POST', body });
+    },
+    onSuccess: (me) => {
+      resetCsrfToken(); // the session is renewed on sign-in
+      forgetEverythingButMe(queryClient); // nothing cached for an earlier user may leak into this one
+      queryClient.setQueryData(queryKeys.me, me);
+    },
+  });
+}
+
+/**
+ * Sign out. `leave` runs before the cache is cleared (typically a navigation to the
+ * sign-in page), so the page being left never sees itself signed out and never
+ * remembers itself as the place to come back to.
+ */
+export function useSignOut(leave?: () => void) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiRequest<void>('/api/auth/logout', { method: 'POST' }),
+    onSettled: () => {
+      leave?.();
+      resetCsrfToken();
+      forgetEverythingButMe(queryClient);
+      queryClient.setQueryData(queryKeys.me, null);
+    },
+  });
+}

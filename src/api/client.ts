@@ -1,0 +1,70 @@
+import { ApiError, toApiError } from './errors';
+
+/**
+ * The one fetch wrapper: same-origin cookies, JSON in and out, and the CSRF token
+ * on every state-changing request. The token belongs to the session, and the
+ * session is renewed on sign-in and sign-out, so callers reset it then.
+ */
+
+const UNSAFE = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+let csrfToken: Promise<string> | null = null;
+
+async function fetchCsrfToken(): Promise<string> {
+  const res = await fetch('/api/auth/csrf', { credentials: 'same-origin', headers: { Accept: 'application/json' } });
+  if (!res.ok) throw await toApiError(res);
+  const body = (await res.json()) as { token?: unknown };
+  if (typeof body.token !== 'string') throw new ApiError(500, 'csrf_missing', 'The server did not hand out a security token.');
+  return body.token;
+}
+
+function getCsrfToken(): Promise<string> {
+  if (!csrfToken) {
+    csrfToken = fetchCsrfToken();
+    csrfToken.catch(() => {
+      csrfToken = null; // let the next request try again
+    });
+  }
+  return csrfToken;
+}
+
+/** Forget the token; the next unsafe request fetches a fresh one. */
+export function resetCsrfToken(): void {
+  csrfToken = null;
+}
+
+export interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  body?: unknown;
+  signal?: AbortSignal;
+}
+
+async function send(path: string, method: string, body: unknown, signal?: AbortSignal): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (UNSAFE.has(method)) headers['X-CSRF-Token'] = await getCsrfToken();
+  return fetch(path, {
+    method,
+    headers,
+    credentials: 'same-origin',
+    body: body === undefined ? undefined : JSON.stringify(body),
+    signal,
+  });
+}
+
+/** Call the API; resolves with the parsed JSON (undefined for 204) or throws ApiError. */
+export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const method = options.method ?? 'GET';
+  let res = await send(path, method, options.body, options.signal);
+  // A stale token (session expired or renewed elsewhere) earns one retry with a fresh token.
+  if (res.status === 403 && UNSAFE.has(method)) {
+    const err = await toApiError(res.clone());
+    if (err.code.toLowerCase().includes('csrf')) {
+      resetCsrfToken();
+      res = await send(path, method, options.body, options.signal);
+    }
+  }
+  if (!res.ok) throw await toApiError(res);
+  if (res.status === 204) return undefined as T;
+  const text = await res.text();
+  return (text ? JSON.parse(text) : undefined) as T;
+}

@@ -1,0 +1,84 @@
+import { errorMessage } from '../api/errors';
+import { useUpdateUser } from '../api/users';
+import type { User, UserPatch } from '../api/types';
+import { formatDate } from '../lib/format';
+import { Button } from './Button';
+import { DataTable, Td, Th, Tr } from './Table';
+
+/** All accounts, with the two changes an administrator makes most: role and active/inactive. */
+export function AccountsTable({ users, myId }: { users: User[]; myId: string }) {
+  const update = useUpdateUser();
+  const sorted = [...users].sort((a, b) => Number(b.active) - Number(a.active) || a.name.localeCompare(b.name));
+  const busyFor = (userId: string) => update.isPending && update.variables?.userId === userId;
+  const change = (userId: string, patch: UserPatch) => update.mutate({ userId, patch });
+
+  return (
+    <>
+      {update.isError && (
+        <p role="alert" className="mb-3 rounded-md border border-red-300 bg-red-50 px-4 py-2 text-red-900">
+          {errorMessage(update.error)}
+        </p>
+      )}
+      <DataTable caption="Accounts" testId="accounts-table">
+        <thead>
+          <tr>
+            <Th>Name</Th>
+            <Th>E-mail</Th>
+            <Th>Role</Th>
+            <Th>Status</Th>
+            <Th numeric>Created</Th>
+            <Th>
+              <span className="sr-only">Actions</span>
+            </Th>
+          </tr>
+        </thead>
+        <tbody>
+          {sorted.map((u) => {
+            const self = u.id === myId;
+            const busy = busyFor(u.id);
+            return (
+              <Tr key={u.id} testId={`account-${u.email}`}>
+                <Td className="font-semibold">
+                  {u.name}
+                  {self && <span className="ml-2 text-sm font-normal text-stone-500">(you)</span>}
+                </Td>
+                <Td className="break-all text-stone-700">{u.email}</Td>
+                <Td>{u.globalRole === 'admin' ? 'Administrator' : 'Standard'}</Td>
+                <Td>{u.active ? 'Active' : <span className="font-semibold text-stone-500">Deactivated</span>}</Td>
+                <Td numeric className="whitespace-nowrap text-stone-600">
+                  {formatDate(u.createdAt)}
+                </Td>
+                <Td className="text-right">
+                  {self ? (
+                    <span className="text-sm text-stone-500">Your own account</span>
+                  ) : (
+                    <span className="inline-flex flex-wrap justify-end gap-2">
+                      <Button
+                        variant="secondary"
+                        size="sm"
+                        disabled={update.isPending}
+                        aria-busy={busy || undefined}
+                        onClick={() => change(u.id, { globalRole: u.globalRole === 'admin' ? null : 'admin' })}
+                      >
+                        {u.globalRole === 'admin' ? 'Make standard' : 'Make administrator'}
+                      </Button>
+                      <Button
+                        variant={u.active ? 'danger' : 'secondary'}
+                        size="sm"
+                        disabled={update.isPending}
+                        aria-busy={busy || undefined}
+                        onClick={() => change(u.id, { active: !u.active })}
+                      >
+                        {u.active ? 'Deactivate' : 'Reactivate'}
+                      </Button>
+                    </span>
+                  )}
+                </Td>
+              </Tr>
+            );
+          })}
+        </tbody>
+      </DataTable>
+    </>
+  );
+}

@@ -1,0 +1,21 @@
+import type { Me, ProjectRole, ProjectSummary } from '../api/types';
+
+/**
+ * What the interface offers each user. The server's policy table is the authority;
+ * these only decide which buttons and forms to show, so they mirror it loosely.
+ */
+
+export const isAdmin = (me: Me): boolean => me.globalRole === 'admin';
+
+export const canCreateProject = (me: Me): boolean => isAdmin(me) || me.projectRoles.some((g) => g.role === 'lead');
+
+export const canManageMembers = (me: Me, project: ProjectSummary): boolean =>
+  isAdmin(me) || project.myRole === 'lead';
+
+const LINE_CREATORS: ProjectRole[] = ['geophysicist', 'field_tech', 'lead'];
+export const canCreateLine = (project: ProjectSummary): boolean =>
+  project.myRole !== null && LINE_CREATORS.includes(project.myRole);
+
+/** Clients see projects, not survey data. */
+export const canSeeLines = (me: Me, project: ProjectSummary): boolean =>
+  isAdmin(me) || (project.myRole !== null && project.myRole !== 'client');

@@ -1,0 +1,31 @@
+import { createBrowserRouter } from 'react-router';
+import { AppShell } from './components/AppShell';
+import { AccountsPage } from './routes/AccountsPage';
+import { LinePage } from './routes/LinePage';
+import { NotFoundPage } from './routes/NotFoundPage';
+import { ProjectPage } from './routes/ProjectPage';
+import { ProjectsPage } from './routes/ProjectsPage';
+import { RouteErrorPage } from './routes/RouteErrorPage';
+import { SignInPage } from './routes/SignInPage';
+
+/** Every page of the client. Pages inside the shell require a signed-in user. */
+export const router = createBrowserRouter([
+  { path: '/signin', element: <SignInPage />, errorElement: <RouteErrorPage /> },
+  {
+    element: <AppShell />,
+    errorElement: <RouteErrorPage />,
+    children: [
+      {
+        // A pathless layer so that a page error keeps the top bar and footer around it.
+        errorElement: <RouteErrorPage insideShell />,
+        children: [
+          { index: true, element: <ProjectsPage /> },
+          { path: 'projects/:projectId', element: <ProjectPage /> },
+          { path: 'lines/:lineId', element: <LinePage /> },
+          { path: 'admin/accounts', element: <AccountsPage /> },
+          { path: '*', element: <NotFoundPage /> },
+        ],
+      },
+    ],
+  },
+]);
