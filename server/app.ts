@@ -9,11 +9,7 @@ import { requireCsrfToken } from './auth/csrf';
 import { passport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import { errorHandler, notFoundApi } from './http/errors';
-import { authRouter } from './routes/auth';
-import { healthRouter } from './routes/health';
-import { linesRouter } from './routes/lines';
-import { projectsRouter } from './routes/projects';
-import { usersRouter } from './routes/users';
+import { apiRouters } from './routes';
 
 export interface AppDeps {
   redis: Redis;
@@ -46,7 +42,7 @@ export function createApp({ redis, pgPool, clientDir = path.resolve('dist') }: A
 
   const api = express.Router();
   api.use(requireCsrfToken);
-  api.use(healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter());
+  api.use(...apiRouters(redis));
   api.use(notFoundApi);
   app.use('/api', api);
 

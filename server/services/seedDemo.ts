@@ -6,7 +6,6 @@ import { Project, ProjectMember, SurveyLine, User } from '../entities';
 /** Creates the demo accounts, project, memberships and line when absent. Safe to run again. */
 export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
   let created = 0;
-  const passwordHash = await hashPassword(DEMO_PASSWORD);
   await ds.transaction(async (em) => {
     let project = await em.findOneBy(Project, { name: demoProject.name });
     if (!project) {
@@ -16,6 +15,7 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
     for (const u of demoUsers) {
       let user = await em.findOneBy(User, { email: u.email });
       if (!user) {
+        const passwordHash = await hashPassword(DEMO_PASSWORD);
         user = await em.save(em.create(User, { email: u.email, name: u.name, globalRole: u.globalRole, passwordHash, active: true }));
         created++;
       }

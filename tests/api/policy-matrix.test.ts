@@ -1,0 +1,109 @@
+/**
+ * Every API route × every role, against the permission table in ../shared/API.md
+ * (written out here by hand, not derived from server/policies, so a change to either is caught).
+ * A route without a row here, or without the policy guard as its first handler, fails the test.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { apiRouters } from '../../server/routes';
+import { anonymousAgent, signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
+import { emailOf, PASSWORD, resetWorld, ROLES, type World, type WorldRole } from './support/world';
+
+type Caller = WorldRole | 'anonymous';
+const CALLERS: Caller[] = ['anonymous', ...ROLES];
+const SIGNED_IN: Caller[] = [...ROLES];
+const MEMBERS_A: Caller[] = ['geophysicist', 'field_tech', 'lead', 'client'];
+const STAFF_A: Caller[] = ['geophysicist', 'field_tech', 'lead'];
+
+// "outsider" is a geophysicist of project B only: project A's objects must look absent to them.
+const EXPECTED: Record<string, Caller[]> = {
+  'GET /api/health': CALLERS,
+  'GET /api/auth/csrf': CALLERS,
+  'POST /api/auth/login': CALLERS,
+  'POST /api/auth/logout': SIGNED_IN,
+  'GET /api/auth/me': SIGNED_IN,
+  'GET /api/users': ['admin'],
+  'POST /api/users': ['admin'],
+  'GET /api/users/directory': ['admin', 'lead'],
+  'PATCH /api/users/:userId': ['admin'],
+  'GET /api/projects': SIGNED_IN,
+  'POST /api/projects': ['admin', 'lead'],
+  'GET /api/projects/:projectId': ['admin', ...MEMBERS_A],
+  'POST /api/projects/:projectId/members': ['admin', 'lead'],
+  'DELETE /api/projects/:projectId/members/:userId': ['admin', 'lead'],
+  'POST /api/projects/:projectId/lines': STAFF_A,
+  'GET /api/lines/:lineId': STAFF_A,
+};
+
+interface RouteInfo {
+  key: string;
+  method: string;
+  path: string;
+  guarded: boolean;
+}
+
+function listRoutes(t: TestApp): RouteInfo[] {
+  const out: RouteInfo[] = [];
+  for (const router of apiRouters(t.redis)) {
+    for (const layer of router.stack as { route?: { path: string; methods: Record<string, boolean>; stack: { handle: { policyAction?: string } }[] } }[]) {
+      if (!layer.route) continue;
+      for (const method of Object.keys(layer.route.methods)) {
+        const m = method.toUpperCase();
+        const path = `/api${layer.route.path}`;
+        out.push({ key: `${m} ${path}`, method: m, path, guarded: typeof layer.route.stack[0]?.handle.policyAction === 'string' });
+      }
+    }
+  }
+  return out;
+}
+
+/** Real ids from project A, so a refusal cannot be mistaken for a missing object. */
+function concretePath(path: string, w: World): string {
+  return path
+    .replace(':projectId', w.projectA.id)
+    .replace(':lineId', w.lineA.id)
+    .replace(':userId', w.loner.id);
+}
+
+/** Refusals by the policy layer; anything else (200, 204, 400, 404 member_not_found, 409 …) means the call got through. */
+const isRefusal = (status: number, error: unknown) =>
+  (status === 401 && error === 'not_signed_in') || (status === 403 && error === 'forbidden') || (status === 404 && error === 'not_found');
+
+describe('route × role permission matrix', () => {
+  let t: TestApp;
+  let world: World;
+  const agents = new Map<Caller, Agent>();
+
+  beforeAll(async () => {
+    t = await startTestApp();
+    world = await resetWorld();
+    agents.set('anonymous', await anonymousAgent(t.app));
+    for (const role of ROLES) agents.set(role, await signedInAgent(t.app, emailOf(role), PASSWORD));
+  });
+  afterAll(async () => t?.close());
+
+  it('every API route has a row in the expected table and a policy guard first', () => {
+    const routes = listRoutes(t);
+    expect(routes.map((r) => r.key).sort()).toEqual(Object.keys(EXPECTED).sort());
+    expect(routes.filter((r) => !r.guarded).map((r) => r.key)).toEqual([]);
+  });
+
+  it('each role reaches exactly the routes the table allows', async () => {
+    // Sign-out ends the session, so it runs last for every caller.
+    const routes = listRoutes(t).sort((a, b) => Number(a.key === 'POST /api/auth/logout') - Number(b.key === 'POST /api/auth/logout'));
+    const actual: Record<string, Caller[]> = {};
+    for (const route of routes) {
+      actual[route.key] = [];
+      for (const caller of CALLERS) {
+        const agent = agents.get(caller)!;
+        const path = concretePath(route.path, world);
+        const req = agent[route.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](path).set('X-CSRF-Token', agent.csrf);
+        // Empty bodies: an allowed mutation stops at validation (400) and changes nothing.
+        const res = route.method === 'GET' ? await req : await req.send({});
+        // /api/health answers 503 when a service is down (no worker runs in this suite); anything else must not fail.
+        if (route.key !== 'GET /api/health') expect(res.status, `${caller} ${route.key}`).toBeLessThan(500);
+        if (!isRefusal(res.status, res.body?.error)) actual[route.key].push(caller);
+      }
+    }
+    expect(actual).toEqual(EXPECTED);
+  });
+});

@@ -1,0 +1,50 @@
+import request from 'supertest';
+import type { Express } from 'express';
+import type { Redis } from 'ioredis';
+import type pg from 'pg';
+import { createApp } from '../../../server/app';
+import { createPgPool } from '../../../server/auth/session';
+import { initDataSource, dataSource } from '../../../server/db/dataSource';
+import { createRedis } from '../../../server/queue/connection';
+
+export interface TestApp {
+  app: Express;
+  redis: Redis;
+  pgPool: pg.Pool;
+  close(): Promise<void>;
+}
+
+/** The real app against the test PostgreSQL and Redis that scripts/test.sh started. */
+export async function startTestApp(): Promise<TestApp> {
+  await initDataSource();
+  const redis = createRedis();
+  if (redis.status !== 'ready') await new Promise((resolve) => redis.once('ready', resolve));
+  const pgPool = createPgPool();
+  const app = createApp({ redis, pgPool, clientDir: '/nonexistent' });
+  return {
+    app,
+    redis,
+    pgPool,
+    async close() {
+      await Promise.allSettled([redis.quit(), pgPool.end()]);
+      await dataSource.destroy();
+    },
+  };
+}
+
+export type Agent = ReturnType<typeof request.agent> & { csrf: string };
+
+/** A cookie-keeping client with a CSRF token for its current session. */
+export async function anonymousAgent(app: Express): Promise<Agent> {
+  const agent = request.agent(app) as Agent;
+  agent.csrf = (await agent.get('/api/auth/csrf').expect(200)).body.token;
+  return agent;
+}
+
+/** Signs in and fetches the renewed session's CSRF token. */
+export async function signedInAgent(app: Express, email: string, password: string): Promise<Agent> {
+  const agent = await anonymousAgent(app);
+  await agent.post('/api/auth/login').set('X-CSRF-Token', agent.csrf).send({ email, password }).expect(200);
+  agent.csrf = (await agent.get('/api/auth/csrf').expect(200)).body.token;
+  return agent;
+}

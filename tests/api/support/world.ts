@@ -1,0 +1,47 @@
+import { dataSource } from '../../../server/db/dataSource';
+import { hashPassword } from '../../../server/auth/password';
+import { Project, ProjectMember, SurveyLine, User } from '../../../server/entities';
+import type { ProjectRole } from '../../../shared/schemas/projects';
+
+export const PASSWORD = 'test-password-123';
+
+/** The people of the test world: one per project role on project A, an admin, and an outsider on project B. */
+export const ROLES = ['admin', 'geophysicist', 'field_tech', 'lead', 'client', 'outsider'] as const;
+export type WorldRole = (typeof ROLES)[number];
+
+export interface World {
+  users: Record<WorldRole, User>;
+  projectA: Project;
+  projectB: Project;
+  lineA: SurveyLine;
+  lineB: SurveyLine;
+  /** An active account that belongs to no project. */
+  loner: User;
+}
+
+export const emailOf = (role: WorldRole | 'loner') => `${role}@world.test`;
+
+/** Empties every table and builds the world again; each test file starts from here. */
+export async function resetWorld(): Promise<World> {
+  const tables = await dataSource.query(`SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'migrations'`);
+  await dataSource.query(`TRUNCATE ${tables.map((t: { tablename: string }) => `"${t.tablename}"`).join(', ')} RESTART IDENTITY CASCADE`);
+  const passwordHash = await hashPassword(PASSWORD);
+  const users = {} as Record<WorldRole, User>;
+  const repo = dataSource.getRepository(User);
+  for (const role of ROLES) {
+    users[role] = await repo.save(repo.create({ email: emailOf(role), name: `Test ${role}`, passwordHash, globalRole: role === 'admin' ? 'admin' : null }));
+  }
+  const loner = await repo.save(repo.create({ email: emailOf('loner'), name: 'Test loner', passwordHash, globalRole: null }));
+  const projects = dataSource.getRepository(Project);
+  const projectA = await projects.save(projects.create({ name: 'Project A', site: 'Site A', clientOrganisation: 'Client A' }));
+  const projectB = await projects.save(projects.create({ name: 'Project B', site: 'Site B', clientOrganisation: 'Client B' }));
+  const members = dataSource.getRepository(ProjectMember);
+  for (const role of ['geophysicist', 'field_tech', 'lead', 'client'] as ProjectRole[]) {
+    await members.insert({ projectId: projectA.id, userId: users[role as WorldRole].id, role });
+  }
+  await members.insert({ projectId: projectB.id, userId: users.outsider.id, role: 'geophysicist' });
+  const lines = dataSource.getRepository(SurveyLine);
+  const lineA = await lines.save(lines.create({ projectId: projectA.id, name: 'A-1' }));
+  const lineB = await lines.save(lines.create({ projectId: projectB.id, name: 'B-1' }));
+  return { users, projectA, projectB, lineA, lineB, loner };
+}
