@@ -19,7 +19,7 @@ export function AccountsTable({ users, myId }: { users: User[]; myId: string }) 
           {errorMessage(update.error)}
         </p>
       )}
-      <DataTable caption="Accounts" testId="accounts-table">
+      <DataTable caption="Accounts" testId="accounts-table" minWidth="52rem">
         <thead>
           <tr>
             <Th>Name</Th>
@@ -42,17 +42,17 @@ export function AccountsTable({ users, myId }: { users: User[]; myId: string }) 
                   {u.name}
                   {self && <span className="ml-2 text-sm font-normal text-stone-500">(you)</span>}
                 </Td>
-                <Td className="break-all text-stone-700">{u.email}</Td>
+                <Td className="text-stone-700">{u.email}</Td>
                 <Td>{u.globalRole === 'admin' ? 'Administrator' : 'Standard'}</Td>
                 <Td>{u.active ? 'Active' : <span className="font-semibold text-stone-500">Deactivated</span>}</Td>
                 <Td numeric className="whitespace-nowrap text-stone-600">
                   {formatDate(u.createdAt)}
                 </Td>
-                <Td className="text-right">
+                <Td className="text-right whitespace-nowrap">
                   {self ? (
                     <span className="text-sm text-stone-500">Your own account</span>
                   ) : (
-                    <span className="inline-flex flex-wrap justify-end gap-2">
+                    <span className="inline-flex justify-end gap-2">
                       <Button
                         variant="secondary"
                         size="sm"

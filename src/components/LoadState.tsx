@@ -18,7 +18,7 @@ export function LoadError({ error, what, onRetry }: { error: unknown; what: stri
     detail = 'It may have been removed, or the link may be mistyped.';
   } else if (isApiError(error, 403)) {
     title = `You do not have access to this ${what}.`;
-    detail = 'Ask the project lead to add you if you need it.';
+    detail = 'Your role does not include it. Ask the project lead if you need access.';
   }
   const canRetry = onRetry && !isApiError(error, 404) && !isApiError(error, 403);
   return (

@@ -19,7 +19,7 @@ export function MembersTable({ projectId, members, canManage, myId }: { projectI
           {errorMessage(remove.error)}
         </p>
       )}
-      <DataTable caption="Project members" testId="members-table">
+      <DataTable caption="Project members" testId="members-table" minWidth="34rem">
         <thead>
           <tr>
             <Th>Name</Th>
@@ -39,11 +39,11 @@ export function MembersTable({ projectId, members, canManage, myId }: { projectI
                 {m.name}
                 {m.userId === myId && <span className="ml-2 text-sm font-normal text-stone-500">(you)</span>}
               </Td>
-              <Td className="break-all text-stone-700">{m.email}</Td>
+              <Td className="text-stone-700">{m.email}</Td>
               <Td>{ROLE_LABELS[m.role] ?? m.role}</Td>
               {canManage && (
                 <Td className="text-right whitespace-nowrap">
-                  {confirming === m.userId ? (
+                  {m.userId === myId ? null : confirming === m.userId ? (
                     <span className="inline-flex gap-2">
                       <Button
                         variant="danger"

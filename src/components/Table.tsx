@@ -1,10 +1,14 @@
 import type { ReactNode, TdHTMLAttributes, ThHTMLAttributes } from 'react';
 
-/** A readable table: horizontal rules, light zebra rows, and a scroll box on narrow screens. */
-export function DataTable({ caption, children, testId }: { caption: string; children: ReactNode; testId?: string }) {
+/**
+ * A readable table: horizontal rules, light zebra rows. Below `minWidth` the box scrolls
+ * sideways rather than squeezing every column into a tower of broken words. The box is
+ * `relative` so visually hidden (absolutely positioned) header text stays inside it.
+ */
+export function DataTable({ caption, children, testId, minWidth = '40rem' }: { caption: string; children: ReactNode; testId?: string; minWidth?: string }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
-      <table data-testid={testId} className="w-full border-collapse text-left">
+    <div className="relative overflow-x-auto rounded-lg border border-stone-200 bg-white">
+      <table data-testid={testId} className="w-full border-collapse text-left" style={{ minWidth }}>
         <caption className="sr-only">{caption}</caption>
         {children}
       </table>

@@ -47,7 +47,7 @@ export function ProjectsPage() {
         </EmptyState>
       )}
       {projects.data && projects.data.length > 0 && (
-        <DataTable caption="Projects" testId="projects-table">
+        <DataTable caption="Projects" testId="projects-table" minWidth="48rem">
           <thead>
             <tr>
               <Th>Project</Th>
@@ -71,7 +71,7 @@ export function ProjectsPage() {
                 <Td>
                   <StatusBadge status={p.status} />
                 </Td>
-                <Td className="text-stone-700">{p.myRole ? ROLE_LABELS[p.myRole] : <span className="text-stone-500">Not a member</span>}</Td>
+                <Td className="whitespace-nowrap text-stone-700">{p.myRole ? ROLE_LABELS[p.myRole] : <span className="text-stone-500">Not a member</span>}</Td>
                 <Td numeric className="whitespace-nowrap text-stone-600">
                   {formatDate(p.createdAt)}
                 </Td>

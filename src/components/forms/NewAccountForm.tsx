@@ -1,4 +1,5 @@
 import { useRef, useState, type FormEvent } from 'react';
+import { isApiError } from '../../api/errors';
 import { useCreateUser } from '../../api/users';
 import type { User } from '../../api/types';
 import { formProblems, hasErrors, mergeFieldErrors, type FieldErrors } from '../../lib/formErrors';
@@ -19,6 +20,8 @@ export function NewAccountForm({ onCreated }: { onCreated: (user: User) => void 
   const formRef = useRef<HTMLFormElement>(null);
 
   const problems = formProblems(create.error, FIELDS);
+  // A conflict on this form can only be the e-mail address; point at that input too.
+  if (isApiError(create.error, 409) && !problems.fields.email) problems.fields.email = 'Choose another e-mail address; this one is already in use.';
   const errors = mergeFieldErrors(problems.fields, checks);
 
   function onSubmit(e: FormEvent) {
