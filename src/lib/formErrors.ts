@@ -19,7 +19,7 @@ export function formProblems(error: unknown, fieldNames: readonly string[]): For
   if (error instanceof ApiError) {
     for (const issue of error.issues) {
       const name = issueField(issue);
-      if (fieldNames.includes(name) && !fields[name]) fields[name] = issue.message;
+      if (fieldNames.includes(name)) fields[name] = fields[name] ? `${fields[name]}; ${issue.message}` : issue.message;
       else other.push(name ? `${name}: ${issue.message}` : issue.message);
     }
   }
