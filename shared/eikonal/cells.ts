@@ -1,0 +1,84 @@
+/**
+ * Slowness of each grid cell, and which cells straddle a velocity contrast.
+ *
+ * Node velocities are point samples. Inside smooth ground the solver keeps the node's own
+ * slowness (so the second-order stencil stays second order); a cell whose corner slownesses
+ * differ by more than CONTRAST_RATIO holds an interface, and there the cell value below is
+ * used instead, while an edge between two cells is travelled at the faster of the two (the
+ * head-wave path along a refractor). The rule for contrast cells was chosen by measurement
+ * (docs/engine.md, "Interfaces"); see InterfaceRule for the candidates.
+ */
+import type { Grid } from '../grid';
+
+/**
+ * How a contrast cell's slowness is taken from its active corners:
+ * - 'node'    no cell treatment at all (classic node-sampled scheme, for comparison)
+ * - 'mean'    arithmetic mean of corner slownesses (= harmonic mean of velocities)
+ * - 'fastest' smallest corner slowness
+ * - 'slowest' largest corner slowness
+ * - 'upper'   mean slowness of the cell's upper row (matches a rasteriser that gives a node
+ *             lying exactly on an interface to the layer below it)
+ */
+export type InterfaceRule = 'node' | 'mean' | 'fastest' | 'slowest' | 'upper';
+
+export const DEFAULT_INTERFACE_RULE: InterfaceRule = 'upper';
+/** Corner slownesses differing by more than this ratio mark a contrast cell. */
+export const CONTRAST_RATIO = 1.25;
+
+export interface CellSlowness {
+  /** (nx−1)·(nz−1) values, index cz·(nx−1)+cx; Infinity for cells with no ground corner. */
+  value: Float64Array;
+  /** 1 where the cell straddles a contrast (value follows the rule), else 0 (value = mean). */
+  contrast: Uint8Array;
+}
+
+export function cellSlowness(
+  grid: Grid,
+  slowness: Float64Array,
+  active: Uint8Array,
+  rule: InterfaceRule = DEFAULT_INTERFACE_RULE,
+  ratio: number = CONTRAST_RATIO,
+  out?: CellSlowness,
+): CellSlowness {
+  const { nx, nz } = grid;
+  const ncx = nx - 1;
+  const count = ncx * (nz - 1);
+  const value = out && out.value.length === count ? out.value : new Float64Array(count);
+  const contrast = out && out.contrast.length === count ? out.contrast : new Uint8Array(count);
+  for (let cz = 0; cz < nz - 1; cz++) {
+    for (let cx = 0; cx < ncx; cx++) {
+      const c = cz * ncx + cx;
+      const i = cz * nx + cx;
+      let lo = Infinity;
+      let hi = 0;
+      let sum = 0;
+      let cnt = 0;
+      let upSum = 0;
+      let upCnt = 0;
+      for (let k = 0; k < 4; k++) {
+        const j = i + (k & 1) + (k >> 1) * nx;
+        if (!active[j]) continue;
+        const s = slowness[j];
+        if (s < lo) lo = s;
+        if (s > hi) hi = s;
+        sum += s;
+        cnt++;
+        if (k < 2) (upSum += s), upCnt++;
+      }
+      if (cnt === 0) {
+        value[c] = Infinity;
+        contrast[c] = 0;
+        continue;
+      }
+      const mean = sum / cnt;
+      const isContrast = rule !== 'node' && hi > lo * ratio;
+      contrast[c] = isContrast ? 1 : 0;
+      if (!isContrast) value[c] = mean;
+      else if (rule === 'fastest') value[c] = lo;
+      else if (rule === 'slowest') value[c] = hi;
+      else if (rule === 'upper') value[c] = upCnt > 0 ? upSum / upCnt : mean;
+      else value[c] = mean;
+    }
+  }
+  return { value, contrast };
+}

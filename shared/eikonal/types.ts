@@ -1,0 +1,13 @@
+/** A position in the model plane: x along the line (m), z elevation (m, up positive). */
+export interface Point {
+  x: number;
+  z: number;
+}
+
+/** Options of the public solve. order 2 (default) is the mixed second-order scheme, 1 the first-order upwind one. */
+export interface SolveOptions {
+  order?: 1 | 2;
+}
+
+/** Node velocities as either precision; solves always run in Float64. */
+export type VelocityField = Float32Array | Float64Array;
