@@ -1,4 +1,4 @@
-import { NavLink, Outlet, useNavigate } from 'react-router';
+import { NavLink, Outlet, useLocation, useNavigate } from 'react-router';
 import { useSignOut } from '../api/auth';
 import type { Me } from '../api/types';
 import { isAdmin } from '../lib/permissions';
@@ -15,6 +15,9 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
 
 function TopBar({ me }: { me: Me }) {
   const navigate = useNavigate();
+  const { pathname } = useLocation();
+  // Project and line pages live under "Projects" even though their addresses do not start with "/".
+  const inProjects = pathname === '/' || pathname.startsWith('/projects/') || pathname.startsWith('/lines/');
   const signOut = useSignOut(() => navigate('/signin', { replace: true }));
   return (
     <header className="border-b border-stone-200 bg-white">
@@ -23,7 +26,7 @@ function TopBar({ me }: { me: Me }) {
           Timefield
         </NavLink>
         <nav aria-label="Main" className="order-last flex w-full gap-1 sm:order-none sm:w-auto">
-          <NavLink to="/" end className={navClass}>
+          <NavLink to="/" end className={() => navClass({ isActive: inProjects })}>
             Projects
           </NavLink>
           {isAdmin(me) && (
