@@ -28,4 +28,8 @@ log "type-checking"
 npx tsc --noEmit -p tsconfig.json
 log "building the client (the end-to-end suite serves it)"
 npx vite build --logLevel error
-npx vitest run "$@"
+status=0
+npx vitest run --reporter=default --reporter=json --outputFile.json="$TF_DATA/vitest.json" "$@" || status=$?
+# One plain closing line that any CI reader understands.
+node -e 'const r=require(process.argv[1]);console.log(`tests: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests+r.numTodoTests} skipped`)' "$TF_DATA/vitest.json" || true
+exit $status
