@@ -82,3 +82,4 @@ export function cellSlowness(
   }
   return { value, contrast };
 }
+

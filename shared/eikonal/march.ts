@@ -1,0 +1,218 @@
+/**
+ * The fast-marching loop itself, written flat for speed (no closures, no allocation, index maths
+ * inline). fmm.ts prepares the arrays; the stencil algebra is that of stencil.ts, repeated here
+ * inline because a call per candidate costs more than the arithmetic.
+ *
+ * Each accepted node p updates its four neighbours q with the candidates that involve p:
+ * the one-axis update towards p, and the two-axis updates with each accepted neighbour b of q
+ * on the other axis (the cell q–p–b). q keeps the least causal candidate (t ≥ T_p, t ≥ T_b).
+ */
+import type { IndexedMinHeap } from './heap';
+
+export interface MarchState {
+  nx: number;
+  nz: number;
+  dx: number;
+  dz: number;
+  x0: number;
+  z0: number;
+  /** Source position (m). */
+  xs: number;
+  zs: number;
+  /** Slowness at the source (s/m), the factored U of a node sitting exactly on it. */
+  s0: number;
+  factored: boolean;
+  second: boolean;
+  /** Slowness ratio above which three nodes are not one smooth medium (no second order across). */
+  ratio: number;
+  /** Whether any cell is a contrast cell (lets the loop skip the edge look-ups). */
+  anyContrast: boolean;
+  T: Float64Array;
+  /** T/r (factored) or T (plain) of accepted nodes. */
+  U: Float64Array;
+  S: Float64Array;
+  state: Uint8Array;
+  cellS: Float64Array;
+  cellC: Uint8Array;
+  heap: IndexedMinHeap;
+}
+
+export const FAR = 0;
+export const TRIAL = 1;
+export const DONE = 2;
+export const AIR = 3;
+
+export function march(m: MarchState): void {
+  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, T, U, S, state, cellS, cellC, heap } = m;
+  const ncx = nx - 1;
+  const halfDx = factored ? 0.5 * dx * (1 + 1e-9) : -1;
+  const halfDz = factored ? 0.5 * dz * (1 + 1e-9) : -1;
+  const invDx = 1 / dx;
+  const invDz = 1 / dz;
+
+  while (heap.size > 0) {
+    const p = heap.pop();
+    state[p] = DONE;
+    const pix = p % nx;
+    const piz = (p - pix) / nx;
+    const Tp = T[p];
+    if (factored) {
+      const ox = x0 + pix * dx - xs;
+      const oz = z0 - piz * dz - zs;
+      const r = Math.sqrt(ox * ox + oz * oz);
+      U[p] = r > 0 ? Tp / r : s0;
+    } else {
+      U[p] = Tp;
+    }
+    const Up = U[p];
+
+    for (let dir = 0; dir < 4; dir++) {
+      const alongX = dir < 2;
+      const sgn = (dir & 1) === 0 ? -1 : 1; // q = p + sgn along the axis
+      let qix = pix;
+      let qiz = piz;
+      if (alongX) qix += sgn;
+      else qiz += sgn;
+      if (qix < 0 || qix >= nx || qiz < 0 || qiz >= nz) continue;
+      const step = alongX ? sgn : sgn * nx; // index offset p → q
+      const q = p + step;
+      const st = state[q];
+      if (st >= DONE) continue;
+
+      const xq = x0 + qix * dx;
+      const zq = z0 - qiz * dz;
+      let rq = 1;
+      let ex = 0;
+      let ez = 0;
+      if (factored) {
+        const ox = xq - xs;
+        const oz = zq - zs;
+        const r2 = ox * ox + oz * oz;
+        rq = Math.sqrt(r2);
+        const inv2 = 1 / r2;
+        ex = ox * inv2;
+        ez = oz * inv2;
+      }
+      const sq = S[q];
+
+      // Axis through p: signed spacing q − p (z is elevation, so a deeper q has negative spacing).
+      const iP = alongX ? sgn * invDx : -sgn * invDz; // 1 / spacing
+      const eP = alongX ? ex : ez;
+      let aP = eP + iP;
+      let bP = rq * Up * iP;
+      if (second) {
+        const b2ix = alongX ? pix - sgn : pix;
+        const b2iz = alongX ? piz : piz - sgn;
+        if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
+          const p2 = p - step;
+          if (state[p2] === DONE && T[p2] <= Tp) {
+            const s1 = S[p];
+            const s2 = S[p2];
+            let lo = sq < s1 ? sq : s1;
+            let hi = sq < s1 ? s1 : sq;
+            if (s2 < lo) lo = s2;
+            if (s2 > hi) hi = s2;
+            if (hi <= lo * ratio) {
+              aP = eP + 1.5 * iP;
+              bP = rq * (2 * Up - 0.5 * U[p2]) * iP;
+            }
+          }
+        }
+      }
+
+      // One-axis candidate. Edge slowness: the faster side when a contrast cell borders the edge.
+      let sEdge = sq;
+      if (anyContrast) {
+        if (alongX) {
+          const cx = qix < pix ? qix : pix;
+          const cUp = qiz > 0 ? (qiz - 1) * ncx + cx : -1;
+          const cDn = qiz < nz - 1 ? qiz * ncx + cx : -1;
+          if ((cUp >= 0 && cellC[cUp] !== 0) || (cDn >= 0 && cellC[cDn] !== 0)) {
+            const a = cUp >= 0 ? cellS[cUp] : Infinity;
+            const b = cDn >= 0 ? cellS[cDn] : Infinity;
+            sEdge = a < b ? a : b;
+          }
+        } else {
+          const cz = qiz < piz ? qiz : piz;
+          const cL = qix > 0 ? cz * ncx + qix - 1 : -1;
+          const cR = qix < nx - 1 ? cz * ncx + qix : -1;
+          if ((cL >= 0 && cellC[cL] !== 0) || (cR >= 0 && cellC[cR] !== 0)) {
+            const a = cL >= 0 ? cellS[cL] : Infinity;
+            const b = cR >= 0 ? cellS[cR] : Infinity;
+            sEdge = a < b ? a : b;
+          }
+        }
+      }
+      let best: number;
+      // Within half a cell of the grid line through the source there is no upwind neighbour across
+      // that line, so the missing axis keeps the factored source term with ∂τ = 0 (exact in uniform
+      // ground). Elsewhere, and along refractor edges, the plain one-axis update (∂T = 0 across).
+      const eO = alongX ? ez : ex;
+      const nearAxis = alongX ? Math.abs(zq - zs) <= halfDz : Math.abs(xq - xs) <= halfDx;
+      if (nearAxis && sEdge === sq) {
+        const a = aP * aP + eO * eO;
+        const b = aP * bP;
+        const c = bP * bP - sq * sq;
+        const disc = b * b - a * c;
+        best = disc >= 0 ? (b + Math.sqrt(disc)) / a : NaN;
+      } else {
+        best = aP > 0 ? (bP + sEdge) / aP : (bP - sEdge) / aP;
+      }
+      if (!(best >= Tp)) best = Tp + sEdge * (alongX ? dx : dz);
+
+      // Two-axis candidates: p with each accepted neighbour b of q on the other axis.
+      for (let side = -1; side <= 1; side += 2) {
+        let bix = qix;
+        let biz = qiz;
+        if (alongX) biz += side;
+        else bix += side;
+        if (bix < 0 || bix >= nx || biz < 0 || biz >= nz) continue;
+        const bStep = alongX ? side * nx : side;
+        const b = q + bStep;
+        if (state[b] !== DONE) continue;
+        const Tb = T[b];
+        const Ub = U[b];
+        const iB = alongX ? side * invDz : -side * invDx;
+        const eB = alongX ? ez : ex;
+        let aB = eB + iB;
+        let bB = rq * Ub * iB;
+        if (second) {
+          const b2ix = alongX ? bix : bix + side;
+          const b2iz = alongX ? biz + side : biz;
+          if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
+            const b2 = b + bStep;
+            if (state[b2] === DONE && T[b2] <= Tb) {
+              const s1 = S[b];
+              const s2 = S[b2];
+              let lo = sq < s1 ? sq : s1;
+              let hi = sq < s1 ? s1 : sq;
+              if (s2 < lo) lo = s2;
+              if (s2 > hi) hi = s2;
+              if (hi <= lo * ratio) {
+                aB = eB + 1.5 * iB;
+                bB = rq * (2 * Ub - 0.5 * U[b2]) * iB;
+              }
+            }
+          }
+        }
+        const cell = alongX
+          ? (side < 0 ? biz : qiz) * ncx + (qix < pix ? qix : pix)
+          : (qiz < piz ? qiz : piz) * ncx + (side < 0 ? bix : qix);
+        const sc = cellC[cell] !== 0 ? cellS[cell] : sq;
+        const a = aP * aP + aB * aB;
+        const bb = aP * bP + aB * bB;
+        const c = bP * bP + bB * bB - sc * sc;
+        const disc = bb * bb - a * c;
+        if (disc < 0) continue;
+        const t = (bb + Math.sqrt(disc)) / a;
+        if (t < best && t >= Tp && t >= Tb) best = t;
+      }
+
+      if (best < T[q]) {
+        T[q] = best;
+        heap.pushOrDecrease(q, best);
+        if (st === FAR) state[q] = TRIAL;
+      }
+    }
+  }
+}
