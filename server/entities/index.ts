@@ -1,8 +1,11 @@
 import { AuditEntry } from './AuditEntry';
+import { PickSet } from './PickSet';
+import { PickSetRevision } from './PickSetRevision';
+import { Station } from './Station';
 import { Project } from './Project';
 import { ProjectMember } from './ProjectMember';
 import { SurveyLine } from './SurveyLine';
 import { User } from './User';
 
-export { AuditEntry, Project, ProjectMember, SurveyLine, User };
-export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry];
+export { AuditEntry, PickSet, PickSetRevision, Project, ProjectMember, Station, SurveyLine, User };
+export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry, Station, PickSet, PickSetRevision];

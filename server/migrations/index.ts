@@ -1,4 +1,5 @@
 import { Foundation1764633600000 } from './1764633600000-Foundation';
+import { FieldData1764640000000 } from './1764640000000-FieldData';
 
 /** Every migration, oldest first. Add new ones at the end. */
-export const migrations = [Foundation1764633600000];
+export const migrations = [Foundation1764633600000, FieldData1764640000000];

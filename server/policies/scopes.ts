@@ -21,3 +21,10 @@ export const projectOfLine: ProjectScope = async (req) => {
   const line = await dataSource.getRepository(SurveyLine).findOne({ where: { id }, select: { projectId: true } });
   return line?.projectId ?? null;
 };
+
+export const projectOfPickSet: ProjectScope = async (req) => {
+  const id = req.params.pickSetId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM pick_sets s JOIN survey_lines l ON l.id = s.line_id WHERE s.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};

@@ -34,6 +34,11 @@ export const policyTable = {
   'project.lines.create': { roles: STAFF },
 
   'line.read': { roles: STAFF },
+  'line.stations.write': { roles: ['geophysicist', 'field_tech'] },
+  'line.picksets.create': { roles: ['geophysicist', 'field_tech'] },
+
+  'pickset.read': { roles: STAFF },
+  'pickset.revise': { roles: ['geophysicist'] },
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof policyTable;

@@ -1,17 +1,73 @@
 import { Router } from 'express';
+import { MAX_PICK_FILE_BYTES } from '../../shared/limits';
+import { stationTableBody } from '../../shared/schemas/stations';
+import { checkStationTable, parseStationCsv, type StationIssue } from '../../shared/stations';
 import { dataSource } from '../db/dataSource';
 import { SurveyLine } from '../entities';
+import { HttpError } from '../http/errors';
+import { isMultipart, singleFile } from '../http/upload';
 import { authorize } from '../policies/authorize';
 import { projectOfLine } from '../policies/scopes';
 import { presentLine } from '../presenters/project';
+import { importPicks } from '../services/importPicks';
+import { listPickSetSummaries } from '../services/lineSummary';
+import { listStations, replaceStations } from '../services/stations';
+
+const STATION_FILE_BYTES = 1024 * 1024;
+
+const invalidStations = (issues: StationIssue[]) => {
+  const first = issues[0];
+  const where = first.line ? `line ${first.line}` : first.row ? `row ${first.row}` : '';
+  return new HttpError(
+    422,
+    'invalid_stations',
+    `The station table was not saved: ${[where, first.column].filter(Boolean).join(', ')}${where || first.column ? ': ' : ''}${first.message}.`,
+    issues.map((i) => ({ row: i.row || undefined, line: i.line, column: i.column ?? undefined, message: i.message })),
+  );
+};
 
 export function linesRouter(): Router {
   const r = Router();
 
   r.get('/lines/:lineId', authorize('line.read', projectOfLine), async (req, res) => {
     const line = await dataSource.getRepository(SurveyLine).findOneByOrFail({ id: req.params.lineId as string });
-    // Stations, pick sets, models and runs arrive with their own entities.
-    res.json({ ...presentLine(line), stations: [], pickSets: [], models: [], runs: [] });
+    const [stations, pickSets] = await Promise.all([listStations(line.id), listPickSetSummaries(line.id)]);
+    // Models and runs arrive with their own entities.
+    res.json({ ...presentLine(line), myRole: req.access!.role, stations, pickSets, models: [], runs: [] });
+  });
+
+  // JSON array of { station, x, z }, or a CSV file in the multipart field "file".
+  r.put('/lines/:lineId/stations', authorize('line.stations.write', projectOfLine), async (req, res, next) => {
+    if (isMultipart(req.get('content-type'))) return singleFile(STATION_FILE_BYTES)(req, res, next);
+    next();
+  }, async (req, res) => {
+    let stations;
+    if (req.file) {
+      const parsed = parseStationCsv(req.file.buffer.toString('utf8'));
+      if (!parsed.ok) throw invalidStations(parsed.issues);
+      stations = parsed.stations;
+    } else {
+      const parsed = stationTableBody.safeParse(req.body);
+      if (!parsed.success) {
+        throw invalidStations(parsed.error.issues.map((i) => ({
+          row: typeof i.path[0] === 'number' ? i.path[0] + 1 : 0,
+          column: (['station', 'x', 'z'].includes(String(i.path[1])) ? i.path[1] : null) as StationIssue['column'],
+          message: i.message,
+        })));
+      }
+      const issues = checkStationTable(parsed.data);
+      if (issues.length) throw invalidStations(issues);
+      stations = parsed.data;
+    }
+    await replaceStations(req.user!.id, req.access!.projectId, req.params.lineId as string, stations);
+    res.json({ stations: await listStations(req.params.lineId as string) });
+  });
+
+  r.post('/lines/:lineId/picksets', authorize('line.picksets.create', projectOfLine), singleFile(MAX_PICK_FILE_BYTES), async (req, res) => {
+    if (!req.file) throw new HttpError(400, 'file_missing', 'Choose a pick file to upload (form field "file").');
+    const name = req.file.originalname?.slice(0, 200) || 'picks.csv';
+    const created = await importPicks(req.user!.id, req.access!.projectId, req.params.lineId as string, name, req.file.buffer);
+    res.status(201).json(created);
   });
 
   return r;

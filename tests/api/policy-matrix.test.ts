@@ -32,6 +32,11 @@ const EXPECTED: Record<string, Caller[]> = {
   'DELETE /api/projects/:projectId/members/:userId': ['admin', 'lead'],
   'POST /api/projects/:projectId/lines': STAFF_A,
   'GET /api/lines/:lineId': STAFF_A,
+  'PUT /api/lines/:lineId/stations': ['geophysicist', 'field_tech'],
+  'POST /api/lines/:lineId/picksets': ['geophysicist', 'field_tech'],
+  'GET /api/picksets/:pickSetId': STAFF_A,
+  'POST /api/picksets/:pickSetId/revisions': ['geophysicist'],
+  'GET /api/picksets/:pickSetId/file': STAFF_A,
 };
 
 interface RouteInfo {
@@ -61,6 +66,7 @@ function concretePath(path: string, w: World): string {
   return path
     .replace(':projectId', w.projectA.id)
     .replace(':lineId', w.lineA.id)
+    .replace(':pickSetId', w.pickSetA)
     .replace(':userId', w.loner.id);
 }
 
@@ -96,7 +102,7 @@ describe('route × role permission matrix', () => {
       for (const caller of CALLERS) {
         const agent = agents.get(caller)!;
         const path = concretePath(route.path, world);
-        const req = agent[route.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](path).set('X-CSRF-Token', agent.csrf);
+        const req = agent[route.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](path).set('X-CSRF-Token', agent.csrf);
         // Empty bodies: an allowed mutation stops at validation (400) and changes nothing.
         const res = route.method === 'GET' ? await req : await req.send({});
         // /api/health answers 503 when a service is down (no worker runs in this suite); anything else must not fail.

@@ -2,6 +2,7 @@ import { dataSource } from '../../../server/db/dataSource';
 import { hashPassword } from '../../../server/auth/password';
 import { Project, ProjectMember, SurveyLine, User } from '../../../server/entities';
 import type { ProjectRole } from '../../../shared/schemas/projects';
+import { importPicks } from '../../../server/services/importPicks';
 
 export const PASSWORD = 'test-password-123';
 
@@ -15,6 +16,8 @@ export interface World {
   projectB: Project;
   lineA: SurveyLine;
   lineB: SurveyLine;
+  /** A small pick set on line A: two end-to-end shots over 600 m/s ground. */
+  pickSetA: string;
   /** An active account that belongs to no project. */
   loner: User;
 }
@@ -43,5 +46,13 @@ export async function resetWorld(): Promise<World> {
   const lines = dataSource.getRepository(SurveyLine);
   const lineA = await lines.save(lines.create({ projectId: projectA.id, name: 'A-1' }));
   const lineB = await lines.save(lines.create({ projectId: projectB.id, name: 'B-1' }));
-  return { users, projectA, projectB, lineA, lineB, loner };
+  const { id: pickSetA } = await importPicks(users.field_tech.id, projectA.id, lineA.id, 'world.picks.csv', Buffer.from(WORLD_PICKS));
+  return { users, projectA, projectB, lineA, lineB, pickSetA, loner };
 }
+
+/** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */
+export const WORLD_PICKS = [
+  'shot_id,source_x,source_z,receiver_x,receiver_z,time_ms,sigma_ms',
+  ...[0, 6, 12, 18, 24].map((x) => `F,0,,${x},,${((x / 600) * 1000).toFixed(3)},0.5`),
+  ...[0, 6, 12, 18, 24].map((x) => `R,24,,${x},,${(((24 - x) / 600) * 1000).toFixed(3)},0.5`),
+].join('\n');
