@@ -22,8 +22,9 @@ describe('parsePickText: good files', () => {
       { shotId: 'A02', sourceX: 60, sourceZ: null, picks: 25 },
       { shotId: 'A03', sourceX: 120, sourceZ: null, picks: 25 },
     ]);
-    // line 5 of the file: A01,0.0,,5.0,,6.6,0.5
-    expect(r.picks[1]).toEqual({ line: 5, shotId: 'A01', sourceX: 0, sourceZ: null, receiverX: 5, receiverZ: null, time: 0.0066, sigma: 0.0005 });
+    // line 5: A01,0.0,,0.0,,0.0,0.2 (the pick at the source, time 0); line 6: A01,0.0,,5.0,,8.3,0.5
+    expect(r.picks[0]).toEqual({ line: 5, shotId: 'A01', sourceX: 0, sourceZ: null, receiverX: 0, receiverZ: null, time: 0, sigma: 0.0002 });
+    expect(r.picks[1]).toEqual({ line: 6, shotId: 'A01', sourceX: 0, sourceZ: null, receiverX: 5, receiverZ: null, time: 0.0083, sigma: 0.0005 });
     const empty = r.picks.find((p) => p.shotId === 'A02' && p.receiverX === 100)!;
     expect(empty.sigma).toBe(0.001);
   });
