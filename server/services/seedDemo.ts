@@ -1,7 +1,13 @@
+import { readFileSync } from 'node:fs';
 import type { DataSource } from 'typeorm';
+import { parseStationCsv } from '../../shared/stations';
 import { demoLine, demoProject, demoUsers, DEMO_PASSWORD } from '../../fixtures/demo/scenario';
 import { hashPassword } from '../auth/password';
-import { Project, ProjectMember, SurveyLine, User } from '../entities';
+import { PickSet, Project, ProjectMember, Station, SurveyLine, User } from '../entities';
+import { importPicks } from './importPicks';
+import { replaceStations } from './stations';
+
+const DEMO_FILES = 'fixtures/demo';
 
 /** Creates the demo accounts, project, memberships and line when absent. Safe to run again. */
 export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
@@ -29,5 +35,25 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
       created++;
     }
   });
+  created += await seedDemoFieldData(ds);
   return { created };
+}
+
+/** Stations and the pick file of the demo line (made by scripts/demo/generate-tq-l1.ts), when the line has none. */
+async function seedDemoFieldData(ds: DataSource): Promise<number> {
+  const project = await ds.getRepository(Project).findOneByOrFail({ name: demoProject.name });
+  const line = await ds.getRepository(SurveyLine).findOneByOrFail({ projectId: project.id, name: demoLine.name });
+  const tech = await ds.getRepository(User).findOneByOrFail({ email: 'tech@timefield.test' });
+  let created = 0;
+  if (!(await ds.getRepository(Station).existsBy({ lineId: line.id }))) {
+    const parsed = parseStationCsv(readFileSync(`${DEMO_FILES}/tq-l1.stations.csv`, 'utf8'));
+    if (!parsed.ok) throw new Error(`demo stations are invalid: ${JSON.stringify(parsed.issues)}`);
+    await replaceStations(tech.id, project.id, line.id, parsed.stations);
+    created += parsed.stations.length;
+  }
+  if (!(await ds.getRepository(PickSet).existsBy({ lineId: line.id }))) {
+    const { picks } = await importPicks(tech.id, project.id, line.id, 'tq-l1.picks.csv', readFileSync(`${DEMO_FILES}/tq-l1.picks.csv`));
+    created += picks;
+  }
+  return created;
 }
