@@ -41,6 +41,9 @@ export class TravelTimeSolver {
   private slow: Float64Array;
   private u: Float64Array;
   private state: Uint8Array;
+  private safe: Float64Array;
+  private provisional: Float64Array;
+  private hasTwo: Uint8Array;
   private heap: IndexedMinHeap;
   private cells: CellSlowness | undefined;
 
@@ -50,6 +53,9 @@ export class TravelTimeSolver {
     this.slow = new Float64Array(n);
     this.u = new Float64Array(n);
     this.state = new Uint8Array(n);
+    this.safe = new Float64Array(n);
+    this.provisional = new Float64Array(n);
+    this.hasTwo = new Uint8Array(n);
     this.heap = new IndexedMinHeap(n);
   }
 
@@ -71,6 +77,9 @@ export class TravelTimeSolver {
       state[i] = active[i] ? FAR : AIR;
     }
     T.fill(Infinity);
+    this.safe.fill(Infinity);
+    this.provisional.fill(Infinity);
+    this.hasTwo.fill(0);
     this.cells = cellSlowness(grid, S, active, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, this.cells);
     const cellS = this.cells.value;
     const cellC = this.cells.contrast;
@@ -79,10 +88,11 @@ export class TravelTimeSolver {
 
     const xs = source.x;
     const zs = source.z;
-    const start = startTimes(grid, S, active, source);
+    const start = startTimes(grid, S, active, source, ratio);
     for (let k = 0; k < start.nodes.length; k++) {
       const i = start.nodes[k];
       T[i] = start.times[k];
+      this.safe[i] = T[i];
       heap.pushOrDecrease(i, T[i]);
       state[i] = TRIAL;
     }
@@ -91,11 +101,17 @@ export class TravelTimeSolver {
     march({
       nx, nz, dx, dz, x0, z0, xs, zs,
       s0: start.slowness,
+      vs: 1 / start.slowness,
+      gx: start.gradX,
+      gz: start.gradZ,
       factored,
       second: order === 2,
       ratio,
       anyContrast,
       T, U, S, state, cellS, cellC, heap,
+      safe: this.safe,
+      provisional: this.provisional,
+      hasTwo: this.hasTwo,
     });
     return T;
   }

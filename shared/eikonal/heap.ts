@@ -54,6 +54,40 @@ export class IndexedMinHeap {
     pos[node] = k;
   }
 
+  /** Set a node's key up or down (inserting it when absent). */
+  update(node: number, key: number): void {
+    const k = this.pos[node];
+    if (k < 0 || key <= this.keys[k]) {
+      this.pushOrDecrease(node, key);
+      return;
+    }
+    // Raise: sift down from slot k.
+    const keys = this.keys;
+    const nodes = this.nodes;
+    const pos = this.pos;
+    const n = this.size;
+    let j = k;
+    for (;;) {
+      let child = 2 * j + 1;
+      if (child >= n) break;
+      let ck = keys[child];
+      const right = child + 1;
+      if (right < n && keys[right] < ck) {
+        child = right;
+        ck = keys[right];
+      }
+      if (ck >= key) break;
+      keys[j] = ck;
+      const cn = nodes[child];
+      nodes[j] = cn;
+      pos[cn] = j;
+      j = child;
+    }
+    keys[j] = key;
+    nodes[j] = node;
+    pos[node] = j;
+  }
+
   /** Remove and return the node with the smallest key (heap must be non-empty). */
   pop(): number {
     const keys = this.keys;

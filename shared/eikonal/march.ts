@@ -8,6 +8,7 @@
  * on the other axis (the cell q–p–b). q keeps the least causal candidate (t ≥ T_p, t ≥ T_b).
  */
 import type { IndexedMinHeap } from './heap';
+import { referenceLogSlope } from './reference';
 
 export interface MarchState {
   nx: number;
@@ -22,6 +23,10 @@ export interface MarchState {
   /** Slowness at the source (s/m), the factored U of a node sitting exactly on it. */
   s0: number;
   factored: boolean;
+  /** Velocity (m/s) and its gradient (1/s, x and elevation) at the source, for the near-axis reference. */
+  vs: number;
+  gx: number;
+  gz: number;
   second: boolean;
   /** Slowness ratio above which three nodes are not one smooth medium (no second order across). */
   ratio: number;
@@ -35,6 +40,12 @@ export interface MarchState {
   cellS: Float64Array;
   cellC: Uint8Array;
   heap: IndexedMinHeap;
+  /** Least safe candidate (two-axis or plain one-axis) per node; Infinity to start. */
+  safe: Float64Array;
+  /** Least provisional near-axis candidate per node; Infinity to start. */
+  provisional: Float64Array;
+  /** 1 once a node has had a causal two-axis candidate. */
+  hasTwo: Uint8Array;
 }
 
 export const FAR = 0;
@@ -43,10 +54,10 @@ export const DONE = 2;
 export const AIR = 3;
 
 export function march(m: MarchState): void {
-  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, T, U, S, state, cellS, cellC, heap } = m;
+  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, T, U, S, state, cellS, cellC, heap, safe, provisional, hasTwo, vs, gx, gz } = m;
+  const nearAxisOn = factored;
+  const bendPerM = Math.sqrt(gx * gx + gz * gz) / vs;
   const ncx = nx - 1;
-  const halfDx = factored ? 0.5 * dx * (1 + 1e-9) : -1;
-  const halfDz = factored ? 0.5 * dz * (1 + 1e-9) : -1;
   const invDx = 1 / dx;
   const invDz = 1 / dz;
 
@@ -143,22 +154,35 @@ export function march(m: MarchState): void {
           }
         }
       }
-      let best: number;
-      // Within half a cell of the grid line through the source there is no upwind neighbour across
-      // that line, so the missing axis keeps the factored source term with ∂τ = 0 (exact in uniform
-      // ground). Elsewhere, and along refractor edges, the plain one-axis update (∂T = 0 across).
-      const eO = alongX ? ez : ex;
-      const nearAxis = alongX ? Math.abs(zq - zs) <= halfDz : Math.abs(xq - xs) <= halfDx;
-      if (nearAxis && sEdge === sq) {
-        const a = aP * aP + eO * eO;
-        const b = aP * bP;
-        const c = bP * bP - sq * sq;
-        const disc = b * b - a * c;
-        best = disc >= 0 ? (b + Math.sqrt(disc)) / a : NaN;
-      } else {
-        best = aP > 0 ? (bP + sEdge) / aP : (bP - sEdge) / aP;
-      }
+      // Plain one-axis update (∂T = 0 across): never undershoots; along a refractor edge it is the
+      // head wave's own update.
+      let best = aP > 0 ? (bP + sEdge) / aP : (bP - sEdge) / aP;
       if (!(best >= Tp)) best = Tp + sEdge * (alongX ? dx : dz);
+      // Within half a cell of the grid line through the source there is no upwind neighbour across
+      // that line, so a provisional one-axis update keeps the factored source term with ∂τ = 0
+      // across (exact in uniform ground). It holds only until a two-axis candidate arrives: in
+      // varying ground τ changes across the line and the guess could undershoot.
+      let tau = Infinity;
+      // Cheap pre-check: the reference axis strays from the straight source line by at most about
+      // r²·|G|/(2v_s) (the sagitta of its rays), so farther nodes skip the logarithm.
+      const oAcross = alongX ? zq - zs : xq - xs;
+      const hAcross = alongX ? dz : dx;
+      if (nearAxisOn && sEdge === sq && Math.abs(oAcross) <= hAcross + rq * rq * bendPerM) {
+        // Slope of ln T₀ across the axis; small means q sits within about a cell of the reference's
+        // own axis (the line where the across slope vanishes), where no upwind neighbour exists.
+        const kappa = referenceLogSlope(xq - xs, zq - zs, gx, gz, vs, alongX);
+        if (Math.abs(kappa) * rq * rq <= hAcross) {
+          const a = aP * aP + kappa * kappa;
+          const b = aP * bP;
+          const c = bP * bP - sq * sq;
+          const disc = b * b - a * c;
+          if (disc >= 0) {
+            const t = (b + Math.sqrt(disc)) / a;
+            if (t >= Tp) tau = t;
+          }
+        }
+      }
+      let two = false;
 
       // Two-axis candidates: p with each accepted neighbour b of q on the other axis.
       for (let side = -1; side <= 1; side += 2) {
@@ -205,12 +229,20 @@ export function march(m: MarchState): void {
         const disc = bb * bb - a * c;
         if (disc < 0) continue;
         const t = (bb + Math.sqrt(disc)) / a;
-        if (t < best && t >= Tp && t >= Tb) best = t;
+        if (t >= Tp && t >= Tb) {
+          two = true;
+          if (t < best) best = t;
+        }
       }
 
-      if (best < T[q]) {
-        T[q] = best;
-        heap.pushOrDecrease(q, best);
+      // Key = least safe candidate; a provisional one counts while the node has no two-axis candidate.
+      if (two) hasTwo[q] = 1;
+      if (best < safe[q]) safe[q] = best;
+      if (tau < provisional[q]) provisional[q] = tau;
+      const key = hasTwo[q] !== 0 || provisional[q] >= safe[q] ? safe[q] : provisional[q];
+      if (key !== T[q]) {
+        T[q] = key;
+        heap.update(q, key);
         if (st === FAR) state[q] = TRIAL;
       }
     }

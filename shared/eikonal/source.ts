@@ -49,10 +49,16 @@ export interface SourceStart {
   times: number[];
   /** Slowness at the source point (s/m), bilinear over the active corners. */
   slowness: number;
+  /**
+   * Velocity gradient across the source cell (1/s; x, and z as elevation), or 0 when the cell
+   * touches air or straddles a contrast (no smooth local medium to describe).
+   */
+  gradX: number;
+  gradZ: number;
 }
 
 /** Straight-ray times to the active corners of the source cell. `slowness` is per node (s/m). */
-export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Array, source: Point): SourceStart {
+export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Array, source: Point, contrastRatio: number): SourceStart {
   const { cx, cz, ux, uz } = locateSourceCell(grid, active, source);
   const nx = grid.nx;
   const base = cz * nx + cx;
@@ -83,5 +89,16 @@ export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Arra
     nodes.push(c);
     times.push((r * (s0 + slowness[c])) / 2);
   }
-  return { nodes, times, slowness: s0 };
+  let gradX = 0;
+  let gradZ = 0;
+  if (corners.every((c) => active[c])) {
+    const [s00, s10, s01, s11] = corners.map((c) => slowness[c]);
+    const lo = Math.min(s00, s10, s01, s11);
+    const hi = Math.max(s00, s10, s01, s11);
+    if (hi <= lo * contrastRatio) {
+      gradX = (1 / s10 - 1 / s00 + 1 / s11 - 1 / s01) / (2 * grid.dx);
+      gradZ = -(1 / s01 - 1 / s00 + 1 / s11 - 1 / s10) / (2 * grid.dz); // rows go down; z is up
+    }
+  }
+  return { nodes, times, slowness: s0, gradX, gradZ };
 }

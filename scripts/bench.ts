@@ -1,0 +1,90 @@
+/**
+ * Solver benchmark: `npm run bench` prints a table; `npm run bench -- --json` prints one JSON
+ * object per case per line (FORMATS.md §3). Options: --quick (two smallest sizes, fewer
+ * repeats), --case <text> (only cases whose name contains it), --repeats <n>.
+ * Single thread; speed is the median wall time of repeated solves after one warm-up solve.
+ */
+import { dippingCase, gradientCase, homogeneousCase, SIZES, twoLayerCase, type BenchCase } from './bench/cases';
+import { runCase, type BenchResult } from './bench/measure';
+
+interface Args {
+  json: boolean;
+  quick: boolean;
+  filter: string;
+  repeats: number | undefined;
+}
+
+function parseArgs(argv: string[]): Args {
+  const args: Args = { json: false, quick: false, filter: '', repeats: undefined };
+  for (let k = 0; k < argv.length; k++) {
+    const a = argv[k];
+    if (a === '--json') args.json = true;
+    else if (a === '--quick') args.quick = true;
+    else if (a === '--case') args.filter = argv[++k] ?? '';
+    else if (a === '--repeats') args.repeats = Number(argv[++k]);
+    else {
+      console.error(`unknown option ${a}; use --json, --quick, --case <text>, --repeats <n>`);
+      process.exit(2);
+    }
+  }
+  if (args.repeats !== undefined && !(Number.isInteger(args.repeats) && args.repeats > 0)) {
+    console.error('--repeats needs a whole number above 0');
+    process.exit(2);
+  }
+  return args;
+}
+
+/** Fewer repeats on big grids keeps the whole run within a few minutes. */
+function repeatsFor(c: BenchCase, args: Args): number {
+  if (args.repeats) return args.repeats;
+  const n = c.grid.nx * c.grid.nz;
+  if (args.quick) return 3;
+  return n <= 100_000 ? 9 : n <= 300_000 ? 5 : 3;
+}
+
+function* cases(args: Args): Generator<BenchCase> {
+  const sizes = args.quick ? SIZES.slice(0, 2) : SIZES;
+  for (const [nx, nz] of sizes) yield homogeneousCase(nx, nz);
+  for (const [nx, nz] of sizes) yield gradientCase(nx, nz);
+  yield twoLayerCase();
+  yield dippingCase();
+}
+
+const pct = (v: number): string => `${(v * 100).toFixed(3)} %`;
+
+function printRow(r: BenchResult): void {
+  console.log(
+    [
+      r.case.padEnd(24),
+      `${r.nx}×${r.nz}`.padStart(10),
+      String(r.order).padStart(5),
+      (r.median_seconds * 1000).toFixed(1).padStart(10),
+      (r.nodes_per_second / 1e6).toFixed(2).padStart(9),
+      pct(r.max_rel_error).padStart(10),
+      pct(r.mean_rel_error).padStart(10),
+      String(r.measured_nodes).padStart(9),
+    ].join(' '),
+  );
+}
+
+function main(): void {
+  const args = parseArgs(process.argv.slice(2));
+  if (!args.json) {
+    console.log(`Eikonal benchmark — node ${process.version}, single thread, medians of repeated solves`);
+    console.log(['case'.padEnd(24), 'grid'.padStart(10), 'order'.padStart(5), 'median ms'.padStart(10), 'Mnodes/s'.padStart(9), 'max err'.padStart(10), 'mean err'.padStart(10), 'measured'.padStart(9)].join(' '));
+  }
+  for (const c of cases(args)) {
+    if (args.filter && !c.name.includes(args.filter)) continue;
+    for (const order of [1, 2] as const) {
+      const r = runCase(c, { order }, repeatsFor(c, args));
+      if (args.json) {
+        const { measured_nodes: _unused, ...contract } = r;
+        console.log(JSON.stringify(contract));
+      } else {
+        printRow(r);
+      }
+    }
+  }
+}
+
+main();
