@@ -68,3 +68,52 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   const text = await res.text();
   return (text ? JSON.parse(text) : undefined) as T;
 }
+
+export interface UploadOptions {
+  method?: 'POST' | 'PUT';
+  /** Called with the fraction of the body sent so far (0…1). */
+  onProgress?: (fraction: number) => void;
+  signal?: AbortSignal;
+}
+
+/** Parse an XMLHttpRequest's answer into the same ApiError that fetch callers get. */
+function xhrError(xhr: XMLHttpRequest): Promise<ApiError> {
+  const type = xhr.getResponseHeader('Content-Type') ?? 'text/plain';
+  return toApiError(new Response(xhr.status === 0 ? null : xhr.responseText, { status: xhr.status || 500, headers: { 'Content-Type': type } }));
+}
+
+function sendForm(path: string, form: FormData, token: string, options: UploadOptions): Promise<XMLHttpRequest> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open(options.method ?? 'POST', path);
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('Accept', 'application/json');
+    xhr.setRequestHeader('X-CSRF-Token', token);
+    xhr.upload.onprogress = (e) => {
+      if (e.lengthComputable && e.total > 0) options.onProgress?.(e.loaded / e.total);
+    };
+    xhr.onload = () => resolve(xhr);
+    // A network failure surfaces as the same TypeError fetch would throw, so errorMessage() words it.
+    xhr.onerror = () => reject(new TypeError('Network request failed'));
+    xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
+    options.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+    xhr.send(form);
+  });
+}
+
+/**
+ * Multipart upload with progress (fetch cannot report upload progress). Same CSRF
+ * handling as apiRequest, including one retry when the token has gone stale.
+ */
+export async function apiUpload<T>(path: string, form: FormData, options: UploadOptions = {}): Promise<T> {
+  let xhr = await sendForm(path, form, await getCsrfToken(), options);
+  if (xhr.status === 403) {
+    const err = await xhrError(xhr);
+    if (err.code.toLowerCase().includes('csrf')) {
+      resetCsrfToken();
+      xhr = await sendForm(path, form, await getCsrfToken(), options);
+    }
+  }
+  if (xhr.status < 200 || xhr.status >= 300) throw await xhrError(xhr);
+  return (xhr.responseText ? JSON.parse(xhr.responseText) : undefined) as T;
+}

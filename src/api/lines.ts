@@ -1,12 +1,14 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from './client';
+import { apiRequest, apiUpload } from './client';
 import { queryKeys } from './keys';
-import type { Line, LineDetail, NewLineBody } from './types';
+import type { Line, LineDetail, NewLineBody, Station } from './types';
+
+const linePath = (lineId: string) => `/api/lines/${encodeURIComponent(lineId)}`;
 
 export function useLine(lineId: string) {
   return useQuery({
     queryKey: queryKeys.line(lineId),
-    queryFn: ({ signal }) => apiRequest<LineDetail>(`/api/lines/${encodeURIComponent(lineId)}`, { signal }),
+    queryFn: ({ signal }) => apiRequest<LineDetail>(linePath(lineId), { signal }),
   });
 }
 
@@ -16,5 +18,25 @@ export function useCreateLine(projectId: string) {
     mutationFn: (body: NewLineBody) =>
       apiRequest<Line>(`/api/projects/${encodeURIComponent(projectId)}/lines`, { method: 'POST', body }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.project(projectId) }),
+  });
+}
+
+/** The station table replaces the whole previous one, from edited rows or from a CSV file. */
+export type StationsInput = { kind: 'rows'; rows: Station[] } | { kind: 'file'; file: File };
+
+export function useSaveStations(lineId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: StationsInput) => {
+      const path = `${linePath(lineId)}/stations`;
+      if (input.kind === 'rows') return apiRequest<{ stations: Station[] }>(path, { method: 'PUT', body: input.rows });
+      const form = new FormData();
+      form.append('file', input.file, input.file.name);
+      return apiUpload<{ stations: Station[] }>(path, form, { method: 'PUT' });
+    },
+    onSuccess: ({ stations }) => {
+      queryClient.setQueryData<LineDetail>(queryKeys.line(lineId), (old) => (old ? { ...old, stations } : old));
+      return queryClient.invalidateQueries({ queryKey: queryKeys.line(lineId) });
+    },
   });
 }

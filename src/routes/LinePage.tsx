@@ -1,49 +1,31 @@
-import { useParams } from 'react-router';
+import { useId } from 'react';
+import { useParams, useSearchParams } from 'react-router';
 import { useLine } from '../api/lines';
 import { useProject } from '../api/projects';
-import { EmptyState } from '../components/EmptyState';
+import type { ProjectRole } from '../api/types';
+import { ChecksTab } from '../components/line/checks/ChecksTab';
+import { LineTabs, TabPanel, type TabDef } from '../components/line/LineTabs';
+import { PickSetsTab } from '../components/line/picksets/PickSetsTab';
+import { StationsTab } from '../components/line/stations/StationsTab';
 import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
-import { Section } from '../components/Section';
-import { formatDate, plural } from '../lib/format';
+import { formatDate, ROLE_LABELS } from '../lib/format';
+
+type TabKey = 'stations' | 'picks' | 'checks';
+const TAB_KEYS: TabKey[] = ['stations', 'picks', 'checks'];
+
+/** Who may change field data on a line (the server's policy table decides; this only picks the view). */
+const FIELD_EDITORS: ProjectRole[] = ['geophysicist', 'field_tech'];
 
 /**
- * What a line will hold. Uploads, editing and runs come with later work, so each block
- * says plainly that it is empty rather than pretending to offer what does not exist yet.
+ * A survey line's field data in three tabs: its stations, its pick sets, and the quality checks
+ * of one pick set. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
+ * so a link or a reload brings back the same view.
  */
-const BLOCKS = [
-  {
-    key: 'stations',
-    title: 'Stations',
-    empty: 'No station geometry uploaded yet',
-    detail: 'The station table gives each geophone and shot point its chainage and elevation.',
-    noun: 'station',
-  },
-  {
-    key: 'pickSets',
-    title: 'Pick sets',
-    empty: 'No pick sets uploaded yet',
-    detail: 'A pick set holds the first-arrival travel times picked for every shot on this line.',
-    noun: 'pick set',
-  },
-  {
-    key: 'models',
-    title: 'Velocity models',
-    empty: 'No velocity models saved yet',
-    detail: 'Each saved model is kept as its own version, so every run can be reproduced.',
-    noun: 'model version',
-  },
-  {
-    key: 'runs',
-    title: 'Runs',
-    empty: 'No runs yet',
-    detail: 'A run computes travel times through a model and compares them with the picks (RMS misfit).',
-    noun: 'run',
-  },
-] as const;
-
 export function LinePage() {
   const { lineId = '' } = useParams();
+  const [params, setParams] = useSearchParams();
+  const idPrefix = useId().replace(/[^a-zA-Z0-9_-]/g, '');
   const line = useLine(lineId);
   // The project name for the breadcrumb; the project page has usually cached it already.
   const project = useProject(line.data?.projectId ?? '', { enabled: Boolean(line.data?.projectId) });
@@ -52,6 +34,35 @@ export function LinePage() {
   if (line.isError) return <LoadError error={line.error} what="survey line" onRetry={() => void line.refetch()} />;
 
   const l = line.data;
+  const requested = params.get('tab') as TabKey | null;
+  const tab: TabKey = requested && TAB_KEYS.includes(requested) ? requested : l.pickSets.length > 0 ? 'checks' : 'stations';
+  const pickSetId = params.get('pickset');
+  const revText = params.get('rev');
+  const revision = revText !== null && /^\d+$/.test(revText) ? Number(revText) : null;
+  const canEditField = l.myRole !== null && FIELD_EDITORS.includes(l.myRole);
+  const canExclude = l.myRole === 'geophysicist';
+
+  const checksSearch = (id: string, rev: number | null = null) => {
+    const next = new URLSearchParams({ tab: 'checks', pickset: id });
+    if (rev !== null) next.set('rev', String(rev));
+    return next;
+  };
+  const selectTab = (key: TabKey) =>
+    setParams(
+      (prev) => {
+        const next = new URLSearchParams(prev);
+        next.set('tab', key);
+        return next;
+      },
+      { replace: true },
+    );
+
+  const tabs: TabDef<TabKey>[] = [
+    { key: 'stations', label: 'Stations', badge: l.stations.length },
+    { key: 'picks', label: 'Pick sets', badge: l.pickSets.length },
+    { key: 'checks', label: 'Checks' },
+  ];
+
   return (
     <>
       <title>{`${l.name} · Timefield`}</title>
@@ -62,30 +73,30 @@ export function LinePage() {
           { label: project.data?.name ?? 'Project', to: `/projects/${l.projectId}` },
         ]}
       >
-        <p className="text-sm text-stone-600">Created {formatDate(l.createdAt)}</p>
+        <p className="text-sm text-stone-600">
+          Created {formatDate(l.createdAt)}
+          {l.myRole && <> · you are {ROLE_LABELS[l.myRole].toLowerCase()} on this project</>}
+        </p>
         <div data-testid="line-notes" className="mt-3 max-w-prose whitespace-pre-line">
           {l.notes ? l.notes : <span className="text-stone-500">No notes for this line.</span>}
         </div>
       </PageHeader>
 
-      <div className="grid gap-x-8 md:grid-cols-2">
-        {BLOCKS.map((b) => {
-          const items = Array.isArray(l[b.key]) ? l[b.key] : [];
-          return (
-            <Section key={b.key} title={b.title}>
-              {items.length === 0 ? (
-                <EmptyState title={b.empty} testId={`${b.key}-empty`}>
-                  {b.detail}
-                </EmptyState>
-              ) : (
-                <p data-testid={`${b.key}-count`} className="rounded-lg border border-stone-200 bg-white px-5 py-4">
-                  {plural(items.length, b.noun)} on record.
-                </p>
-              )}
-            </Section>
-          );
-        })}
-      </div>
+      <LineTabs tabs={tabs} selected={tab} onSelect={selectTab} idPrefix={idPrefix} />
+      <TabPanel idPrefix={idPrefix} tabKey={tab}>
+        {tab === 'stations' && <StationsTab line={l} canEdit={canEditField} />}
+        {tab === 'picks' && (
+          <PickSetsTab
+            line={l}
+            canUpload={canEditField}
+            checksHref={(id) => `?${checksSearch(id).toString()}`}
+            onUploaded={(created) => setParams(checksSearch(created.id))}
+          />
+        )}
+        {tab === 'checks' && (
+          <ChecksTab line={l} pickSetId={pickSetId} revision={revision} canExclude={canExclude} onChoose={(id, rev) => setParams(checksSearch(id, rev))} />
+        )}
+      </TabPanel>
     </>
   );
 }

@@ -1,0 +1,47 @@
+import { usePickSet } from '../../../api/picksets';
+import type { LineDetail } from '../../../api/types';
+import { EmptyState } from '../../EmptyState';
+import { Loading, LoadError } from '../../LoadState';
+import { PickSetChecks } from './PickSetChecks';
+import { PickSetPicker } from './PickSetPicker';
+
+/** The quality checks of one pick set at one revision; both choices live in the page address. */
+export function ChecksTab({
+  line,
+  pickSetId,
+  revision,
+  canExclude,
+  onChoose,
+}: {
+  line: LineDetail;
+  pickSetId: string | null;
+  revision: number | null;
+  canExclude: boolean;
+  onChoose: (pickSetId: string, revision: number | null) => void;
+}) {
+  // The newest pick set unless the address names one.
+  const chosen = pickSetId && line.pickSets.some((p) => p.id === pickSetId) ? pickSetId : (line.pickSets[0]?.id ?? null);
+  const detail = usePickSet(chosen, revision);
+
+  if (!chosen) {
+    return (
+      <EmptyState title="No pick set to check yet" testId="checks-empty">
+        Upload a pick file under “Pick sets”; its checks appear here as soon as it is stored.
+      </EmptyState>
+    );
+  }
+  // keepPreviousData shows the last pick set while another loads; never mix one set's picks with another's id.
+  const data = detail.data && detail.data.id === chosen && (revision === null || detail.data.revision.number === revision) ? detail.data : undefined;
+  return (
+    <>
+      <PickSetPicker pickSets={line.pickSets} pickSetId={chosen} detail={detail.data} revision={revision} onChange={onChoose} />
+      {detail.isError ? (
+        <LoadError error={detail.error} what="pick set" onRetry={() => void detail.refetch()} />
+      ) : !data ? (
+        <Loading what="picks and checks" />
+      ) : (
+        <PickSetChecks key={data.id} data={data} canExclude={canExclude} onRevisionSaved={() => onChoose(chosen, null)} />
+      )}
+    </>
+  );
+}

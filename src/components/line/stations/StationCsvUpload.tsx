@@ -1,0 +1,72 @@
+import { useId, useRef, useState } from 'react';
+import { errorMessage, isApiError } from '../../../api/errors';
+import { useSaveStations } from '../../../api/lines';
+import type { Station } from '../../../api/types';
+import { Button } from '../../Button';
+import { FileProblems, type FileIssue } from '../FileProblems';
+
+/** Replace the station table from a CSV file (header `station,x,z`, any column order, `#` comments). */
+export function StationCsvUpload({ lineId, current, onStored }: { lineId: string; current: number; onStored: (stations: Station[]) => void }) {
+  const upload = useSaveStations(lineId);
+  const [file, setFile] = useState<File | null>(null);
+  const inputRef = useRef<HTMLInputElement>(null);
+  const id = useId();
+
+  function choose(f: File | null) {
+    upload.reset();
+    setFile(f);
+  }
+
+  function send() {
+    if (!file) return;
+    upload.mutate(
+      { kind: 'file', file },
+      {
+        onSuccess: ({ stations }) => {
+          onStored(stations);
+          setFile(null);
+          if (inputRef.current) inputRef.current.value = '';
+        },
+      },
+    );
+  }
+
+  const issues: FileIssue[] = isApiError(upload.error) ? upload.error.issues.map((i) => ({ line: i.line, column: i.column === undefined ? null : String(i.column), message: i.message })) : [];
+
+  return (
+    <div data-testid="station-csv" className="rounded-lg border border-stone-200 bg-white p-4">
+      <label htmlFor={id} className="font-semibold text-stone-800">
+        Upload a station file (CSV)
+      </label>
+      <p id={`${id}-hint`} className="text-sm text-stone-600">
+        Header <code>station,x,z</code> in any order; lines starting with <code>#</code> are comments. The file replaces the whole table.
+      </p>
+      <div className="mt-2 flex flex-wrap items-center gap-3">
+        <input
+          id={id}
+          ref={inputRef}
+          type="file"
+          accept=".csv,.txt,text/csv,text/plain"
+          aria-describedby={`${id}-hint`}
+          onChange={(e) => choose(e.target.files?.[0] ?? null)}
+          className="text-sm file:mr-3 file:rounded-md file:border file:border-stone-300 file:bg-white file:px-3 file:py-1 file:font-semibold file:text-stone-800 hover:file:bg-stone-50"
+        />
+        {file && (
+          <Button size="sm" onClick={send} busy={upload.isPending} busyLabel="Uploading…" data-testid="station-csv-send">
+            {current > 0 ? `Replace ${current} stations` : 'Store stations'}
+          </Button>
+        )}
+      </div>
+      {upload.isSuccess && (
+        <p role="status" className="mt-2 text-sm font-semibold text-accent-800">
+          Stored {upload.data.stations.length} stations from the file.
+        </p>
+      )}
+      {upload.isError && (
+        <div className="mt-3">
+          <FileProblems file={file} summary={errorMessage(upload.error)} issues={issues} testId="station-csv-problems" />
+        </div>
+      )}
+    </div>
+  );
+}

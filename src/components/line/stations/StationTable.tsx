@@ -1,0 +1,28 @@
+import type { Station } from '../../../api/types';
+import { DataTable, Td, Th, Tr } from '../../Table';
+
+const metres = (v: number) => v.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 3 });
+
+/** The saved station table, read-only. */
+export function StationTable({ stations }: { stations: Station[] }) {
+  return (
+    <DataTable caption="Station table" testId="station-table" minWidth="24rem">
+      <thead>
+        <tr>
+          <Th numeric>Station</Th>
+          <Th numeric>x (m)</Th>
+          <Th numeric>Elevation z (m)</Th>
+        </tr>
+      </thead>
+      <tbody>
+        {stations.map((s) => (
+          <Tr key={s.station}>
+            <Td numeric>{s.station}</Td>
+            <Td numeric>{metres(s.x)}</Td>
+            <Td numeric>{metres(s.z)}</Td>
+          </Tr>
+        ))}
+      </tbody>
+    </DataTable>
+  );
+}
