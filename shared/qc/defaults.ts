@@ -11,6 +11,8 @@ export const QC_DEFAULTS = {
   vMin: 100,
   /** Faster than ~8000 m/s is beyond any near-surface rock; almost certainly an early pick (common practice, no source). */
   vMax: 8000,
+  /** Flag a pick only when it breaks a rule by more than 2·√(σ₁² + σ₂²) of the two picks' uncertainties (common practice, no source). */
+  sigmaAllowance: 2,
 } as const;
 
 /**
