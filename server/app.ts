@@ -36,6 +36,8 @@ export function createApp({ redis, pgPool, clientDir = path.resolve('dist') }: A
       strictTransportSecurity: false,
     }),
   );
+  // Model files with a raw velocity grid can be tens of MB; everything else is small.
+  app.use('/api/lines/:lineId/models', express.json({ limit: '64mb' }));
   app.use(express.json({ limit: '1mb' }));
   app.use(sessionMiddleware(pgPool));
   app.use(passport.session());

@@ -6,6 +6,7 @@ import { Project } from './Project';
 import { ProjectMember } from './ProjectMember';
 import { SurveyLine } from './SurveyLine';
 import { User } from './User';
+import { VelocityModel } from './VelocityModel';
 
-export { AuditEntry, PickSet, PickSetRevision, Project, ProjectMember, Station, SurveyLine, User };
-export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry, Station, PickSet, PickSetRevision];
+export { AuditEntry, PickSet, PickSetRevision, Project, ProjectMember, Station, SurveyLine, User, VelocityModel };
+export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry, Station, PickSet, PickSetRevision, VelocityModel];

@@ -28,3 +28,10 @@ export const projectOfPickSet: ProjectScope = async (req) => {
   const rows = await dataSource.query('SELECT l.project_id FROM pick_sets s JOIN survey_lines l ON l.id = s.line_id WHERE s.id = $1', [id]);
   return rows[0]?.project_id ?? null;
 };
+
+export const projectOfModel: ProjectScope = async (req) => {
+  const id = req.params.modelId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM velocity_models m JOIN survey_lines l ON l.id = m.line_id WHERE m.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};

@@ -37,6 +37,10 @@ export const policyTable = {
   'line.stations.write': { roles: ['geophysicist', 'field_tech'] },
   'line.picksets.create': { roles: ['geophysicist', 'field_tech'] },
 
+  'line.models.create': { roles: ['geophysicist'] },
+  'model.read': { roles: STAFF },
+  'model.update': { roles: ['geophysicist'] },
+
   'pickset.read': { roles: STAFF },
   'pickset.revise': { roles: ['geophysicist'] },
 } as const satisfies Record<string, Rule>;

@@ -3,11 +3,12 @@ import type { Redis } from 'ioredis';
 import { authRouter } from './auth';
 import { healthRouter } from './health';
 import { linesRouter } from './lines';
+import { modelsRouter } from './models';
 import { pickSetsRouter } from './pickSets';
 import { projectsRouter } from './projects';
 import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
 export function apiRouters(redis: Redis): Router[] {
-  return [healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter()];
+  return [healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter()];
 }

@@ -34,6 +34,10 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/lines/:lineId': STAFF_A,
   'PUT /api/lines/:lineId/stations': ['geophysicist', 'field_tech'],
   'POST /api/lines/:lineId/picksets': ['geophysicist', 'field_tech'],
+  'POST /api/lines/:lineId/models': ['geophysicist'],
+  'GET /api/models/:modelId': STAFF_A,
+  'GET /api/models/:modelId/grid': STAFF_A,
+  'PUT /api/models/:modelId': ['geophysicist'],
   'GET /api/picksets/:pickSetId': STAFF_A,
   'POST /api/picksets/:pickSetId/revisions': ['geophysicist'],
   'GET /api/picksets/:pickSetId/file': STAFF_A,
@@ -67,6 +71,7 @@ function concretePath(path: string, w: World): string {
     .replace(':projectId', w.projectA.id)
     .replace(':lineId', w.lineA.id)
     .replace(':pickSetId', w.pickSetA)
+    .replace(':modelId', w.modelA)
     .replace(':userId', w.loner.id);
 }
 

@@ -3,6 +3,7 @@ import { hashPassword } from '../../../server/auth/password';
 import { Project, ProjectMember, SurveyLine, User } from '../../../server/entities';
 import type { ProjectRole } from '../../../shared/schemas/projects';
 import { importPicks } from '../../../server/services/importPicks';
+import { saveModelVersion } from '../../../server/services/models';
 
 export const PASSWORD = 'test-password-123';
 
@@ -18,6 +19,8 @@ export interface World {
   lineB: SurveyLine;
   /** A small pick set on line A: two end-to-end shots over 600 m/s ground. */
   pickSetA: string;
+  /** Version 1 of model "main" on line A: 600 m/s homogeneous, 25 m × 10 m at 0.5 m. */
+  modelA: string;
   /** An active account that belongs to no project. */
   loner: User;
 }
@@ -47,7 +50,8 @@ export async function resetWorld(): Promise<World> {
   const lineA = await lines.save(lines.create({ projectId: projectA.id, name: 'A-1' }));
   const lineB = await lines.save(lines.create({ projectId: projectB.id, name: 'B-1' }));
   const { id: pickSetA } = await importPicks(users.field_tech.id, projectA.id, lineA.id, 'world.picks.csv', Buffer.from(WORLD_PICKS));
-  return { users, projectA, projectB, lineA, lineB, pickSetA, loner };
+  const { id: modelA } = await saveModelVersion(users.geophysicist.id, projectA.id, lineA.id, WORLD_MODEL, { name: 'main', comment: '', basedOn: null });
+  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, loner };
 }
 
 /** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */
@@ -56,3 +60,10 @@ export const WORLD_PICKS = [
   ...[0, 6, 12, 18, 24].map((x) => `F,0,,${x},,${((x / 600) * 1000).toFixed(3)},0.5`),
   ...[0, 6, 12, 18, 24].map((x) => `R,24,,${x},,${(((24 - x) / 600) * 1000).toFixed(3)},0.5`),
 ].join('\n');
+
+/** Homogeneous 600 m/s ground covering the world's pick set (invented test data). */
+export const WORLD_MODEL = {
+  format: 'timefield-model/1',
+  grid: { x0: 0, dx: 0.5, nx: 51, z0: 0, dz: 0.5, nz: 21 },
+  layers: [{ name: 'ground', v_top: 600, v_base: 600 }],
+};

@@ -1,0 +1,72 @@
+import { dataSource } from '../db/dataSource';
+import { VelocityModel } from '../entities';
+import { HttpError } from '../http/errors';
+import { parseModelFile, rasteriseModel, type ModelFile } from '../../shared/model';
+import { summariseRaster } from '../../shared/model/summary';
+import { audit } from './audit';
+
+export interface SaveModelOptions {
+  name: string;
+  comment: string;
+  basedOn: string | null;
+}
+
+/** Validates a model file; 422 with a JSON path per problem (FORMATS.md §1). */
+export function validateModelFile(json: unknown): ModelFile {
+  const parsed = parseModelFile(json);
+  if (!parsed.ok) {
+    const first = parsed.issues[0];
+    throw new HttpError(422, 'invalid_model', `The model was not saved: ${first.path ? `${first.path}: ` : ''}${first.message}`, parsed.issues);
+  }
+  return parsed.model;
+}
+
+/** Saves a new immutable version (next number for this line and name) and returns it with its warnings. */
+export async function saveModelVersion(actorId: string, projectId: string, lineId: string, json: unknown, opts: SaveModelOptions) {
+  const model = validateModelFile(json);
+  const summary = summariseRaster(rasteriseModel(model));
+  return dataSource.transaction(async (em) => {
+    // One writer per line at a time, so two saves cannot take the same number.
+    await em.query('SELECT id FROM survey_lines WHERE id = $1 FOR UPDATE', [lineId]);
+    if (opts.basedOn) {
+      const [base] = await em.query('SELECT line_id FROM velocity_models WHERE id = $1', [opts.basedOn]);
+      if (!base || base.line_id !== lineId) throw new HttpError(422, 'validation_failed', 'basedOn: no model version of this line has that id', [{ path: 'basedOn', message: 'no model version of this line has that id' }]);
+    }
+    const [{ next }] = await em.query('SELECT coalesce(max(version), 0) + 1 AS next FROM velocity_models WHERE line_id = $1 AND name = $2', [lineId, opts.name]);
+    const saved = await em.save(
+      em.create(VelocityModel, {
+        lineId, name: opts.name, version: next, comment: opts.comment, basedOn: opts.basedOn, content: model as object,
+        nx: model.grid.nx, nz: model.grid.nz, createdBy: actorId,
+      }),
+    );
+    await audit(em, { actorId, action: 'model.save', objectType: 'velocity_model', objectId: saved.id, projectId, detail: { name: opts.name, version: next } });
+    return { id: saved.id, version: next, name: opts.name, warnings: summary.warnings };
+  });
+}
+
+export async function loadModelVersion(id: string) {
+  const [row] = await dataSource.query(
+    `SELECT m.id, m.line_id, m.name, m.version, m.comment, m.based_on, m.content, m.created_at, m.created_by, u.name AS created_by_name
+     FROM velocity_models m LEFT JOIN users u ON u.id = m.created_by WHERE m.id = $1`,
+    [id],
+  );
+  if (!row) throw new HttpError(404, 'not_found', 'Not found.');
+  return {
+    id: row.id as string, lineId: row.line_id as string, name: row.name as string, version: row.version as number, comment: row.comment as string,
+    basedOn: row.based_on as string | null, createdAt: row.created_at as Date,
+    createdBy: row.created_by ? { id: row.created_by as string, name: row.created_by_name as string } : null,
+    model: row.content as ModelFile,
+  };
+}
+
+export async function listModelVersions(lineId: string) {
+  const rows = await dataSource.query(
+    `SELECT m.id, m.name, m.version, m.comment, m.based_on, m.nx, m.nz, m.created_at, m.created_by, u.name AS created_by_name
+     FROM velocity_models m LEFT JOIN users u ON u.id = m.created_by WHERE m.line_id = $1 ORDER BY m.name, m.version DESC`,
+    [lineId],
+  );
+  return rows.map((r: Record<string, never>) => ({
+    id: r.id, name: r.name, version: r.version, comment: r.comment, basedOn: r.based_on, nx: r.nx, nz: r.nz, createdAt: r.created_at,
+    createdBy: r.created_by ? { id: r.created_by, name: r.created_by_name } : null,
+  }));
+}
