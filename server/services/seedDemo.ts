@@ -3,8 +3,9 @@ import type { DataSource } from 'typeorm';
 import { parseStationCsv } from '../../shared/stations';
 import { demoLine, demoProject, demoUsers, DEMO_PASSWORD } from '../../fixtures/demo/scenario';
 import { hashPassword } from '../auth/password';
-import { PickSet, Project, ProjectMember, Station, SurveyLine, User } from '../entities';
+import { PickSet, Project, ProjectMember, Station, SurveyLine, User, VelocityModel } from '../entities';
 import { importPicks } from './importPicks';
+import { saveModelVersion } from './models';
 import { replaceStations } from './stations';
 
 const DEMO_FILES = 'fixtures/demo';
@@ -39,7 +40,7 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
   return { created };
 }
 
-/** Stations and the pick file of the demo line (made by scripts/demo/generate-tq-l1.ts), when the line has none. */
+/** Stations, the pick file and a first velocity model of the demo line (made by scripts/demo/generate-tq-l1.ts), when the line has none. */
 async function seedDemoFieldData(ds: DataSource): Promise<number> {
   const project = await ds.getRepository(Project).findOneByOrFail({ name: demoProject.name });
   const line = await ds.getRepository(SurveyLine).findOneByOrFail({ projectId: project.id, name: demoLine.name });
@@ -54,6 +55,12 @@ async function seedDemoFieldData(ds: DataSource): Promise<number> {
   if (!(await ds.getRepository(PickSet).existsBy({ lineId: line.id }))) {
     const { picks } = await importPicks(tech.id, project.id, line.id, 'tq-l1.picks.csv', readFileSync(`${DEMO_FILES}/tq-l1.picks.csv`));
     created += picks;
+  }
+  if (!(await ds.getRepository(VelocityModel).existsBy({ lineId: line.id }))) {
+    const geo = await ds.getRepository(User).findOneByOrFail({ email: 'geo@timefield.test' });
+    const model = JSON.parse(readFileSync(`${DEMO_FILES}/tq-l1.model.json`, 'utf8'));
+    await saveModelVersion(geo.id, project.id, line.id, model, { name: 'main', comment: 'Starting model from the first-break interpretation', basedOn: null });
+    created++;
   }
   return created;
 }
