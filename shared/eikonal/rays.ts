@@ -28,6 +28,22 @@ export interface Ray {
 }
 
 const EPS = 1e-9; // in cells
+/** An interface edge is a head-wave conduit when time falls along it at ≥ this share of the fast side's slowness (cos 14°: dips to about 14°). */
+const CONDUIT = 0.97;
+
+interface Move {
+  /** Direction in grid units per metre. */
+  vx: number;
+  vz: number;
+  /** Metres to the border of the cell (or to the next node along an edge). */
+  limit: number;
+  /** Cell the length is booked to. */
+  cell: number;
+  /** Fall of time per metre. */
+  rate: number;
+  /** Interface edge carrying a head wave. */
+  conduit: boolean;
+}
 const grad = { gx: 0, gd: 0 };
 
 /** Reusable tracer for one model (cell slownesses computed once). */
@@ -75,7 +91,6 @@ export class RayTracer {
     while (Math.hypot((fx - sfx) * dx, (fz - sfz) * dz) > finish && steps++ < maxSteps) {
       const move = this.chooseMove(T, fx, fz);
       if (!move) break; // no descent (bottom of the discrete field): finish straight
-      // move.vx, move.vz: direction in grid units per metre; move.limit: max length (m) to the cell border.
       const len = Math.min(move.limit, maxStep * Math.min(dx, dz));
       if (!(len > 1e-12 * Math.min(dx, dz))) break;
       let nfx = fx + move.vx * len;
@@ -102,17 +117,23 @@ export class RayTracer {
     return { points: Float64Array.from(pts), cells, lengths, time };
   }
 
-  /** Best descent move from (fx, fz): into one of the touching cells, or along an edge. */
-  private chooseMove(T: Float64Array, fx: number, fz: number): { vx: number; vz: number; limit: number; cell: number } | null {
+  /**
+   * Best descent move from (fx, fz). First a refractor edge along which time falls at the
+   * faster side's slowness (a head wave rides it, whatever the half-cell-wide cells beside it
+   * say); then the steepest move into a touching cell; then the steepest fall along an edge.
+   */
+  private chooseMove(T: Float64Array, fx: number, fz: number): Move | null {
     const { nx, nz, dx, dz } = this.grid;
     const ncx = nx - 1;
     const onX = Math.abs(fx - Math.round(fx)) < EPS;
     const onZ = Math.abs(fz - Math.round(fz)) < EPS;
+    const edges = this.edgeMoves(T, fx, fz, onX, onZ);
+    let best: Move | null = null;
+    for (const e of edges) if (e.conduit && (!best || e.rate > best.rate)) best = e;
+    if (best) return best;
+
     const cxs = onX ? [Math.round(fx) - 1, Math.round(fx)] : [Math.floor(fx)];
     const czs = onZ ? [Math.round(fz) - 1, Math.round(fz)] : [Math.floor(fz)];
-    let best: { vx: number; vz: number; limit: number; cell: number } | null = null;
-    let bestRate = 0;
-    // 1) Moves into a cell along −∇T of that cell's interpolant.
     for (const cz of czs) {
       if (cz < 0 || cz > nz - 2) continue;
       for (const cx of cxs) {
@@ -127,50 +148,48 @@ export class RayTracer {
         if ((ux <= EPS && vx < 0) || (ux >= 1 - EPS && vx > 0) || (uz <= EPS && vz < 0) || (uz >= 1 - EPS && vz > 0)) continue;
         const limit = Math.min(exitLength(ux, vx), exitLength(uz, vz));
         if (!(limit > 0)) continue;
-        if (gl > bestRate) {
-          bestRate = gl;
-          best = { vx, vz, limit, cell: cz * ncx + cx };
-        }
+        if (!best || gl > best.rate) best = { vx, vz, limit, cell: cz * ncx + cx, rate: gl, conduit: false };
       }
     }
     if (best) return best;
-    // 2) Slide along a grid line (edge) towards lower time.
-    const rate = (a: number, b: number, h: number): number => (a - b) / h; // decrease per metre
+    for (const e of edges) if (e.rate > 0 && (!best || e.rate > best.rate)) best = e;
+    return best;
+  }
+
+  /** Moves along the grid lines through (fx, fz), towards the next node each way. */
+  private edgeMoves(T: Float64Array, fx: number, fz: number, onX: boolean, onZ: boolean): Move[] {
+    const { nx, nz, dx, dz } = this.grid;
+    const ncx = nx - 1;
+    const moves: Move[] = [];
+    const add = (ta: number, tb: number, h: number, vx: number, vz: number, limit: number, c1: number, c2: number): void => {
+      if (!Number.isFinite(ta) || !Number.isFinite(tb) || !(limit > 0)) return;
+      const rate = (tb - ta) / h; // fall of time per metre towards a
+      const contrast = (c1 >= 0 && this.cells.contrast[c1] !== 0) || (c2 >= 0 && this.cells.contrast[c2] !== 0);
+      const cell = this.fasterCell(c1, c2);
+      const conduit = contrast && rate >= CONDUIT * this.cells.value[cell];
+      moves.push({ vx, vz, limit, cell, rate, conduit });
+    };
     if (onZ) {
       const iz = Math.round(fz);
       for (const sgn of [-1, 1]) {
-        const ixa = sgn < 0 ? Math.ceil(fx - EPS) - 1 : Math.floor(fx + EPS) + 1; // next node in that direction
-        const ixb = ixa - sgn;
+        const ixa = sgn < 0 ? Math.ceil(fx - EPS) - 1 : Math.floor(fx + EPS) + 1; // next node that way
         if (ixa < 0 || ixa > nx - 1) continue;
-        const ta = T[iz * nx + ixa];
-        const tb = T[iz * nx + ixb];
-        if (!Number.isFinite(ta) || !Number.isFinite(tb)) continue;
-        const r = rate(tb, ta, dx);
-        if (r > bestRate) {
-          bestRate = r;
-          const cx = Math.min(ixa, ixb);
-          best = { vx: sgn / dx, vz: 0, limit: Math.abs(ixa - fx) * dx, cell: this.fasterCell(iz > 0 ? (iz - 1) * ncx + cx : -1, iz < nz - 1 ? iz * ncx + cx : -1) };
-        }
+        const ixb = ixa - sgn;
+        const cx = Math.min(ixa, ixb);
+        add(T[iz * nx + ixa], T[iz * nx + ixb], dx, sgn / dx, 0, Math.abs(ixa - fx) * dx, iz > 0 ? (iz - 1) * ncx + cx : -1, iz < nz - 1 ? iz * ncx + cx : -1);
       }
     }
     if (onX) {
       const ix = Math.round(fx);
       for (const sgn of [-1, 1]) {
         const iza = sgn < 0 ? Math.ceil(fz - EPS) - 1 : Math.floor(fz + EPS) + 1;
-        const izb = iza - sgn;
         if (iza < 0 || iza > nz - 1) continue;
-        const ta = T[iza * nx + ix];
-        const tb = T[izb * nx + ix];
-        if (!Number.isFinite(ta) || !Number.isFinite(tb)) continue;
-        const r = rate(tb, ta, dz);
-        if (r > bestRate) {
-          bestRate = r;
-          const cz = Math.min(iza, izb);
-          best = { vx: 0, vz: sgn / dz, limit: Math.abs(iza - fz) * dz, cell: this.fasterCell(ix > 0 ? cz * ncx + ix - 1 : -1, ix < nx - 1 ? cz * ncx + ix : -1) };
-        }
+        const izb = iza - sgn;
+        const cz = Math.min(iza, izb);
+        add(T[iza * nx + ix], T[izb * nx + ix], dz, 0, sgn / dz, Math.abs(iza - fz) * dz, ix > 0 ? cz * ncx + ix - 1 : -1, ix < nx - 1 ? cz * ncx + ix : -1);
       }
     }
-    return best;
+    return moves;
   }
 
   private fasterCell(a: number, b: number): number {
