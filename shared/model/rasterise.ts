@@ -16,6 +16,8 @@
  * - Air (z > surface): active = 0; velocity copied from the topmost ground node of the
  *   column, so interpolation across the surface stays finite. Solvers ignore those values.
  * - Edits ({ix, iz, v}) are painted after the layers (or raw grid), on ground nodes only.
+ * Consequence: an interface is resolved to the row spacing dz. With the current solver an
+ * interface between two node rows acts as if it lay on the lower row (tests/references/model).
  */
 import { nodeX, nodeZ, type Grid } from '../grid';
 import type { ModelFile, ModelLayer } from '../schemas/model';
