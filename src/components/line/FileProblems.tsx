@@ -50,7 +50,7 @@ export function FileProblems({ file, summary, issues, testId }: { file: File | n
     setLines(null);
     if (file) {
       readFileText(file)
-        .then((text) => live && setLines(text.replace(/\r\n?/g, '\n').split('\n')))
+        .then((text) => live && setLines(text.replace(/\r\n?/g, '\n').replace(/\n$/, '').split('\n')))
         .catch(() => live && setLines([]));
     }
     return () => {
@@ -71,10 +71,11 @@ export function FileProblems({ file, summary, issues, testId }: { file: File | n
 
   return (
     <div role="alert" data-testid={testId} className="rounded-lg border border-red-300 bg-red-50 px-5 py-4 text-red-950">
-      <p className="font-semibold">{summary}</p>
+      {/* With a list below, the server's sentence (which quotes the first problem) would only repeat it. */}
+      <p className="font-semibold">{listed.length > 0 ? `${file?.name ?? 'The file'} was not stored.` : summary}</p>
       {listed.length > 0 && (
         <>
-          <p className="mt-2 text-sm text-red-900">
+          <p className="mt-1 text-red-900">
             {issues.length === 1 ? 'One problem' : `${issues.length} problems`} found. Nothing was stored; correct the file and upload it again.
           </p>
           <ol data-testid={testId ? `${testId}-list` : undefined} className="mt-2 list-disc space-y-0.5 pl-5">

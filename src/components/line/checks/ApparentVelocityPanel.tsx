@@ -55,11 +55,11 @@ export function ApparentVelocityPanel({
 
   return (
     <div data-testid="velocity-panel">
-      <form noValidate onSubmit={onSubmit} className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[minmax(7rem,1fr)_minmax(6rem,1fr)_minmax(6rem,1fr)_auto]">
+      <form noValidate onSubmit={onSubmit} className="grid grid-cols-2 items-end gap-3 sm:grid-cols-[minmax(8.5rem,1.4fr)_minmax(5rem,1fr)_minmax(5rem,1fr)_auto]">
         <SelectField label="Shot" value={request.shotId} onChange={(e) => onRequest({ ...request, shotId: e.target.value })} data-testid="fit-shot" className="col-span-2 sm:col-span-1">
           {shots.map((s) => (
             <option key={s.shotId} value={s.shotId}>
-              {s.shotId} (x = {showMetres(s.sourceX)} m)
+              {s.shotId} at {showMetres(s.sourceX)} m
             </option>
           ))}
         </SelectField>

@@ -172,7 +172,7 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
         </Section>
       </div>
 
-      <Section title="Suspect picks" description="Steps between neighbouring receivers faster than 8000 m/s or slower than 100 m/s, and times that fall away from the source. Look at these traces again; a flag is not a verdict.">
+      <Section title="Suspect picks" description="Steps between neighbouring receivers faster than 8000 m/s or slower than 100 m/s by more than the picks’ own uncertainty explains, and times that fall away from the source. Look at these traces again; a flag is not a verdict.">
         <SuspectPicksTable flags={flags} picksByIndex={picksByIndex} selected={selected} onSelect={canExclude ? (i) => toggleSelected([i], !selected.has(i)) : undefined} />
       </Section>
 

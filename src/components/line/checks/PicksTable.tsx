@@ -3,11 +3,12 @@ import type { PickFlag } from '../../../../shared/qc';
 import type { PickRow, PickSetShot } from '../../../api/types';
 import { Button } from '../../Button';
 import { SelectField } from '../../Field';
-import { DataTable, Td, Th } from '../../Table';
+import { Td, Th } from '../../Table';
+import { ScrollTable } from '../ScrollTable';
 import { showMetres, showMs } from './numbers';
 import { SUSPECT_LABELS } from './qcPicks';
 
-const PAGE = 50;
+const PAGE = 100;
 
 /**
  * Every pick of the revision, filtered by shot and paged (a pick set can hold 200 000 picks).
@@ -79,7 +80,7 @@ export function PicksTable({
           {rows.length.toLocaleString('en-GB')} picks{pages > 1 ? `, page ${current + 1} of ${pages}` : ''}
         </p>
       </div>
-      <DataTable caption="Picks" testId="picks-table" minWidth="46rem">
+      <ScrollTable caption="Picks" testId="picks-table" minWidth="46rem">
         <thead>
           <tr>
             {onToggle && (
@@ -112,7 +113,7 @@ export function PicksTable({
                 key={p.index}
                 data-testid="pick-row"
                 data-index={p.index}
-                className={`border-b border-stone-200 last:border-b-0 ${selected.has(p.index) ? 'bg-accent-50' : reason !== undefined ? 'bg-stone-100 text-stone-500' : 'even:bg-stone-50'}`}
+                className={`border-b border-stone-200 last:border-b-0 [&>td]:align-middle ${selected.has(p.index) ? 'bg-accent-50' : reason !== undefined ? 'bg-stone-100 text-stone-500' : 'even:bg-stone-50'}`}
               >
                 {onToggle && (
                   <Td className="py-1.5">
@@ -149,7 +150,7 @@ export function PicksTable({
             );
           })}
         </tbody>
-      </DataTable>
+      </ScrollTable>
       {pages > 1 && (
         <nav aria-label="Pick table pages" className="mt-3 flex items-center gap-3">
           <Button variant="secondary" size="sm" disabled={current === 0} onClick={() => setPage(current - 1)}>

@@ -49,7 +49,7 @@ export function ReciprocalTable({ pairs, tolerance, toleranceError, onTolerance 
                   <Td numeric>{showSecondsAsMs(p.tAB)}</Td>
                   <Td numeric>{showSecondsAsMs(p.tBA)}</Td>
                   <Td numeric>{showSecondsAsMs(p.difference)}</Td>
-                  <Td>{p.flagged ? <span className="text-amber-900">Over tolerance</span> : <span className="font-normal text-stone-600">Within</span>}</Td>
+                  <Td className="whitespace-nowrap">{p.flagged ? <span className="text-amber-900">Over tolerance</span> : <span className="font-normal text-stone-600">Within</span>}</Td>
                 </tr>
               ))}
             </tbody>

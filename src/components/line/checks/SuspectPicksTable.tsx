@@ -9,7 +9,7 @@ export function SuspectPicksTable({ flags, picksByIndex, onSelect, selected }: {
   if (flags.length === 0) {
     return (
       <p data-testid="suspect-none" className="rounded-lg border border-stone-200 bg-white px-5 py-4 text-stone-700">
-        No suspect picks: every step between neighbouring receivers lies between 100 and 8000 m/s and times grow away from each source.
+        No suspect picks: within the picks’ uncertainty, every step between neighbouring receivers lies between 100 and 8000 m/s and times grow away from each source.
       </p>
     );
   }

@@ -22,6 +22,9 @@ export interface TravelTimeChartProps {
   onPickClick: (index: number) => void;
 }
 
+/** Dragging a fit range selects points; keep every point fully drawn rather than dimming the rest. */
+const KEEP = { marker: { opacity: 1 } };
+
 /** Above this many points SVG gets sluggish; WebGL draws the same chart. */
 const GL_THRESHOLD = 20_000;
 
@@ -67,7 +70,8 @@ export function TravelTimeChart(props: TravelTimeChartProps) {
       customdata: keep.map((j) => c.index[j]),
       line: { color: shotColour(k), width: 1.5 },
       marker: { color: shotColour(k), size: 6 },
-      unselected: { marker: { opacity: 1 } },
+      unselected: KEEP,
+      selected: KEEP,
       hovertemplate: `shot ${c.shotId}<br>x %{x} m<br>t %{y:.2f} ms<extra></extra>`,
     };
   });
@@ -88,16 +92,33 @@ export function TravelTimeChart(props: TravelTimeChartProps) {
   const pairBad = pairPoints(true);
   const sel = at(selected);
 
+  const marks = (name: string, pts: { xs: number[]; ys: number[]; ids: number[]; text?: string[] }, marker: object, hovertemplate: string) => ({
+    type: scatter,
+    mode: 'markers',
+    name,
+    visible: vis(name),
+    x: pts.xs,
+    y: pts.ys,
+    customdata: pts.ids,
+    text: pts.text,
+    marker,
+    hovertemplate,
+    unselected: KEEP,
+    selected: KEEP,
+  });
+  const where = 'x %{x} m<br>t %{y:.2f} ms<extra></extra>';
+
   const overlays = [
-    { type: scatter, mode: 'markers', name: OVERLAY.excluded, visible: vis(OVERLAY.excluded), x: ex.xs, y: ex.ys, customdata: ex.ids, marker: { symbol: 'x-thin-open', size: 9, color: '#78716c', line: { width: 2, color: '#78716c' } }, hovertemplate: 'excluded pick<br>x %{x} m<br>t %{y:.2f} ms<extra></extra>' },
-    { type: scatter, mode: 'markers', name: OVERLAY.suspect, visible: vis(OVERLAY.suspect), x: suspect.xs, y: suspect.ys, customdata: suspect.ids, text: suspect.ids.map((i) => flagKind.get(i) ?? ''), marker: { symbol: 'circle-open', size: 14, color: '#b91c1c', line: { width: 2 } }, hovertemplate: 'suspect: %{text}<br>x %{x} m<br>t %{y:.2f} ms<extra></extra>' },
-    { type: scatter, mode: 'markers', name: OVERLAY.pairOk, visible: vis(OVERLAY.pairOk), x: pairOk.xs, y: pairOk.ys, customdata: pairOk.ids, text: pairOk.text, marker: { symbol: 'diamond-open', size: 11, color: '#57534e', line: { width: 1.5 } }, hovertemplate: '%{text}<extra></extra>' },
-    { type: scatter, mode: 'markers', name: OVERLAY.pairBad, visible: vis(OVERLAY.pairBad), x: pairBad.xs, y: pairBad.ys, customdata: pairBad.ids, text: pairBad.text, marker: { symbol: 'diamond-open', size: 15, color: '#b45309', line: { width: 2.5 } }, hovertemplate: '%{text}<extra></extra>' },
-    { type: scatter, mode: 'markers', name: OVERLAY.selected, visible: vis(OVERLAY.selected), x: sel.xs, y: sel.ys, customdata: sel.ids, marker: { symbol: 'square-open', size: 13, color: '#1f5d57', line: { width: 2 } }, hovertemplate: 'selected pick<br>x %{x} m<br>t %{y:.2f} ms<extra></extra>', showlegend: sel.ids.length > 0 },
+    marks(OVERLAY.excluded, ex, { symbol: 'x-thin-open', size: 9, color: '#78716c', line: { width: 2, color: '#78716c' } }, `excluded pick<br>${where}`),
+    marks(OVERLAY.suspect, { ...suspect, text: suspect.ids.map((i) => flagKind.get(i) ?? '') }, { symbol: 'circle-open', size: 14, color: '#b91c1c', line: { width: 2 } }, `suspect: %{text}<br>${where}`),
+    marks(OVERLAY.pairOk, pairOk, { symbol: 'diamond-open', size: 11, color: '#57534e', line: { width: 1.5 } }, '%{text}<extra></extra>'),
+    marks(OVERLAY.pairBad, pairBad, { symbol: 'diamond-open', size: 15, color: '#b45309', line: { width: 2.5 } }, '%{text}<extra></extra>'),
+    { ...marks(OVERLAY.selected, sel, { symbol: 'square-open', size: 13, color: '#1f5d57', line: { width: 2 } }, `selected pick<br>${where}`), showlegend: sel.ids.length > 0 },
     // Shot positions sit on a hidden second axis pinned to the foot of the chart, so they never hide picks.
     {
       type: 'scatter',
       mode: curves.length <= 16 ? 'markers+text' : 'markers',
+      unselected: { marker: { opacity: 1 }, textfont: { color: '#44403c' } },
       name: OVERLAY.shots,
       visible: vis(OVERLAY.shots),
       yaxis: 'y2',

@@ -1,5 +1,6 @@
 import type { ClipboardEvent, KeyboardEvent } from 'react';
-import { DataTable, Td, Th } from '../../Table';
+import { Td, Th } from '../../Table';
+import { ScrollTable } from '../ScrollTable';
 import { applyPaste, COLUMN_LABELS, parsePastedCells, STATION_COLUMNS, type DraftRow, type RowErrors, type StationColumn } from './stationRows';
 
 const cellInput =
@@ -30,18 +31,18 @@ export function StationEditor({ rows, errors, onChange }: { rows: DraftRow[]; er
   }
 
   return (
-    <DataTable caption="Station table (editable)" testId="station-editor" minWidth="48rem">
+    <ScrollTable caption="Station table (editable)" testId="station-editor" minWidth="40rem">
       <thead>
         <tr>
           <Th numeric className="w-16">
             Row
           </Th>
           {STATION_COLUMNS.map((c) => (
-            <Th key={c} numeric>
+            <Th key={c} numeric className={c === 'station' ? 'w-28' : 'w-36'}>
               {COLUMN_LABELS[c]}
             </Th>
           ))}
-          <Th className="w-72">Check</Th>
+          <Th className="w-64">Check</Th>
           <Th className="w-24">
             <span className="sr-only">Actions</span>
           </Th>
@@ -52,7 +53,7 @@ export function StationEditor({ rows, errors, onChange }: { rows: DraftRow[]; er
           const problems = errors.get(row.key) ?? [];
           const bad = (c: StationColumn) => problems.some((m) => m.toLowerCase().startsWith(c === 'z' ? 'elevation' : c));
           return (
-            <tr key={row.key} data-testid="station-row" className={`border-b border-stone-200 last:border-b-0 ${problems.length ? 'bg-red-50/60' : 'even:bg-stone-50'}`}>
+            <tr key={row.key} data-testid="station-row" className={`border-b border-stone-200 last:border-b-0 [&>td]:align-middle ${problems.length ? 'bg-red-50/60' : 'even:bg-stone-50'}`}>
               <Td numeric className="text-stone-500">
                 {i + 1}
               </Td>
@@ -95,6 +96,6 @@ export function StationEditor({ rows, errors, onChange }: { rows: DraftRow[]; er
           );
         })}
       </tbody>
-    </DataTable>
+    </ScrollTable>
   );
 }

@@ -1,12 +1,13 @@
 import type { Station } from '../../../api/types';
-import { DataTable, Td, Th, Tr } from '../../Table';
+import { Td, Th, Tr } from '../../Table';
+import { ScrollTable } from '../ScrollTable';
 
 const metres = (v: number) => v.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 3 });
 
 /** The saved station table, read-only. */
 export function StationTable({ stations }: { stations: Station[] }) {
   return (
-    <DataTable caption="Station table" testId="station-table" minWidth="24rem">
+    <ScrollTable caption="Station table" testId="station-table" minWidth="20rem">
       <thead>
         <tr>
           <Th numeric>Station</Th>
@@ -23,6 +24,6 @@ export function StationTable({ stations }: { stations: Station[] }) {
           </Tr>
         ))}
       </tbody>
-    </DataTable>
+    </ScrollTable>
   );
 }

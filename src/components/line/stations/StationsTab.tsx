@@ -43,7 +43,7 @@ export function StationsTab({ line, canEdit }: { line: LineDetail; canEdit: bool
             A field technician or geophysicist enters or uploads the stations.
           </EmptyState>
         ) : (
-          <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+          <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
             <StationTable stations={line.stations} />
             <ElevationProfile stations={line.stations} />
           </div>
@@ -102,56 +102,67 @@ function StationWorkbench({ line }: { line: LineDetail }) {
   return (
     <Section title="Stations" description={DESCRIPTION}>
       <div className="flex flex-col gap-6">
-        <div className="flex flex-wrap items-center gap-3">
-          <Button onClick={onSave} busy={save.isPending} busyLabel="Saving…" disabled={!dirty} data-testid="stations-save">
-            Save stations
-          </Button>
-          <Button variant="secondary" onClick={() => change([...rows, nextRow(rows)])} data-testid="stations-add">
-            Add row
-          </Button>
-          {dirty && (
-            <Button variant="quiet" onClick={() => (setRows(toDraft(line.stations)), setChecked(false), save.reset())}>
-              Discard changes
-            </Button>
-          )}
-          <p role="status" className="text-sm text-stone-600">
-            {saved && !dirty ? (
-              <span className="font-semibold text-accent-800">Saved {line.stations.length} stations.</span>
-            ) : dirty ? (
-              'Unsaved changes.'
-            ) : (
-              `${line.stations.length} stations on record.`
+        {preview.length > 1 && <ElevationProfile stations={preview} />}
+        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
+          <div className="flex min-w-0 flex-col gap-4">
+            <div className="flex flex-wrap items-center gap-3">
+              <Button onClick={onSave} busy={save.isPending} busyLabel="Saving…" disabled={!dirty} data-testid="stations-save">
+                Save stations
+              </Button>
+              <Button variant="secondary" onClick={() => change([...rows, nextRow(rows)])} data-testid="stations-add">
+                Add row
+              </Button>
+              {dirty && (
+                <Button variant="quiet" onClick={() => (setRows(toDraft(line.stations)), setChecked(false), save.reset())}>
+                  Discard changes
+                </Button>
+              )}
+              <p role="status" data-testid="stations-status" className="text-sm text-stone-600">
+                {saved && !dirty ? (
+                  <span className="font-semibold text-accent-800">Saved {line.stations.length} stations.</span>
+                ) : dirty ? (
+                  'Unsaved changes.'
+                ) : (
+                  `${line.stations.length} stations on record.`
+                )}
+              </p>
+            </div>
+            {(problemCount > 0 || (save.isError && !isApiError(save.error, 422)) || server.other.length > 0) && (
+              <div role="alert" data-testid="stations-alert" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
+                <p className="font-semibold">
+                  {problemCount > 0
+                    ? `${problemCount === 1 ? 'One row needs' : `${problemCount} rows need`} attention before the table can be saved; see the rows marked below.`
+                    : errorMessage(save.error)}
+                </p>
+                {server.other.length > 0 && (
+                  <ul className="mt-1 list-disc pl-5 text-sm">
+                    {server.other.map((m, i) => (
+                      <li key={i}>{m}</li>
+                    ))}
+                  </ul>
+                )}
+              </div>
             )}
-          </p>
-        </div>
-        {(problemCount > 0 || (save.isError && !isApiError(save.error, 422)) || server.other.length > 0) && (
-          <div role="alert" data-testid="stations-alert" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
-            <p className="font-semibold">
-              {problemCount > 0
-                ? `${problemCount === 1 ? 'One row needs' : `${problemCount} rows need`} attention before the table can be saved; see the rows marked below.`
-                : errorMessage(save.error)}
-            </p>
-            {server.other.length > 0 && (
-              <ul className="mt-1 list-disc pl-5 text-sm">
-                {server.other.map((m, i) => (
-                  <li key={i}>{m}</li>
-                ))}
-              </ul>
+            {rows.length === 0 ? (
+              <EmptyState title="No stations yet" testId="stations-empty">
+                Add a first row and type, or paste cells from a spreadsheet into it, or upload a CSV file.
+              </EmptyState>
+            ) : (
+              <StationEditor rows={rows} errors={errors} onChange={change} />
             )}
           </div>
-        )}
-        {rows.length === 0 ? (
-          <EmptyState title="No stations yet" testId="stations-empty">
-            Add a first row and type, or paste cells from a spreadsheet into it, or upload a CSV file below.
-          </EmptyState>
-        ) : (
-          <StationEditor rows={rows} errors={errors} onChange={change} />
-        )}
-        <p className="text-sm text-stone-600">
-          Tip: copy three columns (station, x, elevation) from a spreadsheet and paste them into any cell; rows are added as needed. Enter moves down a column.
-        </p>
-        {preview.length > 1 && <ElevationProfile stations={preview} />}
-        <StationCsvUpload lineId={line.id} current={line.stations.length} onStored={onStoredFromFile} />
+          <div className="flex flex-col gap-4">
+            <StationCsvUpload lineId={line.id} current={line.stations.length} onStored={onStoredFromFile} />
+            <div className="rounded-lg border border-stone-200 bg-white p-4 text-sm text-stone-700">
+              <p className="font-semibold text-stone-800">Working in the table</p>
+              <ul className="mt-1 list-disc space-y-1 pl-5">
+                <li>Copy three columns (station, x, elevation) from a spreadsheet and paste them into any cell; rows are added as needed.</li>
+                <li>Enter moves down a column, Shift+Enter up.</li>
+                <li>x must grow down the table, and each station number may appear once.</li>
+              </ul>
+            </div>
+          </div>
+        </div>
       </div>
     </Section>
   );
