@@ -30,6 +30,8 @@ export interface Ray {
 const EPS = 1e-9; // in cells
 /** An interface edge is a head-wave conduit when time falls along it at ≥ this share of the fast side's slowness (cos 14°: dips to about 14°). */
 const CONDUIT = 0.97;
+/** Distance (cell diagonals) from the source within which a clean straight segment ends the ray. */
+const NEAR_CELLS = 3;
 
 interface Move {
   /** Direction in grid units per metre. */
@@ -49,6 +51,7 @@ const grad = { gx: 0, gd: 0 };
 /** Reusable tracer for one model (cell slownesses computed once). */
 export class RayTracer {
   private cells: CellSlowness;
+  private partial: Uint8Array;
 
   constructor(
     readonly grid: Grid,
@@ -59,6 +62,15 @@ export class RayTracer {
     const s = new Float64Array(n);
     for (let i = 0; i < n; i++) s[i] = active[i] ? 1 / velocity[i] : Infinity;
     this.cells = cellSlowness(grid, s, active);
+    // Cells with an air corner (along the ground surface).
+    const ncx = grid.nx - 1;
+    this.partial = new Uint8Array(ncx * (grid.nz - 1));
+    for (let cz = 0; cz < grid.nz - 1; cz++) {
+      for (let cx = 0; cx < ncx; cx++) {
+        const i = cz * grid.nx + cx;
+        this.partial[cz * ncx + cx] = active[i] && active[i + 1] && active[i + grid.nx] && active[i + grid.nx + 1] ? 0 : 1;
+      }
+    }
   }
 
   trace(times: Float64Array, receiver: Point, source: Point): Ray {
@@ -82,13 +94,19 @@ export class RayTracer {
     const book = (cell: number, len: number): void => {
       if (len > 0) perCell.set(cell, (perCell.get(cell) ?? 0) + len);
     };
-    const finish = Math.hypot(dx, dz) * 1.01;
+    // Finish straight within one cell diagonal of the source, or within NEAR_CELLS diagonals when
+    // the straight segment crosses only smooth ground cells (there the field is the source's own
+    // cone, whose bilinear gradient is poorest right next to the source).
+    const diag = Math.hypot(dx, dz);
+    const finish = diag * 1.01;
     const maxStep = 0.5; // cells
     const maxSteps = 20 * (nx + nz) + 100;
     const T = times;
 
     let steps = 0;
-    while (Math.hypot((fx - sfx) * dx, (fz - sfz) * dz) > finish && steps++ < maxSteps) {
+    while (steps++ < maxSteps) {
+      const dist = Math.hypot((fx - sfx) * dx, (fz - sfz) * dz);
+      if (dist <= finish || (dist <= NEAR_CELLS * diag && this.smoothStraight(fx, fz, sfx, sfz))) break;
       const move = this.chooseMove(T, fx, fz);
       if (!move) break; // no descent (bottom of the discrete field): finish straight
       const len = Math.min(move.limit, maxStep * Math.min(dx, dz));
@@ -230,6 +248,15 @@ export class RayTracer {
     grad.gx = gx / w;
     grad.gd = gd / w;
     return true;
+  }
+
+  /** True when the straight segment crosses only ground cells without a velocity contrast. */
+  private smoothStraight(fx: number, fz: number, tx: number, tz: number): boolean {
+    let clean = true;
+    this.straight(fx, fz, tx, tz, (cell) => {
+      if (this.cells.contrast[cell] !== 0 || !Number.isFinite(this.cells.value[cell]) || this.partial[cell] !== 0) clean = false;
+    });
+    return clean;
   }
 
   /** Book the straight segment (fx, fz) → (tx, tz) to the cells it crosses. */
