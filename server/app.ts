@@ -3,6 +3,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
+import type { Queue } from 'bullmq';
 import type { Redis } from 'ioredis';
 import type pg from 'pg';
 import { requireCsrfToken } from './auth/csrf';
@@ -14,12 +15,14 @@ import { apiRouters } from './routes';
 export interface AppDeps {
   redis: Redis;
   pgPool: pg.Pool;
+  /** Producer side of the job queue. */
+  queue: Queue;
   /** Folder of the built client; served with a fallback to index.html when present. */
   clientDir?: string;
 }
 
 /** The whole HTTP app, without listening: tests drive it with supertest. */
-export function createApp({ redis, pgPool, clientDir = path.resolve('dist') }: AppDeps): Express {
+export function createApp({ redis, pgPool, queue, clientDir = path.resolve('dist') }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.use(
@@ -44,7 +47,7 @@ export function createApp({ redis, pgPool, clientDir = path.resolve('dist') }: A
 
   const api = express.Router();
   api.use(requireCsrfToken);
-  api.use(...apiRouters(redis));
+  api.use(...apiRouters(redis, queue));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -35,3 +35,18 @@ export const projectOfModel: ProjectScope = async (req) => {
   const rows = await dataSource.query('SELECT l.project_id FROM velocity_models m JOIN survey_lines l ON l.id = m.line_id WHERE m.id = $1', [id]);
   return rows[0]?.project_id ?? null;
 };
+
+/** POST /api/runs names its model in the body; the model's line decides the project. */
+export const projectOfBodyModel: ProjectScope = async (req) => {
+  const id = req.body?.modelId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM velocity_models m JOIN survey_lines l ON l.id = m.line_id WHERE m.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};
+
+export const projectOfRun: ProjectScope = async (req) => {
+  const id = req.params.runId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM runs r JOIN survey_lines l ON l.id = r.line_id WHERE r.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};

@@ -41,6 +41,10 @@ export const policyTable = {
   'model.read': { roles: STAFF },
   'model.update': { roles: ['geophysicist'] },
 
+  'runs.create': { roles: ['geophysicist', 'lead'] },
+  'run.read': { roles: STAFF },
+  'run.cancel': { roles: ['geophysicist', 'lead'] },
+
   'pickset.read': { roles: STAFF },
   'pickset.revise': { roles: ['geophysicist'] },
 } as const satisfies Record<string, Rule>;

@@ -1,14 +1,16 @@
 import type { Router } from 'express';
+import type { Queue } from 'bullmq';
 import type { Redis } from 'ioredis';
 import { authRouter } from './auth';
 import { healthRouter } from './health';
 import { linesRouter } from './lines';
 import { modelsRouter } from './models';
 import { pickSetsRouter } from './pickSets';
+import { runsRouter } from './runs';
 import { projectsRouter } from './projects';
 import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
-export function apiRouters(redis: Redis): Router[] {
-  return [healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter()];
+export function apiRouters(redis: Redis, queue: Queue): Router[] {
+  return [healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter(), runsRouter(queue)];
 }

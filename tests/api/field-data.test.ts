@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/dataSource';
-import { signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
+import { binaryBody, signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
 import { emailOf, PASSWORD, resetWorld, type World } from './support/world';
 
 const fixture = (name: string) => readFileSync(`fixtures/picks/${name}`);
@@ -72,11 +72,7 @@ describe('stations, pick uploads and quality checks', () => {
       const lines = bytes.toString('utf8').split('\n').filter((l) => l.trim() && !l.startsWith('#'));
       const shotIds = new Set(lines.slice(1).map((l) => l.split(',')[0]));
       expect(res.body).toEqual({ id: expect.any(String), shots: shotIds.size, picks: lines.length - 1 });
-      const file = await tech.get(`/api/picksets/${res.body.id}/file`).buffer(true).parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      });
+      const file = await tech.get(`/api/picksets/${res.body.id}/file`).buffer(true).parse(binaryBody);
       expect(Buffer.compare(file.body, bytes)).toBe(0);
       const line = (await tech.get(`/api/lines/${world.lineA.id}`)).body;
       expect(line.pickSets[0]).toMatchObject({ id: res.body.id, fileName: 'line-a.picks.csv', shots: shotIds.size, revision: 0, excluded: 0 });

@@ -1,15 +1,10 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/dataSource';
-import { signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
+import { binaryBody, signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
 import { emailOf, PASSWORD, resetWorld, type World } from './support/world';
 
 const fixture = (name: string) => JSON.parse(readFileSync(`fixtures/models/${name}`, 'utf8'));
-const binary = (r: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  r.on('data', (c: Buffer) => chunks.push(c));
-  r.on('end', () => cb(null, Buffer.concat(chunks)));
-};
 
 describe('velocity model versions', () => {
   let t: TestApp;
@@ -89,7 +84,7 @@ describe('velocity model versions', () => {
   it('serves the rasterised grid as Float32 with air as NaN', async () => {
     const file = fixture('three-layer.model.json');
     const saved = await geo.post(`${url()}?name=grid-check`).set('X-CSRF-Token', geo.csrf).send(file);
-    const res = await geo.get(`/api/models/${saved.body.id}/grid`).buffer(true).parse(binary);
+    const res = await geo.get(`/api/models/${saved.body.id}/grid`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     expect(JSON.parse(res.headers['x-grid'])).toMatchObject({ nx: 241, nz: 61 });
     const v = new Float32Array(res.body.buffer, res.body.byteOffset, res.body.length / 4);

@@ -38,6 +38,12 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/models/:modelId': STAFF_A,
   'GET /api/models/:modelId/grid': STAFF_A,
   'PUT /api/models/:modelId': ['geophysicist'],
+  'POST /api/runs': ['geophysicist', 'lead'],
+  'GET /api/runs/:runId': STAFF_A,
+  'GET /api/runs/:runId/residuals': STAFF_A,
+  'GET /api/runs/:runId/fields/:shotId': STAFF_A,
+  'GET /api/runs/:runId/rays': STAFF_A,
+  'POST /api/runs/:runId/cancel': ['geophysicist', 'lead'],
   'GET /api/picksets/:pickSetId': STAFF_A,
   'POST /api/picksets/:pickSetId/revisions': ['geophysicist'],
   'GET /api/picksets/:pickSetId/file': STAFF_A,
@@ -52,7 +58,7 @@ interface RouteInfo {
 
 function listRoutes(t: TestApp): RouteInfo[] {
   const out: RouteInfo[] = [];
-  for (const router of apiRouters(t.redis)) {
+  for (const router of apiRouters(t.redis, t.queue)) {
     for (const layer of router.stack as { route?: { path: string; methods: Record<string, boolean>; stack: { handle: { policyAction?: string } }[] } }[]) {
       if (!layer.route) continue;
       for (const method of Object.keys(layer.route.methods)) {
@@ -72,7 +78,18 @@ function concretePath(path: string, w: World): string {
     .replace(':lineId', w.lineA.id)
     .replace(':pickSetId', w.pickSetA)
     .replace(':modelId', w.modelA)
+    .replace(':runId', w.runA)
+    .replace(':shotId', 'F')
     .replace(':userId', w.loner.id);
+}
+
+/**
+ * Request bodies. Empty by default, so an allowed mutation stops at validation (400) and changes
+ * nothing; a route whose project is named in the body gets a real object with an invalid field.
+ */
+function bodyFor(key: string, w: World): object {
+  if (key === 'POST /api/runs') return { modelId: w.modelA, pickSetId: w.pickSetA, order: 3 };
+  return {};
 }
 
 /** Refusals by the policy layer; anything else (200, 204, 400, 404 member_not_found, 409 …) means the call got through. */
@@ -108,8 +125,7 @@ describe('route × role permission matrix', () => {
         const agent = agents.get(caller)!;
         const path = concretePath(route.path, world);
         const req = agent[route.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](path).set('X-CSRF-Token', agent.csrf);
-        // Empty bodies: an allowed mutation stops at validation (400) and changes nothing.
-        const res = route.method === 'GET' ? await req : await req.send({});
+        const res = route.method === 'GET' ? await req : await req.send(bodyFor(route.key, world));
         // /api/health answers 503 when a service is down (no worker runs in this suite); anything else must not fail.
         if (route.key !== 'GET /api/health') expect(res.status, `${caller} ${route.key}`).toBeLessThan(500);
         if (!isRefusal(res.status, res.body?.error)) actual[route.key].push(caller);

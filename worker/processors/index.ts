@@ -1,9 +1,12 @@
 import type { Job } from 'bullmq';
+import { solveJob } from './solve';
 
-/** One processor per job kind (job name → function). Later work registers solve and report jobs here. */
+/** One processor per job kind (job name → function). */
 export type Processor = (job: Job) => Promise<unknown>;
 
-export const processors: Record<string, Processor> = {};
+export const processors: Record<string, Processor> = {
+  solve: solveJob,
+};
 
 export async function dispatch(job: Job): Promise<unknown> {
   const processor = processors[job.name];

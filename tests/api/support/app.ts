@@ -6,11 +6,14 @@ import { createApp } from '../../../server/app';
 import { createPgPool } from '../../../server/auth/session';
 import { initDataSource, dataSource } from '../../../server/db/dataSource';
 import { createRedis } from '../../../server/queue/connection';
+import { createJobQueue } from '../../../server/queue/queue';
+import type { Queue } from 'bullmq';
 
 export interface TestApp {
   app: Express;
   redis: Redis;
   pgPool: pg.Pool;
+  queue: Queue;
   close(): Promise<void>;
 }
 
@@ -20,13 +23,15 @@ export async function startTestApp(): Promise<TestApp> {
   const redis = createRedis();
   if (redis.status !== 'ready') await new Promise((resolve) => redis.once('ready', resolve));
   const pgPool = createPgPool();
-  const app = createApp({ redis, pgPool, clientDir: '/nonexistent' });
+  const queue = createJobQueue();
+  const app = createApp({ redis, pgPool, queue, clientDir: '/nonexistent' });
   return {
     app,
     redis,
     pgPool,
+    queue,
     async close() {
-      await Promise.allSettled([redis.quit(), pgPool.end()]);
+      await Promise.allSettled([queue.close(), redis.quit(), pgPool.end()]);
       await dataSource.destroy();
     },
   };
@@ -47,4 +52,12 @@ export async function signedInAgent(app: Express, email: string, password: strin
   await agent.post('/api/auth/login').set('X-CSRF-Token', agent.csrf).send({ email, password }).expect(200);
   agent.csrf = (await agent.get('/api/auth/csrf').expect(200)).body.token;
   return agent;
+}
+
+/** A supertest body parser that keeps binary responses (fields, grids, files) as one Buffer. */
+export function binaryBody(res: request.Response, done: (err: Error | null, body: Buffer) => void): void {
+  const stream = res as unknown as NodeJS.ReadableStream;
+  const chunks: Buffer[] = [];
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
 }

@@ -1,6 +1,6 @@
 import { dataSource } from '../../../server/db/dataSource';
 import { hashPassword } from '../../../server/auth/password';
-import { Project, ProjectMember, SurveyLine, User } from '../../../server/entities';
+import { Project, ProjectMember, Run, SurveyLine, User } from '../../../server/entities';
 import type { ProjectRole } from '../../../shared/schemas/projects';
 import { importPicks } from '../../../server/services/importPicks';
 import { saveModelVersion } from '../../../server/services/models';
@@ -21,6 +21,8 @@ export interface World {
   pickSetA: string;
   /** Version 1 of model "main" on line A: 600 m/s homogeneous, 25 m × 10 m at 0.5 m. */
   modelA: string;
+  /** A finished run row of model A against pick set A (no results stored). */
+  runA: string;
   /** An active account that belongs to no project. */
   loner: User;
 }
@@ -51,7 +53,9 @@ export async function resetWorld(): Promise<World> {
   const lineB = await lines.save(lines.create({ projectId: projectB.id, name: 'B-1' }));
   const { id: pickSetA } = await importPicks(users.field_tech.id, projectA.id, lineA.id, 'world.picks.csv', Buffer.from(WORLD_PICKS));
   const { id: modelA } = await saveModelVersion(users.geophysicist.id, projectA.id, lineA.id, WORLD_MODEL, { name: 'main', comment: '', basedOn: null });
-  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, loner };
+  const runs = dataSource.getRepository(Run);
+  const runA = (await runs.save(runs.create({ lineId: lineA.id, modelId: modelA, pickSetId: pickSetA, pickSetRevision: 0, order: 2, status: 'done', shotsTotal: 2, shotsDone: 2 }))).id;
+  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, loner };
 }
 
 /** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */

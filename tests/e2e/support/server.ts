@@ -6,6 +6,7 @@ import { createApp } from '../../../server/app';
 import { createPgPool } from '../../../server/auth/session';
 import { dataSource, initDataSource } from '../../../server/db/dataSource';
 import { createRedis } from '../../../server/queue/connection';
+import { createJobQueue } from '../../../server/queue/queue';
 import { seedDemo } from '../../../server/services/seedDemo';
 
 export interface E2eServer {
@@ -21,7 +22,8 @@ export async function startDemoServer(): Promise<E2eServer> {
   await seedDemo(dataSource);
   const redis = createRedis();
   const pgPool = createPgPool();
-  const app = createApp({ redis, pgPool, clientDir: path.resolve('dist') });
+  const queue = createJobQueue();
+  const app = createApp({ redis, pgPool, queue, clientDir: path.resolve('dist') });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -30,7 +32,7 @@ export async function startDemoServer(): Promise<E2eServer> {
     baseUrl: `http://127.0.0.1:${port}`,
     async close() {
       await new Promise((r) => server.close(r));
-      await Promise.allSettled([redis.quit(), pgPool.end()]);
+      await Promise.allSettled([queue.close(), redis.quit(), pgPool.end()]);
       await dataSource.destroy();
     },
   };
