@@ -12,6 +12,7 @@ import { presentLine } from '../presenters/project';
 import { importPicks } from '../services/importPicks';
 import { listPickSetSummaries } from '../services/lineSummary';
 import { listModelVersions } from '../services/models';
+import { listLineRuns } from '../services/runResults';
 import { listStations, replaceStations } from '../services/stations';
 
 const STATION_FILE_BYTES = 1024 * 1024;
@@ -32,9 +33,10 @@ export function linesRouter(): Router {
 
   r.get('/lines/:lineId', authorize('line.read', projectOfLine), async (req, res) => {
     const line = await dataSource.getRepository(SurveyLine).findOneByOrFail({ id: req.params.lineId as string });
-    const [stations, pickSets, models] = await Promise.all([listStations(line.id), listPickSetSummaries(line.id), listModelVersions(line.id)]);
-    // Runs arrive with their own entity.
-    res.json({ ...presentLine(line), myRole: req.access!.role, stations, pickSets, models, runs: [] });
+    const [stations, pickSets, models, runs] = await Promise.all([
+      listStations(line.id), listPickSetSummaries(line.id), listModelVersions(line.id), listLineRuns(line.id),
+    ]);
+    res.json({ ...presentLine(line), myRole: req.access!.role, stations, pickSets, models, runs });
   });
 
   // JSON array of { station, x, z }, or a CSV file in the multipart field "file".

@@ -47,3 +47,22 @@ export async function loadRays(runId: string, shotId?: string) {
     return { pickIndex: r.pick_index, shotId: r.shot_id, points: Array.from(f, (v) => Math.round(v * 1000) / 1000) };
   });
 }
+
+/** The runs of a line, newest first, with what they solved and their headline figures. */
+export async function listLineRuns(lineId: string) {
+  const rows = await dataSource.query(
+    `SELECT r.id, r.status, r.scheme_order, r.model_id, m.name AS model_name, m.version AS model_version, r.pick_set_id, s.file_name,
+            r.pick_set_revision, r.shots_done, r.shots_total, r.stats->'rms_ms' AS rms_ms, r.stats->'chi2' AS chi2,
+            r.created_at, r.finished_at, u.name AS created_by_name
+     FROM runs r JOIN velocity_models m ON m.id = r.model_id JOIN pick_sets s ON s.id = r.pick_set_id LEFT JOIN users u ON u.id = r.created_by
+     WHERE r.line_id = $1 ORDER BY r.created_at DESC`,
+    [lineId],
+  );
+  return rows.map((r: Record<string, never>) => ({
+    id: r.id, status: r.status, order: r.scheme_order,
+    model: { id: r.model_id, name: r.model_name, version: r.model_version },
+    pickSet: { id: r.pick_set_id, fileName: r.file_name, revision: r.pick_set_revision },
+    progress: { done: r.shots_done, total: r.shots_total },
+    rmsMs: r.rms_ms, chi2: r.chi2, createdAt: r.created_at, finishedAt: r.finished_at, createdBy: r.created_by_name,
+  }));
+}
