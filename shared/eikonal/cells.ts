@@ -49,6 +49,24 @@ export function cellSlowness(
     for (let cx = 0; cx < ncx; cx++) {
       const c = cz * ncx + cx;
       const i = cz * nx + cx;
+      if (active[i] && active[i + 1] && active[i + nx] && active[i + nx + 1]) {
+        // Common case, all four corners in the ground: unrolled.
+        const a = slowness[i];
+        const b = slowness[i + 1];
+        const d = slowness[i + nx];
+        const e = slowness[i + nx + 1];
+        const lo = Math.min(a, b, d, e);
+        const hi = Math.max(a, b, d, e);
+        const mean = 0.25 * (a + b + d + e);
+        if (rule === 'node' || hi <= lo * ratio) {
+          value[c] = mean;
+          contrast[c] = 0;
+        } else {
+          contrast[c] = 1;
+          value[c] = rule === 'fastest' ? lo : rule === 'slowest' ? hi : rule === 'upper' ? 0.5 * (a + b) : mean;
+        }
+        continue;
+      }
       let lo = Infinity;
       let hi = 0;
       let sum = 0;
@@ -58,12 +76,12 @@ export function cellSlowness(
       for (let k = 0; k < 4; k++) {
         const j = i + (k & 1) + (k >> 1) * nx;
         if (!active[j]) continue;
-        const s = slowness[j];
-        if (s < lo) lo = s;
-        if (s > hi) hi = s;
-        sum += s;
+        const sv = slowness[j];
+        if (sv < lo) lo = sv;
+        if (sv > hi) hi = sv;
+        sum += sv;
         cnt++;
-        if (k < 2) (upSum += s), upCnt++;
+        if (k < 2) (upSum += sv), upCnt++;
       }
       if (cnt === 0) {
         value[c] = Infinity;

@@ -42,8 +42,7 @@ export class TravelTimeSolver {
   private u: Float64Array;
   private state: Uint8Array;
   private safe: Float64Array;
-  private provisional: Float64Array;
-  private hasTwo: Uint8Array;
+
   private heap: IndexedMinHeap;
   private cells: CellSlowness | undefined;
 
@@ -54,8 +53,7 @@ export class TravelTimeSolver {
     this.u = new Float64Array(n);
     this.state = new Uint8Array(n);
     this.safe = new Float64Array(n);
-    this.provisional = new Float64Array(n);
-    this.hasTwo = new Uint8Array(n);
+
     this.heap = new IndexedMinHeap(n);
   }
 
@@ -77,9 +75,7 @@ export class TravelTimeSolver {
       state[i] = active[i] ? FAR : AIR;
     }
     T.fill(Infinity);
-    this.safe.fill(Infinity);
-    this.provisional.fill(Infinity);
-    this.hasTwo.fill(0);
+
     this.cells = cellSlowness(grid, S, active, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, this.cells);
     const cellS = this.cells.value;
     const cellC = this.cells.contrast;
@@ -92,7 +88,6 @@ export class TravelTimeSolver {
     for (let k = 0; k < start.nodes.length; k++) {
       const i = start.nodes[k];
       T[i] = start.times[k];
-      this.safe[i] = T[i];
       heap.pushOrDecrease(i, T[i]);
       state[i] = TRIAL;
     }
@@ -110,8 +105,7 @@ export class TravelTimeSolver {
       anyContrast,
       T, U, S, state, cellS, cellC, heap,
       safe: this.safe,
-      provisional: this.provisional,
-      hasTwo: this.hasTwo,
+
     });
     return T;
   }

@@ -40,23 +40,24 @@ export interface MarchState {
   cellS: Float64Array;
   cellC: Uint8Array;
   heap: IndexedMinHeap;
-  /** Least safe candidate (two-axis or plain one-axis) per node; Infinity to start. */
+  /** Safe minimum of a node whose key is provisional (read only while flagged). */
   safe: Float64Array;
-  /** Least provisional near-axis candidate per node; Infinity to start. */
-  provisional: Float64Array;
-  /** 1 once a node has had a causal two-axis candidate. */
-  hasTwo: Uint8Array;
 }
 
+/** Node kinds in the low two bits of `state`. */
 export const FAR = 0;
 export const TRIAL = 1;
 export const DONE = 2;
 export const AIR = 3;
+const KIND = 3;
+/** Flag: the node's key is a provisional near-axis value (its safe minimum is in `safe`). */
+const PROVISIONAL = 4;
+/** Flag: the node has had a causal two-axis candidate. */
+const HAS_TWO = 8;
 
 export function march(m: MarchState): void {
-  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, T, U, S, state, cellS, cellC, heap, safe, provisional, hasTwo, vs, gx, gz } = m;
+  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, T, U, S, state, cellS, cellC, heap, safe, vs, gx, gz } = m;
   const nearAxisOn = factored;
-  const bendPerM = Math.sqrt(gx * gx + gz * gz) / vs;
   const ncx = nx - 1;
   const invDx = 1 / dx;
   const invDz = 1 / dz;
@@ -87,8 +88,7 @@ export function march(m: MarchState): void {
       if (qix < 0 || qix >= nx || qiz < 0 || qiz >= nz) continue;
       const step = alongX ? sgn : sgn * nx; // index offset p → q
       const q = p + step;
-      const st = state[q];
-      if (st >= DONE) continue;
+      if ((state[q] & KIND) >= DONE) continue;
 
       const xq = x0 + qix * dx;
       const zq = z0 - qiz * dz;
@@ -116,7 +116,7 @@ export function march(m: MarchState): void {
         const b2iz = alongX ? piz : piz - sgn;
         if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
           const p2 = p - step;
-          if (state[p2] === DONE && T[p2] <= Tp) {
+          if ((state[p2] & KIND) === DONE && T[p2] <= Tp) {
             const s1 = S[p];
             const s2 = S[p2];
             let lo = sq < s1 ? sq : s1;
@@ -163,11 +163,12 @@ export function march(m: MarchState): void {
       // across (exact in uniform ground). It holds only until a two-axis candidate arrives: in
       // varying ground τ changes across the line and the guess could undershoot.
       let tau = Infinity;
-      // Cheap pre-check: the reference axis strays from the straight source line by at most about
-      // r²·|G|/(2v_s) (the sagitta of its rays), so farther nodes skip the logarithm.
+      // Cheap pre-check without the logarithm: the reference's across slope vanishes where
+      // e_across = r²·G_across/(2v) (v the reference velocity at q), so only nodes within a few
+      // cells of that line go on to the exact test.
       const oAcross = alongX ? zq - zs : xq - xs;
       const hAcross = alongX ? dz : dx;
-      if (nearAxisOn && sEdge === sq && Math.abs(oAcross) <= hAcross + rq * rq * bendPerM) {
+      if (nearAxisOn && sEdge === sq && Math.abs(oAcross - (rq * rq * (alongX ? gz : gx)) / (2 * (vs + gx * (xq - xs) + gz * (zq - zs)))) <= 3 * hAcross) {
         // Slope of ln T₀ across the axis; small means q sits within about a cell of the reference's
         // own axis (the line where the across slope vanishes), where no upwind neighbour exists.
         const kappa = referenceLogSlope(xq - xs, zq - zs, gx, gz, vs, alongX);
@@ -193,7 +194,7 @@ export function march(m: MarchState): void {
         if (bix < 0 || bix >= nx || biz < 0 || biz >= nz) continue;
         const bStep = alongX ? side * nx : side;
         const b = q + bStep;
-        if (state[b] !== DONE) continue;
+        if ((state[b] & KIND) !== DONE) continue;
         const Tb = T[b];
         const Ub = U[b];
         const iB = alongX ? side * invDz : -side * invDx;
@@ -205,7 +206,7 @@ export function march(m: MarchState): void {
           const b2iz = alongX ? biz + side : biz;
           if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
             const b2 = b + bStep;
-            if (state[b2] === DONE && T[b2] <= Tb) {
+            if ((state[b2] & KIND) === DONE && T[b2] <= Tb) {
               const s1 = S[b];
               const s2 = S[b2];
               let lo = sq < s1 ? sq : s1;
@@ -235,16 +236,38 @@ export function march(m: MarchState): void {
         }
       }
 
-      // Key = least safe candidate; a provisional one counts while the node has no two-axis candidate.
-      if (two) hasTwo[q] = 1;
-      if (best < safe[q]) safe[q] = best;
-      if (tau < provisional[q]) provisional[q] = tau;
-      const key = hasTwo[q] !== 0 || provisional[q] >= safe[q] ? safe[q] : provisional[q];
+      // Key = least safe candidate; a provisional one counts while the node has no two-axis
+      // candidate. T holds the key; `safe` keeps the safe minimum only while the key is provisional.
+      let st2 = state[q];
+      if (two) st2 |= HAS_TWO;
+      let key: number;
+      if ((st2 & PROVISIONAL) !== 0) {
+        let sf = safe[q];
+        if (best < sf) sf = best;
+        safe[q] = sf;
+        let pv = T[q];
+        if (tau < pv) pv = tau;
+        if ((st2 & HAS_TWO) !== 0 || pv >= sf) {
+          key = sf;
+          st2 &= ~PROVISIONAL;
+        } else {
+          key = pv;
+        }
+      } else {
+        const sf = best < T[q] ? best : T[q];
+        if ((st2 & HAS_TWO) === 0 && tau < sf) {
+          safe[q] = sf;
+          key = tau;
+          st2 |= PROVISIONAL;
+        } else {
+          key = sf;
+        }
+      }
       if (key !== T[q]) {
         T[q] = key;
         heap.update(q, key);
-        if (st === FAR) state[q] = TRIAL;
       }
+      state[q] = (st2 & ~KIND) | TRIAL;
     }
   }
 }
