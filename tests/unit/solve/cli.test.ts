@@ -16,7 +16,7 @@ const fixture = (p: string) => join(root, 'fixtures', p);
 const dir = mkdtempSync(join(tmpdir(), 'timefield-solve-'));
 
 function solve(...args: string[]) {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/solve.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 });
+  const r = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/solve.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 110_000 });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 const write = (name: string, text: string) => {
@@ -54,7 +54,10 @@ const picksCsv = [
   }),
 ].join('\n');
 
-describe('npm run solve on a homogeneous model', () => {
+// Each spawn starts tsx and (for solves) two worker threads: seconds on a busy machine.
+const SPAWN = { timeout: 120_000 };
+
+describe('npm run solve on a homogeneous model', SPAWN, () => {
   let picksPath: string;
   let residualPath: string;
   let out: ReturnType<typeof solve>;
@@ -63,7 +66,7 @@ describe('npm run solve on a homogeneous model', () => {
     picksPath = write('homog.picks.csv', picksCsv);
     residualPath = join(dir, 'res.csv');
     out = solve('--model', fixture('models/homogeneous.model.json'), '--picks', picksPath, '--json', '--residuals', residualPath, '--threads', '2');
-  });
+  }, SPAWN.timeout);
 
   it('exits 0 and ends stdout with one JSON object holding exactly the contract keys', () => {
     expect(out.stderr).toBe('');
@@ -123,7 +126,7 @@ describe('npm run solve on a homogeneous model', () => {
   });
 });
 
-describe('npm run solve: bad input', () => {
+describe('npm run solve: bad input', SPAWN, () => {
   const good = ['--model', fixture('models/two-layer.model.json'), '--picks', fixture('picks/line-a.picks.csv')];
   const expectFailure = (r: ReturnType<typeof solve>, code: number, pattern: RegExp) => {
     expect(r.code).toBe(code);

@@ -39,7 +39,7 @@ describe('solveShot (in process)', () => {
 
 describe('ShotPool (worker threads, loaded from the test runner)', () => {
   const pool = new ShotPool(2);
-  afterAll(() => pool.close());
+  afterAll(() => pool.close(), 60_000);
 
   it('gives the in-process numbers, in job order', async () => {
     await pool.warmUp();
