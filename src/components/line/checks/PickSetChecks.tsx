@@ -1,4 +1,4 @@
-import { useMemo, useState, type ReactNode } from 'react';
+import { useCallback, useDeferredValue, useMemo, useState, type ReactNode } from 'react';
 import { findReciprocalPairs, flagSuspectPicks, travelTimeCurves, type QcPick } from '../../../../shared/qc';
 import { useCreateRevision } from '../../../api/picksets';
 import type { PickSetDetail } from '../../../api/types';
@@ -11,8 +11,8 @@ import { toQcPicks } from './qcPicks';
 import { ReciprocalTable } from './ReciprocalTable';
 import { ShotsTable } from './ShotsTable';
 import { SuspectPicksTable } from './SuspectPicksTable';
+import { OVERLAY } from './chartTraces';
 import { TravelTimeChart } from './TravelTimeChart';
-import { showMetres } from './numbers';
 
 function Fact({ term, children, tone }: { term: string; children: ReactNode; tone?: 'warn' }) {
   return (
@@ -42,7 +42,8 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
   const [draft, setDraft] = useState<Map<number, string>>(saved);
   const [draftOf, setDraftOf] = useState(data);
   const [selected, setSelected] = useState<Set<number>>(new Set());
-  const [hidden, setHidden] = useState<Set<string>>(new Set());
+  // Hundreds of agreeing pairs would bury the curves in diamonds: start with those hidden.
+  const [hidden, setHidden] = useState<Set<string>>(() => new Set(data.qc.reciprocalPairs.length > 40 ? [OVERLAY.pairOk] : []));
   const [tolerance, setTolerance] = useState(String(data.qc.reciprocalToleranceMs));
   const [dragMode, setDragMode] = useState<'zoom' | 'select'>('zoom');
   const [fitRequest, setFitRequest] = useState<FitRequest>({ shotId: data.shots[0]?.shotId ?? '', xFrom: '', xTo: '' });
@@ -62,11 +63,16 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
   const curves = useMemo(() => travelTimeCurves(qcPicks), [qcPicks]);
   const flags = useMemo(() => flagSuspectPicks(qcPicks), [qcPicks]);
   const tol = readTolerance(tolerance);
-  const toleranceMs = tol.ms ?? data.qc.reciprocalToleranceMs;
+  // Typing stays responsive on a large pick set; the chart catches up with the deferred value.
+  const toleranceMs = useDeferredValue(tol.ms ?? data.qc.reciprocalToleranceMs);
   const pairs = useMemo(() => findReciprocalPairs(qcPicks, { toleranceS: toleranceMs / 1000 }), [qcPicks, toleranceMs]);
   const byShot = useMemo(() => {
     const m = new Map<string, QcPick[]>();
-    for (const p of qcPicks) m.set(p.shotId, [...(m.get(p.shotId) ?? []), p]);
+    for (const p of qcPicks) {
+      const list = m.get(p.shotId);
+      if (list) list.push(p);
+      else m.set(p.shotId, [p]);
+    }
     return m;
   }, [qcPicks]);
   const shotOrder = useMemo(() => new Map(curves.map((c, k) => [c.shotId, k])), [curves]);
@@ -76,27 +82,42 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
   const overTolerance = pairs.filter((p) => p.flagged).length;
   const latest = data.revisions.at(-1)?.number ?? data.revision.number;
 
-  function toggleTrace(name: string) {
+  // Stable callbacks, so the memoised chart is not redrawn when unrelated state changes.
+  const toggleTrace = useCallback((name: string) => {
     setHidden((h) => {
       const next = new Set(h);
       if (!next.delete(name)) next.add(name);
       return next;
     });
-  }
+  }, []);
 
-  function toggleSelected(indices: number[], on: boolean) {
+  const toggleSelected = useCallback((indices: number[], on: boolean) => {
     setSelected((s) => {
       const next = new Set(s);
-      for (const i of indices) on ? next.add(i) : next.delete(i);
+      for (const i of indices) {
+        if (on) next.add(i);
+        else next.delete(i);
+      }
       return next;
     });
-  }
+  }, []);
 
-  function onPickClick(index: number) {
-    const p = picksByIndex.get(index);
-    if (p) setFitRequest((r) => ({ ...r, shotId: p.shotId }));
-    if (canExclude) toggleSelected([index], !selected.has(index));
-  }
+  const onPickClick = useCallback(
+    (index: number) => {
+      const p = picksByIndex.get(index);
+      if (p) setFitRequest((r) => ({ ...r, shotId: p.shotId }));
+      if (canExclude) setSelected((s) => {
+        const next = new Set(s);
+        if (!next.delete(index)) next.add(index);
+        return next;
+      });
+    },
+    [picksByIndex, canExclude],
+  );
+
+  const onRange = useCallback((a: number, b: number) => {
+    setFitRequest((r) => ({ ...r, xFrom: String(+a.toFixed(2)), xTo: String(+b.toFixed(2)) }));
+  }, []);
 
   function save(comment: string) {
     const exclusions = [...draft].map(([index, reason]) => ({ index, reason })).sort((a, b) => a.index - b.index);
@@ -153,7 +174,7 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
             selected={selected}
             dragMode={dragMode}
             onToggleTrace={toggleTrace}
-            onRange={(a, b) => setFitRequest((r) => ({ ...r, xFrom: showMetres(a).replace(/,/g, ''), xTo: showMetres(b).replace(/,/g, '') }))}
+            onRange={onRange}
             onPickClick={onPickClick}
           />
         </div>
@@ -187,6 +208,7 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
         {canExclude && (
           <div className="mb-4">
             <ExclusionForm
+              key={data.revision.number}
               selectedCount={selected.size}
               selectedExcluded={[...selected].filter((i) => draft.has(i)).length}
               added={added}

@@ -1,184 +1,58 @@
-import type { PickRow } from '../../../api/types';
-import type { PickFlag, ReciprocalPair, TravelTimeCurve } from '../../../../shared/qc';
-import { axisStyle, CHART_FONT, shotColour } from '../plot/chartTheme';
+import { memo, useMemo } from 'react';
+import { axisStyle, CHART_FONT } from '../plot/chartTheme';
 import { LazyPlot } from '../plot/LazyPlot';
-import type { KeptFit } from './fits';
-import { showVelocity } from './numbers';
-import { SUSPECT_LABELS } from './qcPicks';
+import { chartTraces, fitAnnotations, type ChartInput } from './chartTraces';
 
-export interface TravelTimeChartProps {
+export interface TravelTimeChartProps extends ChartInput {
   revisionKey: string;
-  curves: TravelTimeCurve[];
-  picksByIndex: ReadonlyMap<number, PickRow>;
-  excluded: ReadonlySet<number>;
-  hidden: ReadonlySet<string>;
-  flags: readonly PickFlag[];
-  pairs: readonly ReciprocalPair[];
-  fits: readonly KeptFit[];
-  selected: ReadonlySet<number>;
   dragMode: 'zoom' | 'select';
   onToggleTrace: (name: string) => void;
   onRange: (xFrom: number, xTo: number) => void;
   onPickClick: (index: number) => void;
 }
 
-/** Dragging a fit range selects points; keep every point fully drawn rather than dimming the rest. */
-const KEEP = { marker: { opacity: 1 } };
+/** Fixed, so plotly never sees a "changed" config and redraws for nothing. */
+const CONFIG = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'autoScale2d'] };
 
-/** Above this many points SVG gets sluggish; WebGL draws the same chart. */
-const GL_THRESHOLD = 20_000;
+/** A horizontal legend for a few shots; with many, a scrolling one at the side keeps the axis title clear. */
+const legendFor = (entries: number) =>
+  entries <= 14 ? { orientation: 'h', yanchor: 'top', y: -0.16, font: { size: 13 } } : { orientation: 'v', x: 1.01, y: 1, font: { size: 12 } };
 
-const OVERLAY = {
-  excluded: 'Excluded picks',
-  suspect: 'Suspect picks',
-  pairOk: 'Reciprocal pairs within tolerance',
-  pairBad: 'Reciprocal pairs over tolerance',
-  selected: 'Selected picks',
-  shots: 'Shot positions',
-} as const;
-
-/** Travel-time curves of every shot on one chart, with the QC marks and kept velocity fits over them. */
-export function TravelTimeChart(props: TravelTimeChartProps) {
-  const { curves, picksByIndex, excluded, hidden, flags, pairs, fits, selected } = props;
-  const total = curves.reduce((n, c) => n + c.x.length, 0);
-  const scatter = total > GL_THRESHOLD ? 'scattergl' : 'scatter';
-  const vis = (name: string) => (hidden.has(name) ? 'legendonly' : true);
-  const at = (indices: Iterable<number>) => {
-    const xs: number[] = [];
-    const ys: number[] = [];
-    const ids: number[] = [];
-    for (const i of indices) {
-      const p = picksByIndex.get(i);
-      if (!p) continue;
-      xs.push(p.receiverX);
-      ys.push(p.timeMs);
-      ids.push(i);
-    }
-    return { xs, ys, ids };
-  };
-
-  const shotTraces = curves.map((c, k) => {
-    const keep: number[] = [];
-    for (let j = 0; j < c.x.length; j++) if (!excluded.has(c.index[j])) keep.push(j);
-    return {
-      type: scatter,
-      mode: 'lines+markers',
-      name: c.shotId,
-      visible: vis(c.shotId),
-      x: keep.map((j) => c.x[j]),
-      y: keep.map((j) => c.t[j] * 1000),
-      customdata: keep.map((j) => c.index[j]),
-      line: { color: shotColour(k), width: 1.5 },
-      marker: { color: shotColour(k), size: 6 },
-      unselected: KEEP,
-      selected: KEEP,
-      hovertemplate: `shot ${c.shotId}<br>x %{x} m<br>t %{y:.2f} ms<extra></extra>`,
-    };
-  });
-
-  const ex = at(excluded);
-  const suspect = at(flags.map((f) => f.index));
-  const flagKind = new Map(flags.map((f) => [f.index, SUSPECT_LABELS[f.kind]]));
-  const pairPoints = (flagged: boolean) => {
-    const list = pairs.filter((p) => p.flagged === flagged);
-    const pts = at(list.flatMap((p) => [p.indexAB, p.indexBA]));
-    const text = list.flatMap((p) => {
-      const t = `${p.shotA} ↔ ${p.shotB}: |Δt| ${(p.difference * 1000).toFixed(2)} ms`;
-      return [t, t];
-    });
-    return { ...pts, text };
-  };
-  const pairOk = pairPoints(false);
-  const pairBad = pairPoints(true);
-  const sel = at(selected);
-
-  const marks = (name: string, pts: { xs: number[]; ys: number[]; ids: number[]; text?: string[] }, marker: object, hovertemplate: string) => ({
-    type: scatter,
-    mode: 'markers',
-    name,
-    visible: vis(name),
-    x: pts.xs,
-    y: pts.ys,
-    customdata: pts.ids,
-    text: pts.text,
-    marker,
-    hovertemplate,
-    unselected: KEEP,
-    selected: KEEP,
-  });
-  const where = 'x %{x} m<br>t %{y:.2f} ms<extra></extra>';
-
-  const overlays = [
-    marks(OVERLAY.excluded, ex, { symbol: 'x-thin-open', size: 9, color: '#78716c', line: { width: 2, color: '#78716c' } }, `excluded pick<br>${where}`),
-    marks(OVERLAY.suspect, { ...suspect, text: suspect.ids.map((i) => flagKind.get(i) ?? '') }, { symbol: 'circle-open', size: 14, color: '#b91c1c', line: { width: 2 } }, `suspect: %{text}<br>${where}`),
-    marks(OVERLAY.pairOk, pairOk, { symbol: 'diamond-open', size: 11, color: '#57534e', line: { width: 1.5 } }, '%{text}<extra></extra>'),
-    marks(OVERLAY.pairBad, pairBad, { symbol: 'diamond-open', size: 15, color: '#b45309', line: { width: 2.5 } }, '%{text}<extra></extra>'),
-    { ...marks(OVERLAY.selected, sel, { symbol: 'square-open', size: 13, color: '#1f5d57', line: { width: 2 } }, `selected pick<br>${where}`), showlegend: sel.ids.length > 0 },
-    // Shot positions sit on a hidden second axis pinned to the foot of the chart, so they never hide picks.
-    {
-      type: 'scatter',
-      mode: curves.length <= 16 ? 'markers+text' : 'markers',
-      unselected: { marker: { opacity: 1 }, textfont: { color: '#44403c' } },
-      name: OVERLAY.shots,
-      visible: vis(OVERLAY.shots),
-      yaxis: 'y2',
-      x: curves.map((c) => c.sourceX),
-      y: curves.map(() => 0.012),
-      text: curves.map((c) => c.shotId),
-      textposition: 'top center',
-      textfont: { size: 12, color: '#44403c' },
-      marker: { symbol: 'star', size: 13, color: curves.map((_, k) => shotColour(k)), line: { width: 1, color: '#292524' } },
-      hovertemplate: 'shot %{text}<br>source x %{x} m<extra></extra>',
-      cliponaxis: false,
-    },
-  ];
-
-  const fitTraces = fits.map((f) => ({
-    type: 'scatter',
-    mode: 'lines',
-    name: `${f.shotId}: ${showVelocity(f.fit.velocity)} m/s`,
-    showlegend: false,
-    x: [f.fit.xMin, f.fit.xMax],
-    y: [f.fit.xMin, f.fit.xMax].map((x) => (f.fit.intercept + f.fit.slope * x) * 1000),
-    line: { color: '#1c1917', width: 2.5, dash: 'dash' },
-    hovertemplate: `fit on ${f.shotId}: ${showVelocity(f.fit.velocity)} m/s<extra></extra>`,
-  }));
-
-  const annotations = fits.map((f) => {
-    const xm = (f.fit.xMin + f.fit.xMax) / 2;
-    return {
-      x: xm,
-      y: (f.fit.intercept + f.fit.slope * xm) * 1000,
-      text: `<b>${showVelocity(f.fit.velocity)} m/s</b>`,
-      showarrow: false,
-      yshift: 14,
-      bgcolor: 'rgba(255,255,255,0.85)',
-      bordercolor: '#a8a29e',
-      borderpad: 2,
-      font: { size: 13, color: '#1c1917' },
-    };
-  });
+/**
+ * Travel-time curves of every shot on one chart, with the QC marks and kept velocity fits over
+ * them. Memoised: typing elsewhere on the page must not make plotly redraw thousands of points.
+ */
+export const TravelTimeChart = memo(function TravelTimeChart(props: TravelTimeChartProps) {
+  const { curves, picksByIndex, excluded, hidden, flags, pairs, fits, selected, revisionKey, dragMode } = props;
+  const data = useMemo(
+    () => chartTraces({ curves, picksByIndex, excluded, hidden, flags, pairs, fits, selected }),
+    [curves, picksByIndex, excluded, hidden, flags, pairs, fits, selected],
+  );
+  const layout = useMemo(
+    () => ({
+      font: CHART_FONT,
+      uirevision: revisionKey,
+      margin: { l: 64, r: 16, t: 16, b: 56 },
+      paper_bgcolor: 'white',
+      plot_bgcolor: 'white',
+      dragmode: dragMode,
+      selectdirection: 'h',
+      hovermode: 'closest',
+      legend: legendFor(curves.length),
+      xaxis: { ...axisStyle, title: { text: 'receiver x (m)' } },
+      yaxis: { ...axisStyle, title: { text: 'time (ms)' }, rangemode: 'tozero' },
+      yaxis2: { overlaying: 'y', range: [0, 1], visible: false, fixedrange: true },
+      annotations: fitAnnotations(fits),
+    }),
+    [revisionKey, dragMode, curves.length, fits],
+  );
 
   return (
     <LazyPlot
-      height={480}
-      data={[...shotTraces, ...overlays, ...fitTraces]}
-      layout={{
-        font: CHART_FONT,
-        uirevision: props.revisionKey,
-        margin: { l: 64, r: 16, t: 16, b: 56 },
-        paper_bgcolor: 'white',
-        plot_bgcolor: 'white',
-        dragmode: props.dragMode,
-        selectdirection: 'h',
-        hovermode: 'closest',
-        legend: { orientation: 'h', y: -0.18, font: { size: 13 } },
-        xaxis: { ...axisStyle, title: { text: 'receiver x (m)' } },
-        yaxis: { ...axisStyle, title: { text: 'time (ms)' }, rangemode: 'tozero' },
-        yaxis2: { overlaying: 'y', range: [0, 1], visible: false, fixedrange: true },
-        annotations,
-      }}
-      config={{ displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'autoScale2d'] }}
+      height={curves.length <= 14 ? 480 : 560}
+      data={data}
+      layout={layout}
+      config={CONFIG}
       onLegendClick={(e: { curveNumber: number; data: { name?: string }[] }) => {
         const name = e.data[e.curveNumber]?.name;
         if (name) props.onToggleTrace(name);
@@ -195,6 +69,4 @@ export function TravelTimeChart(props: TravelTimeChartProps) {
       }}
     />
   );
-}
-
-export const OVERLAY_NAMES = OVERLAY;
+});
