@@ -39,7 +39,8 @@ export const TAU_RADIUS_M = 1000;
 export class TravelTimeSolver {
   readonly grid: Grid;
   private slow: Float64Array;
-  private u: Float64Array;
+  /** Interleaved T, U, slowness per node for the march (see MarchState.F). */
+  private packed: Float64Array;
   private state: Uint8Array;
   private safe: Float64Array;
 
@@ -50,10 +51,9 @@ export class TravelTimeSolver {
     this.grid = { ...grid };
     const n = grid.nx * grid.nz;
     this.slow = new Float64Array(n);
-    this.u = new Float64Array(n);
+    this.packed = new Float64Array(3 * n);
     this.state = new Uint8Array(n);
     this.safe = new Float64Array(n);
-
     this.heap = new IndexedMinHeap(n);
   }
 
@@ -68,13 +68,15 @@ export class TravelTimeSolver {
     const ratio = options.contrastRatio ?? CONTRAST_RATIO;
     const T = out && out.length === n ? out : new Float64Array(n);
     const S = this.slow;
-    const U = this.u;
+    const F = this.packed;
     const state = this.state;
     for (let i = 0; i < n; i++) {
-      S[i] = active[i] ? 1 / velocity[i] : Infinity;
+      const si = active[i] ? 1 / velocity[i] : Infinity;
+      S[i] = si;
+      F[3 * i] = Infinity;
+      F[3 * i + 2] = si;
       state[i] = active[i] ? FAR : AIR;
     }
-    T.fill(Infinity);
 
     this.cells = cellSlowness(grid, S, active, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, this.cells);
     const cellS = this.cells.value;
@@ -87,8 +89,8 @@ export class TravelTimeSolver {
     const start = startTimes(grid, S, active, source, ratio);
     for (let k = 0; k < start.nodes.length; k++) {
       const i = start.nodes[k];
-      T[i] = start.times[k];
-      heap.pushOrDecrease(i, T[i]);
+      F[3 * i] = start.times[k];
+      heap.pushOrDecrease(i, start.times[k]);
       state[i] = TRIAL;
     }
     let anyContrast = false;
@@ -103,10 +105,10 @@ export class TravelTimeSolver {
       second: order === 2,
       ratio,
       anyContrast,
-      T, U, S, state, cellS, cellC, heap,
+      F, state, cellS, cellC, heap,
       safe: this.safe,
-
     });
+    for (let i = 0; i < n; i++) T[i] = F[3 * i];
     return T;
   }
 }

@@ -32,10 +32,11 @@ export interface MarchState {
   ratio: number;
   /** Whether any cell is a contrast cell (lets the loop skip the edge look-ups). */
   anyContrast: boolean;
-  T: Float64Array;
-  /** T/r (factored) or T (plain) of accepted nodes. */
-  U: Float64Array;
-  S: Float64Array;
+  /**
+   * Per node, interleaved so one cache line serves a node's three reads: F[3i] = T (travel time,
+   * the heap key), F[3i+1] = U (T/r factored, or T plain; set on acceptance), F[3i+2] = slowness.
+   */
+  F: Float64Array;
   state: Uint8Array;
   cellS: Float64Array;
   cellC: Uint8Array;
@@ -56,7 +57,7 @@ const PROVISIONAL = 4;
 const HAS_TWO = 8;
 
 export function march(m: MarchState): void {
-  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, T, U, S, state, cellS, cellC, heap, safe, vs, gx, gz } = m;
+  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, F, state, cellS, cellC, heap, safe, vs, gx, gz } = m;
   const nearAxisOn = factored;
   const ncx = nx - 1;
   const invDx = 1 / dx;
@@ -67,16 +68,16 @@ export function march(m: MarchState): void {
     state[p] = DONE;
     const pix = p % nx;
     const piz = (p - pix) / nx;
-    const Tp = T[p];
+    const Tp = F[3 * p];
     if (factored) {
       const ox = x0 + pix * dx - xs;
       const oz = z0 - piz * dz - zs;
       const r = Math.sqrt(ox * ox + oz * oz);
-      U[p] = r > 0 ? Tp / r : s0;
+      F[3 * p + 1] = r > 0 ? Tp / r : s0;
     } else {
-      U[p] = Tp;
+      F[3 * p + 1] = Tp;
     }
-    const Up = U[p];
+    const Up = F[3 * p + 1];
 
     for (let dir = 0; dir < 4; dir++) {
       const alongX = dir < 2;
@@ -104,7 +105,7 @@ export function march(m: MarchState): void {
         ex = ox * inv2;
         ez = oz * inv2;
       }
-      const sq = S[q];
+      const sq = F[3 * q + 2];
 
       // Axis through p: signed spacing q − p (z is elevation, so a deeper q has negative spacing).
       const iP = alongX ? sgn * invDx : -sgn * invDz; // 1 / spacing
@@ -116,16 +117,16 @@ export function march(m: MarchState): void {
         const b2iz = alongX ? piz : piz - sgn;
         if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
           const p2 = p - step;
-          if ((state[p2] & KIND) === DONE && T[p2] <= Tp) {
-            const s1 = S[p];
-            const s2 = S[p2];
+          if ((state[p2] & KIND) === DONE && F[3 * p2] <= Tp) {
+            const s1 = F[3 * p + 2];
+            const s2 = F[3 * p2 + 2];
             let lo = sq < s1 ? sq : s1;
             let hi = sq < s1 ? s1 : sq;
             if (s2 < lo) lo = s2;
             if (s2 > hi) hi = s2;
             if (hi <= lo * ratio) {
               aP = eP + 1.5 * iP;
-              bP = rq * (2 * Up - 0.5 * U[p2]) * iP;
+              bP = rq * (2 * Up - 0.5 * F[3 * p2 + 1]) * iP;
             }
           }
         }
@@ -158,17 +159,71 @@ export function march(m: MarchState): void {
       // head wave's own update.
       let best = aP > 0 ? (bP + sEdge) / aP : (bP - sEdge) / aP;
       if (!(best >= Tp)) best = Tp + sEdge * (alongX ? dx : dz);
-      // Within half a cell of the grid line through the source there is no upwind neighbour across
-      // that line, so a provisional one-axis update keeps the factored source term with ∂τ = 0
-      // across (exact in uniform ground). It holds only until a two-axis candidate arrives: in
-      // varying ground τ changes across the line and the guess could undershoot.
+      let two = false;
+
+      // Two-axis candidates: p with each accepted neighbour b of q on the other axis.
+      for (let side = -1; side <= 1; side += 2) {
+        let bix = qix;
+        let biz = qiz;
+        if (alongX) biz += side;
+        else bix += side;
+        if (bix < 0 || bix >= nx || biz < 0 || biz >= nz) continue;
+        const bStep = alongX ? side * nx : side;
+        const b = q + bStep;
+        if ((state[b] & KIND) !== DONE) continue;
+        const Tb = F[3 * b];
+        const Ub = F[3 * b + 1];
+        const iB = alongX ? side * invDz : -side * invDx;
+        const eB = alongX ? ez : ex;
+        let aB = eB + iB;
+        let bB = rq * Ub * iB;
+        if (second) {
+          const b2ix = alongX ? bix : bix + side;
+          const b2iz = alongX ? biz + side : biz;
+          if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
+            const b2 = b + bStep;
+            if ((state[b2] & KIND) === DONE && F[3 * b2] <= Tb) {
+              const s1 = F[3 * b + 2];
+              const s2 = F[3 * b2 + 2];
+              let lo = sq < s1 ? sq : s1;
+              let hi = sq < s1 ? s1 : sq;
+              if (s2 < lo) lo = s2;
+              if (s2 > hi) hi = s2;
+              if (hi <= lo * ratio) {
+                aB = eB + 1.5 * iB;
+                bB = rq * (2 * Ub - 0.5 * F[3 * b2 + 1]) * iB;
+              }
+            }
+          }
+        }
+        const cell = alongX
+          ? (side < 0 ? biz : qiz) * ncx + (qix < pix ? qix : pix)
+          : (qiz < piz ? qiz : piz) * ncx + (side < 0 ? bix : qix);
+        const sc = anyContrast && cellC[cell] !== 0 ? cellS[cell] : sq;
+        const a = aP * aP + aB * aB;
+        const bb = aP * bP + aB * bB;
+        const c = bP * bP + bB * bB - sc * sc;
+        const disc = bb * bb - a * c;
+        if (disc < 0) continue;
+        const t = (bb + Math.sqrt(disc)) / a;
+        if (t >= Tp && t >= Tb) {
+          two = true;
+          if (t < best) best = t;
+        }
+      }
+
+      // Provisional near-axis candidate. Beside the line through the source where the slope across
+      // it vanishes, a node has no upwind neighbour across that line; its one-axis update then keeps
+      // the reference time's own slope across (referenceLogSlope: exact in uniform ground, bent with
+      // the rays in a velocity gradient). It holds only while the node has no two-axis candidate,
+      // since farther out it could undershoot.
       let tau = Infinity;
       // Cheap pre-check without the logarithm: the reference's across slope vanishes where
       // e_across = r²·G_across/(2v) (v the reference velocity at q), so only nodes within a few
       // cells of that line go on to the exact test.
       const oAcross = alongX ? zq - zs : xq - xs;
       const hAcross = alongX ? dz : dx;
-      if (nearAxisOn && sEdge === sq && Math.abs(oAcross - (rq * rq * (alongX ? gz : gx)) / (2 * (vs + gx * (xq - xs) + gz * (zq - zs)))) <= 3 * hAcross) {
+      if (nearAxisOn && !two && (state[q] & HAS_TWO) === 0 && sEdge === sq && Math.abs(oAcross - (rq * rq * (alongX ? gz : gx)) / (2 * (vs + gx * (xq - xs) + gz * (zq - zs)))) <= 3 * hAcross) {
         // Slope of ln T₀ across the axis; small means q sits within about a cell of the reference's
         // own axis (the line where the across slope vanishes), where no upwind neighbour exists.
         const kappa = referenceLogSlope(xq - xs, zq - zs, gx, gz, vs, alongX);
@@ -183,58 +238,6 @@ export function march(m: MarchState): void {
           }
         }
       }
-      let two = false;
-
-      // Two-axis candidates: p with each accepted neighbour b of q on the other axis.
-      for (let side = -1; side <= 1; side += 2) {
-        let bix = qix;
-        let biz = qiz;
-        if (alongX) biz += side;
-        else bix += side;
-        if (bix < 0 || bix >= nx || biz < 0 || biz >= nz) continue;
-        const bStep = alongX ? side * nx : side;
-        const b = q + bStep;
-        if ((state[b] & KIND) !== DONE) continue;
-        const Tb = T[b];
-        const Ub = U[b];
-        const iB = alongX ? side * invDz : -side * invDx;
-        const eB = alongX ? ez : ex;
-        let aB = eB + iB;
-        let bB = rq * Ub * iB;
-        if (second) {
-          const b2ix = alongX ? bix : bix + side;
-          const b2iz = alongX ? biz + side : biz;
-          if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
-            const b2 = b + bStep;
-            if ((state[b2] & KIND) === DONE && T[b2] <= Tb) {
-              const s1 = S[b];
-              const s2 = S[b2];
-              let lo = sq < s1 ? sq : s1;
-              let hi = sq < s1 ? s1 : sq;
-              if (s2 < lo) lo = s2;
-              if (s2 > hi) hi = s2;
-              if (hi <= lo * ratio) {
-                aB = eB + 1.5 * iB;
-                bB = rq * (2 * Ub - 0.5 * U[b2]) * iB;
-              }
-            }
-          }
-        }
-        const cell = alongX
-          ? (side < 0 ? biz : qiz) * ncx + (qix < pix ? qix : pix)
-          : (qiz < piz ? qiz : piz) * ncx + (side < 0 ? bix : qix);
-        const sc = cellC[cell] !== 0 ? cellS[cell] : sq;
-        const a = aP * aP + aB * aB;
-        const bb = aP * bP + aB * bB;
-        const c = bP * bP + bB * bB - sc * sc;
-        const disc = bb * bb - a * c;
-        if (disc < 0) continue;
-        const t = (bb + Math.sqrt(disc)) / a;
-        if (t >= Tp && t >= Tb) {
-          two = true;
-          if (t < best) best = t;
-        }
-      }
 
       // Key = least safe candidate; a provisional one counts while the node has no two-axis
       // candidate. T holds the key; `safe` keeps the safe minimum only while the key is provisional.
@@ -245,7 +248,7 @@ export function march(m: MarchState): void {
         let sf = safe[q];
         if (best < sf) sf = best;
         safe[q] = sf;
-        let pv = T[q];
+        let pv = F[3 * q];
         if (tau < pv) pv = tau;
         if ((st2 & HAS_TWO) !== 0 || pv >= sf) {
           key = sf;
@@ -254,7 +257,7 @@ export function march(m: MarchState): void {
           key = pv;
         }
       } else {
-        const sf = best < T[q] ? best : T[q];
+        const sf = best < F[3 * q] ? best : F[3 * q];
         if ((st2 & HAS_TWO) === 0 && tau < sf) {
           safe[q] = sf;
           key = tau;
@@ -263,8 +266,8 @@ export function march(m: MarchState): void {
           key = sf;
         }
       }
-      if (key !== T[q]) {
-        T[q] = key;
+      if (key !== F[3 * q]) {
+        F[3 * q] = key;
         heap.update(q, key);
       }
       state[q] = (st2 & ~KIND) | TRIAL;
