@@ -22,6 +22,10 @@ export const router = createBrowserRouter([
           { index: true, element: <ProjectsPage /> },
           { path: 'projects/:projectId', element: <ProjectPage /> },
           { path: 'lines/:lineId', element: <LinePage /> },
+          // Run pages load on first visit: they carry the chart code, which most visits never need.
+          { path: 'lines/:lineId/runs', lazy: async () => ({ Component: (await import('./routes/LineRunsPage')).LineRunsPage }) },
+          { path: 'runs/:runId', lazy: async () => ({ Component: (await import('./routes/RunPage')).RunPage }) },
+          { path: 'runs/:runId/compare/:otherRunId', lazy: async () => ({ Component: (await import('./routes/RunComparePage')).RunComparePage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },
           { path: '*', element: <NotFoundPage /> },
         ],

@@ -10,3 +10,14 @@ export const queryKeys = {
   pickSet: (pickSetId: string) => ['picksets', pickSetId] as const,
   pickSetRevision: (pickSetId: string, revision: number | null) => ['picksets', pickSetId, revision ?? 'latest'] as const,
 };
+
+/** Forward runs. A finished run never changes, so its results, fields and rays are cached for good. */
+export const runKeys = {
+  run: (runId: string) => ['runs', runId] as const,
+  residuals: (runId: string) => ['runs', runId, 'residuals'] as const,
+  rays: (runId: string, shotId: string) => ['runs', runId, 'rays', shotId] as const,
+  field: (runId: string, shotId: string) => ['runs', runId, 'field', shotId] as const,
+  /** The solved model version and its velocity grid, as the results page draws them. */
+  model: (modelId: string) => ['run-models', modelId] as const,
+  modelGrid: (modelId: string) => ['run-models', modelId, 'grid'] as const,
+};

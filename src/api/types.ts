@@ -198,3 +198,106 @@ export interface UserPatch {
   active?: boolean;
   password?: string;
 }
+
+// Forward runs (issue 6): state, statistics, residuals and rays as the runs API returns them.
+export type RunStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
+export type SolverOrder = 1 | 2;
+
+/** One run as GET /api/lines/:lineId lists it (newest first). */
+export interface LineRunSummary {
+  id: string;
+  status: RunStatus;
+  order: SolverOrder;
+  model: { id: string; name: string; version: number };
+  pickSet: { id: string; fileName: string; revision: number };
+  progress: { done: number; total: number };
+  rmsMs: number | null;
+  chi2: number | null;
+  createdAt: string;
+  finishedAt: string | null;
+  createdBy: string | null;
+}
+
+/** Misfit of one shot's picks (ms; chi2 per datum). */
+export interface RunShotStats {
+  shotId: string;
+  count: number;
+  rms_ms: number;
+  chi2: number;
+  max_abs_residual_ms: number;
+  mean_residual_ms: number;
+}
+
+/** Misfit of the picks at one receiver position, over all shots. */
+export interface RunReceiverStats {
+  receiverX: number;
+  count: number;
+  rms_ms: number;
+  chi2: number;
+  max_abs_residual_ms: number;
+}
+
+/** Run statistics; excluded picks take no part in them. */
+export interface RunStats {
+  rms_ms: number;
+  chi2: number;
+  max_abs_residual_ms: number;
+  mean_residual_ms: number;
+  shots: number;
+  picks: number;
+  excluded: number;
+  solve_seconds: number;
+  active_nodes: number;
+  by_shot: RunShotStats[];
+  by_receiver: RunReceiverStats[];
+}
+
+/** GET /api/runs/:runId */
+export interface RunDetail {
+  id: string;
+  lineId: string;
+  modelId: string;
+  pickSetId: string;
+  pickSetRevision: number;
+  order: SolverOrder;
+  status: RunStatus;
+  progress: { done: number; total: number; fraction: number };
+  stats: RunStats | null;
+  error?: string;
+  createdAt: string;
+  startedAt: string | null;
+  finishedAt: string | null;
+}
+
+/** One row of GET /api/runs/:runId/residuals (times in ms; residual = observed − computed). */
+export interface ResidualRow {
+  pickIndex: number;
+  shotId: string;
+  receiverX: number;
+  receiverZ: number;
+  observedMs: number;
+  computedMs: number;
+  residualMs: number;
+  normalised: number;
+  sigmaMs: number;
+  excluded: boolean;
+  flags: string[];
+}
+
+/** One ray from the receiver back to the source, as a flat [x, z, x, z, …] list (m). */
+export interface RayPath {
+  pickIndex: number;
+  shotId: string;
+  points: number[];
+}
+
+export interface StartRunBody {
+  modelId: string;
+  pickSetId: string;
+  order: SolverOrder;
+}
+
+export interface RunStarted {
+  id: string;
+  status: RunStatus;
+}

@@ -1,0 +1,42 @@
+import { ApiError, errorMessage, type ApiIssue } from '../../api/errors';
+
+/** Where an issue points: "line 14, receiver_x" for the pick file, a JSON path otherwise. */
+function issuePlace(issue: ApiIssue): string {
+  if (typeof issue.line === 'number') {
+    return issue.column !== undefined && issue.column !== null ? `Pick file line ${issue.line}, ${issue.column}` : `Pick file line ${issue.line}`;
+  }
+  const path = Array.isArray(issue.path) ? issue.path.join('.') : (issue.path ?? '');
+  return path;
+}
+
+/** A lead-in that says what kind of refusal this is, before the server's own sentence. */
+function heading(err: unknown): string {
+  if (!(err instanceof ApiError)) return 'The run could not be started.';
+  if (err.code === 'different_lines') return 'These two do not belong together.';
+  if (err.code === 'outside_model') return 'The model does not cover every shot and geophone of this pick set.';
+  if (err.code === 'grid_too_large') return 'The model grid is too large to solve.';
+  if (err.status === 403) return 'Your role cannot start runs on this project.';
+  if (err.status === 400 || err.status === 422) return 'The run was refused.';
+  return 'The run could not be started.';
+}
+
+/** Why a run was refused, in plain words, with the server's listed issues (at most 20 shown). */
+export function RunStartProblem({ error }: { error: unknown }) {
+  const issues = error instanceof ApiError ? error.issues : [];
+  const shown = issues.slice(0, 20);
+  return (
+    <div role="alert" data-testid="run-start-problem" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
+      <p className="font-semibold">{heading(error)}</p>
+      <p className="mt-1">{errorMessage(error)}</p>
+      {shown.length > 0 && (
+        <ul className="mt-2 list-disc pl-5 text-sm">
+          {shown.map((issue, i) => {
+            const place = issuePlace(issue);
+            return <li key={i}>{place ? `${place}: ${issue.message}` : issue.message}</li>;
+          })}
+        </ul>
+      )}
+      {issues.length > shown.length && <p className="mt-1 text-sm">…and {issues.length - shown.length} more of the same kind.</p>}
+    </div>
+  );
+}

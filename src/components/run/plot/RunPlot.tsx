@@ -1,0 +1,41 @@
+import { Component, lazy, Suspense, type ComponentProps, type ReactNode } from 'react';
+
+const RunPlotlyChart = lazy(() => import('./RunPlotlyChart'));
+
+export type RunPlotProps = ComponentProps<typeof RunPlotlyChart>;
+
+/** If the chart library cannot load (offline, stale deployment), say so rather than leave a hole. */
+class ChartBoundary extends Component<{ children: ReactNode }, { failed: boolean }> {
+  state = { failed: false };
+  static getDerivedStateFromError() {
+    return { failed: true };
+  }
+  render() {
+    if (this.state.failed)
+      return (
+        <p role="alert" className="rounded-md border border-amber-300 bg-amber-50 px-4 py-3 text-amber-900">
+          The chart could not be drawn. Reload the page to try again; the residual table still holds every number.
+        </p>
+      );
+    return this.props.children;
+  }
+}
+
+/** A plotly chart loaded on first use, with a quiet placeholder of the same height meanwhile. */
+export function RunPlot({ height, label, ...props }: RunPlotProps & { height: number; label: string }) {
+  return (
+    <ChartBoundary>
+      <Suspense
+        fallback={
+          <div role="status" style={{ height }} className="flex items-center justify-center rounded-lg border border-stone-200 bg-white text-stone-600">
+            Loading the chart…
+          </div>
+        }
+      >
+        <div role="img" aria-label={label}>
+          <RunPlotlyChart useResizeHandler style={{ width: '100%', height }} {...props} />
+        </div>
+      </Suspense>
+    </ChartBoundary>
+  );
+}
