@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useId, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router';
 import { useLine } from '../api/lines';
 import { useProject } from '../api/projects';
@@ -26,6 +26,8 @@ export function LinePage() {
   const { lineId = '' } = useParams();
   const [params, setParams] = useSearchParams();
   const idPrefix = useId().replace(/[^a-zA-Z0-9_-]/g, '');
+  // Tabs stay mounted once opened, so unsaved station edits, kept fits and selections survive a look elsewhere.
+  const [visited, setVisited] = useState<ReadonlySet<TabKey>>(new Set());
   const line = useLine(lineId);
   // The project name for the breadcrumb; the project page has usually cached it already.
   const project = useProject(line.data?.projectId ?? '', { enabled: Boolean(line.data?.projectId) });
@@ -36,6 +38,7 @@ export function LinePage() {
   const l = line.data;
   const requested = params.get('tab') as TabKey | null;
   const tab: TabKey = requested && TAB_KEYS.includes(requested) ? requested : l.pickSets.length > 0 ? 'checks' : 'stations';
+  if (!visited.has(tab)) setVisited(new Set([...visited, tab]));
   const pickSetId = params.get('pickset');
   const revText = params.get('rev');
   const revision = revText !== null && /^\d+$/.test(revText) ? Number(revText) : null;
@@ -83,20 +86,26 @@ export function LinePage() {
       </PageHeader>
 
       <LineTabs tabs={tabs} selected={tab} onSelect={selectTab} idPrefix={idPrefix} />
-      <TabPanel idPrefix={idPrefix} tabKey={tab}>
-        {tab === 'stations' && <StationsTab line={l} canEdit={canEditField} />}
-        {tab === 'picks' && (
+      {visited.has('stations') && (
+        <TabPanel idPrefix={idPrefix} tabKey="stations" hidden={tab !== 'stations'}>
+          <StationsTab line={l} canEdit={canEditField} />
+        </TabPanel>
+      )}
+      {visited.has('picks') && (
+        <TabPanel idPrefix={idPrefix} tabKey="picks" hidden={tab !== 'picks'}>
           <PickSetsTab
             line={l}
             canUpload={canEditField}
             checksHref={(id) => `?${checksSearch(id).toString()}`}
             onUploaded={(created) => setParams(checksSearch(created.id))}
           />
-        )}
-        {tab === 'checks' && (
+        </TabPanel>
+      )}
+      {visited.has('checks') && (
+        <TabPanel idPrefix={idPrefix} tabKey="checks" hidden={tab !== 'checks'}>
           <ChecksTab line={l} pickSetId={pickSetId} revision={revision} canExclude={canExclude} onChoose={(id, rev) => setParams(checksSearch(id, rev))} />
-        )}
-      </TabPanel>
+        </TabPanel>
+      )}
     </>
   );
 }

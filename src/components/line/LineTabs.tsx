@@ -57,9 +57,9 @@ export function LineTabs<K extends string>({ tabs, selected, onSelect, idPrefix 
   );
 }
 
-export function TabPanel({ idPrefix, tabKey, children }: { idPrefix: string; tabKey: string; children: ReactNode }) {
+export function TabPanel({ idPrefix, tabKey, hidden, children }: { idPrefix: string; tabKey: string; hidden?: boolean; children: ReactNode }) {
   return (
-    <div role="tabpanel" id={`${idPrefix}-panel-${tabKey}`} aria-labelledby={`${idPrefix}-tab-${tabKey}`} data-testid={`panel-${tabKey}`}>
+    <div role="tabpanel" hidden={hidden} id={`${idPrefix}-panel-${tabKey}`} aria-labelledby={`${idPrefix}-tab-${tabKey}`} data-testid={`panel-${tabKey}`}>
       {children}
     </div>
   );

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { errorMessage, isApiError } from '../../../api/errors';
 import { useSaveStations } from '../../../api/lines';
 import type { LineDetail, Station } from '../../../api/types';
@@ -68,6 +68,14 @@ function StationWorkbench({ line }: { line: LineDetail }) {
     setSeen(line.stations);
     if (!dirty || rows.length === 0) setRows(toDraft(line.stations));
   }
+
+  // Leaving the page (reload, closing the tab) with unsaved edits asks first.
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
 
   const local = checkRows(rows);
   const server = serverRowErrors(save.error, sent);
