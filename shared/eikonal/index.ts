@@ -3,6 +3,6 @@ export type { Point, SolveOptions, VelocityField } from './types';
 export { EikonalInputError } from './errors';
 export { solveTravelTimes, TravelTimeSolver, type MarchOptions } from './fmm';
 export { sampleTime } from './interpolate';
-export { traceRay, type Ray } from './rays';
+export { traceRay, RayTracer, type Ray } from './rays';
 export { validateSolveInput } from './validate';
 export { cellSlowness, type CellSlowness, type InterfaceRule, CONTRAST_RATIO, DEFAULT_INTERFACE_RULE } from './cells';
