@@ -15,6 +15,8 @@ start_test_services() {
   start_postgres
   start_redis
   export_service_env
+  # Tests that restart a service find it again through these.
+  export TF_DATA TF_PG_PORT TF_REDIS_PORT TF_DB
   export NODE_ENV=test SESSION_SECRET=test-session-secret-not-for-production
   trap 'stop_redis; stop_postgres' EXIT
   # Start from an empty database every time.

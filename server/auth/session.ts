@@ -19,5 +19,8 @@ export function sessionMiddleware(pool: pg.Pool) {
 }
 
 export function createPgPool(): pg.Pool {
-  return new pg.Pool({ ...config.pg, max: 5 });
+  const pool = new pg.Pool({ ...config.pg, max: 5 });
+  // An idle connection dropped by a database restart is discarded by the pool; log it, do not crash.
+  pool.on('error', (err) => console.error(`[db] idle session-store connection lost: ${err.message}`));
+  return pool;
 }

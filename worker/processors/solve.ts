@@ -84,7 +84,7 @@ async function solveShots(runId: string, run: RunRow, job: Job) {
   let cancelled = false;
   const results = await Promise.all(
     shots.map(async (shot): Promise<ShotOutput> => {
-      const r = await threads().run({ grid, velocity, active, source: shot.source, receivers: shot.receivers, order: run.scheme_order });
+      const r = await threads().run({ grid, velocity, active, source: shot.source, receivers: shot.receivers, order: run.scheme_order, modelKey: run.model_id });
       if (!r.ok) throw new Error(`shot ${shot.shotId}: ${r.message}`);
       solveSeconds += r.solveSeconds;
       done++;

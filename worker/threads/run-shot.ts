@@ -5,7 +5,8 @@
  */
 import { deflateRawSync } from 'node:zlib';
 import type { Grid } from '../../shared/grid';
-import { sampleTime, traceRay, TravelTimeSolver, type Point } from '../../shared/eikonal';
+import { sampleTime, TravelTimeSolver, type Point } from '../../shared/eikonal';
+import { RayTracer } from '../../shared/eikonal/rays';
 import { simplifyPolyline } from '../../shared/geometry/simplify';
 
 export interface RunShotTask {
@@ -16,6 +17,8 @@ export interface RunShotTask {
   /** Receiver positions, interleaved x, z (m). */
   receivers: Float64Array;
   order: 1 | 2;
+  /** Identifies the velocity model (its version id): the ray tracer's slowness tables are reused while it stays the same. */
+  modelKey: string;
 }
 
 export type RunShotResult =
@@ -24,6 +27,7 @@ export type RunShotResult =
 
 let solver: TravelTimeSolver | null = null;
 let buffer: Float64Array | null = null;
+let tracer: { key: string; tracer: RayTracer } | null = null;
 
 export default function runShot(task: RunShotTask): RunShotResult {
   const { grid } = task;
@@ -39,6 +43,7 @@ export default function runShot(task: RunShotTask): RunShotResult {
     const T = solver.solve(velocity, active, task.source, { order: task.order }, buffer!);
     const solveSeconds = (performance.now() - t0) / 1000;
 
+    if (tracer?.key !== task.modelKey) tracer = { key: task.modelKey, tracer: new RayTracer(grid, velocity, active) };
     const count = task.receivers.length / 2;
     const times = new Float64Array(count);
     const rays: (Float32Array | null)[] = [];
@@ -48,7 +53,7 @@ export default function runShot(task: RunShotTask): RunShotResult {
       const receiver = { x: task.receivers[2 * i], z: task.receivers[2 * i + 1] };
       times[i] = sampleTime(grid, T, active, receiver);
       try {
-        rays.push(simplifyPolyline(traceRay(grid, T, velocity, active, receiver, task.source).points, tolerance));
+        rays.push(simplifyPolyline(tracer.tracer.trace(T, receiver, task.source).points, tolerance));
       } catch {
         rays.push(null); // a ray that cannot be traced is left out of the picture, not the run
       }
