@@ -1,5 +1,7 @@
+import { errorMessage, isApiError } from '../../../api/errors';
 import { usePickSet } from '../../../api/picksets';
 import type { LineDetail } from '../../../api/types';
+import { Button } from '../../Button';
 import { EmptyState } from '../../EmptyState';
 import { Loading, LoadError } from '../../LoadState';
 import { PickSetChecks } from './PickSetChecks';
@@ -34,8 +36,16 @@ export function ChecksTab({
   const data = detail.data && detail.data.id === chosen && (revision === null || detail.data.revision.number === revision) ? detail.data : undefined;
   return (
     <>
-      <PickSetPicker pickSets={line.pickSets} pickSetId={chosen} detail={detail.data} revision={revision} onChange={onChoose} />
-      {detail.isError ? (
+      <PickSetPicker pickSets={line.pickSets} pickSetId={chosen} detail={detail.data} revision={revision} onChange={onChoose} failed={detail.isError} />
+      {isApiError(detail.error, 404) && detail.error.code === 'revision_not_found' ? (
+        <div role="alert" className="rounded-lg border border-stone-300 bg-white px-5 py-4">
+          <p className="font-semibold text-stone-900">Revision {revision} of this pick set does not exist.</p>
+          <p className="mt-1 text-stone-700">{errorMessage(detail.error)}</p>
+          <Button variant="secondary" size="sm" className="mt-3" onClick={() => onChoose(chosen, null)}>
+            Show the latest revision
+          </Button>
+        </div>
+      ) : detail.isError ? (
         <LoadError error={detail.error} what="pick set" onRetry={() => void detail.refetch()} />
       ) : !data ? (
         <Loading what="picks and checks" />

@@ -144,13 +144,12 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
         title="Travel-time curves"
         description={`Time against receiver x for every shot of ${pickSetLabel}. Click a legend entry or a shot’s checkbox to hide or show it.`}
         actions={
-          <div role="radiogroup" aria-label="Dragging on the chart" className="flex rounded-md border border-stone-300 bg-white p-0.5 text-sm">
+          <div role="group" aria-label="Dragging on the chart" className="flex rounded-md border border-stone-300 bg-white p-0.5 text-sm">
             {(['zoom', 'select'] as const).map((m) => (
               <button
                 key={m}
                 type="button"
-                role="radio"
-                aria-checked={dragMode === m}
+                aria-pressed={dragMode === m}
                 onClick={() => setDragMode(m)}
                 data-testid={`drag-${m}`}
                 className={`rounded px-3 py-1 font-semibold ${dragMode === m ? 'bg-accent-700 text-white' : 'text-stone-700 hover:bg-stone-100'}`}

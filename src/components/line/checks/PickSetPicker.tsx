@@ -10,12 +10,15 @@ export function PickSetPicker({
   detail,
   revision,
   onChange,
+  failed = false,
 }: {
   pickSets: PickSetSummary[];
   pickSetId: string;
   detail: PickSetDetail | undefined;
   revision: number | null;
   onChange: (pickSetId: string, revision: number | null) => void;
+  /** The pick set could not be loaded: say so in the revision list instead of "Loading…". */
+  failed?: boolean;
 }) {
   const revisions = detail && detail.id === pickSetId ? [...detail.revisions].reverse() : [];
   const latest = revisions[0]?.number;
@@ -39,7 +42,7 @@ export function PickSetPicker({
           onChange={(e) => onChange(pickSetId, Number(e.target.value) === latest ? null : Number(e.target.value))}
           data-testid="checks-revision"
         >
-          {revisions.length === 0 && <option value="">Loading…</option>}
+          {revisions.length === 0 && <option value="">{failed ? '—' : 'Loading…'}</option>}
           {revisions.map((r) => (
             <option key={r.number} value={r.number}>
               {r.number === 0 ? 'Revision 0, as uploaded' : `Revision ${r.number}`}
