@@ -13,11 +13,11 @@ import { RUN_CHART_CONFIG, RUN_CHART_FONT, runAxis } from '../plot/runChartTheme
 import { useElementWidth } from '../useElementWidth';
 import { contourLevels, defaultContourInterval, finiteMax, usableIntervals } from './contourLevels';
 import { sectionHeight } from './sectionData';
-import { sectionTraces } from './sectionTraces';
+import { geometryTraces, rayTraces, velocityTrace, wavefrontTraces } from './sectionTraces';
 
 const EXAGGERATIONS = [1, 2, 3, 5] as const;
 /** Room around the drawing area: axis titles, tick labels, colour bar and legend (px). */
-const CHROME = { left: 70, right: 110, top: 16, bottom: 120 };
+const CHROME = { left: 70, right: 110, top: 56, bottom: 70 };
 
 interface SectionViewProps {
   run: RunDetail;
@@ -64,21 +64,25 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
     }));
   }, [shots.data, file]);
 
-  const data = useMemo(() => {
-    if (!velocity.data) return [];
-    return sectionTraces({
-      velocity: velocity.data,
-      field: field.data ?? null,
-      levels,
-      rays: showRays ? (rays.data ?? []) : [],
-      highlightPick,
-      surface: (file?.surface as [number, number][] | undefined) ?? null,
-      layerBases: (file?.layers ?? []).filter((l) => l.base).map((l) => ({ name: l.name ?? 'layer', base: l.base as [number, number][] })),
-      stations,
-      shots: shotMarks,
-      selectedShot: shotId,
-    });
-  }, [velocity.data, field.data, levels, showRays, rays.data, highlightPick, file, stations, shotMarks, shotId]);
+  // One memo per group of traces, so a new shot leaves the heatmap's arrays (and plotly's work on them) alone.
+  const velocityLayer = useMemo(() => (velocity.data ? velocityTrace(velocity.data) : null), [velocity.data]);
+  const wavefronts = useMemo(() => (field.data && levels ? wavefrontTraces(field.data, field.data.source, levels) : []), [field.data, levels]);
+  const rayLayer = useMemo(() => (showRays && rays.data ? rayTraces(rays.data, highlightPick) : []), [showRays, rays.data, highlightPick]);
+  const geometry = useMemo(
+    () =>
+      geometryTraces({
+        surface: (file?.surface as [number, number][] | undefined) ?? null,
+        layerBases: (file?.layers ?? []).filter((l) => l.base).map((l) => ({ name: l.name ?? 'layer', base: l.base as [number, number][] })),
+        stations,
+        shots: shotMarks,
+        selectedShot: shotId,
+      }),
+    [file, stations, shotMarks, shotId],
+  );
+  const data = useMemo(
+    () => (velocityLayer ? [velocityLayer, ...wavefronts, ...rayLayer, ...geometry] : []),
+    [velocityLayer, wavefronts, rayLayer, geometry],
+  );
 
   const grid = velocity.data?.grid;
   const plotWidth = Math.max(200, width - CHROME.left - CHROME.right);
@@ -87,13 +91,13 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
     () => ({
       font: RUN_CHART_FONT,
       uirevision: `${run.id}:${ve}`,
-      margin: { l: CHROME.left, r: 20, t: CHROME.top, b: 60 },
+      margin: { l: CHROME.left, r: 20, t: CHROME.top, b: CHROME.bottom },
       paper_bgcolor: 'white',
       plot_bgcolor: '#fafaf9',
       hovermode: 'closest',
-      legend: { orientation: 'h', yanchor: 'top', y: -0.18, font: { size: 13 } },
-      xaxis: { ...runAxis, title: { text: 'x along the line (m)' }, showgrid: false },
-      yaxis: { ...runAxis, title: { text: 'elevation (m)' }, scaleanchor: 'x', scaleratio: ve, constrain: 'domain', showgrid: false },
+      legend: { orientation: 'h', yanchor: 'bottom', y: 1, x: 0, font: { size: 13 } },
+      xaxis: { ...runAxis, title: { text: 'x along the line (m)' }, showgrid: false, zeroline: false },
+      yaxis: { ...runAxis, title: { text: 'elevation (m)' }, scaleanchor: 'x', scaleratio: ve, constrain: 'domain', showgrid: false, zeroline: false },
     }),
     [run.id, ve],
   );

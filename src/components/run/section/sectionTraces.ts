@@ -1,17 +1,17 @@
 import type { Data } from 'plotly.js';
 import type { Grid } from '../../../../shared/grid';
-import { sToMs } from '../../../../shared/units';
+import { msToS } from '../../../../shared/units';
+import { isolineSegments, labelPoint } from './isolines';
 import type { RayPath, Station } from '../../../api/types';
 import type { ContourLevels } from './contourLevels';
 import { gridAxes, gridRows, joinPolylines } from './sectionData';
 
-export interface SectionInput {
-  velocity: { grid: Grid; values: Float32Array };
-  /** The selected shot's travel times (s) on the same grid, or null while loading. */
-  field: { grid: Grid; values: Float32Array } | null;
-  levels: ContourLevels | null;
-  rays: RayPath[];
-  highlightPick: number | null;
+interface GridValues {
+  grid: Grid;
+  values: Float32Array;
+}
+
+export interface SectionGeometry {
   surface: [number, number][] | null;
   layerBases: { name: string; base: [number, number][] }[];
   stations: Station[];
@@ -20,55 +20,95 @@ export interface SectionInput {
 }
 
 const RAY_COLOUR = '#9f1239';
+/**
+ * Slow ground pale sand, fast ground mid blue: lightness falls steadily with velocity and never gets
+ * dark, so black wavefronts, red rays and station marks stay readable on every layer.
+ */
+const VELOCITY_SCALE: [number, string][] = [
+  [0, '#f6e7c8'],
+  [0.3, '#dfe8c9'],
+  [0.6, '#b5d6d6'],
+  [1, '#7fa9c9'],
+];
 const WAVEFRONT_COLOUR = '#1c1917';
 
-/** Velocity heatmap, then wavefronts, rays, interfaces, stations and shots on top, in that order. */
-export function sectionTraces(input: SectionInput): Data[] {
-  const { xs, zs } = gridAxes(input.velocity.grid);
-  const traces: Data[] = [
-    {
+/*
+ * The section is drawn as velocity heatmap, then wavefronts, rays, interfaces, stations and shots on top.
+ * Each group is built by its own function, so the page can memoise them apart: plotly then redraws only
+ * the traces whose arrays changed (it compares them by reference), not the 50 000-cell heatmap on every shot.
+ */
+
+export function velocityTrace(velocity: GridValues): Data {
+  const { xs, zs } = gridAxes(velocity.grid);
+  return {
       type: 'heatmap',
       name: 'Velocity',
       x: xs,
       y: zs,
-      z: gridRows(input.velocity.values, input.velocity.grid),
-      colorscale: 'YlGnBu',
+      z: gridRows(velocity.values, velocity.grid),
+      colorscale: VELOCITY_SCALE,
       colorbar: { title: { text: 'v (m/s)', side: 'right' }, thickness: 14, len: 0.9 },
       hovertemplate: 'x %{x:.1f} m, elevation %{y:.1f} m<br>v %{z:.0f} m/s<extra></extra>',
       showlegend: false,
+    } as Data;
+}
+
+/**
+ * The shot's first-arrival wavefronts: every contour level in one line trace (segments split by null),
+ * and their labels (ms) as text on small pale tiles so they read over any velocity colour.
+ */
+export function wavefrontTraces(field: GridValues, source: { x: number; z: number } | null, levels: ContourLevels): Data[] {
+  const x: (number | null)[] = [];
+  const y: (number | null)[] = [];
+  const labels: { x: number; z: number; text: string }[] = [];
+  const { grid } = field;
+  const left = grid.x0;
+  const right = grid.x0 + (grid.nx - 1) * grid.dx;
+  const from = source ?? { x: left, z: grid.z0 };
+  // Labels run towards the far end of the line from the shot, where there is room for them.
+  const towardsX = from.x - left < right - from.x ? right : left;
+  for (let k = 0; k < levels.count; k++) {
+    const levelMs = round9(levels.start + k * levels.size);
+    const segments = isolineSegments(field.values, grid, msToS(levelMs));
+    for (let i = 0; i + 3 < segments.length; i += 4) x.push(segments[i]!, segments[i + 2]!, null), y.push(segments[i + 1]!, segments[i + 3]!, null);
+    const at = labelPoint(segments, from, towardsX);
+    if (at) labels.push({ ...at, text: String(levelMs) });
+  }
+  return [
+    {
+      type: 'scatter',
+      mode: 'lines',
+      name: `Wavefronts every ${levels.size} ms`,
+      x,
+      y,
+      line: { color: WAVEFRONT_COLOUR, width: 1 },
+      hoverinfo: 'skip',
+    },
+    {
+      type: 'scatter',
+      mode: 'text+markers',
+      name: 'Wavefront labels (ms)',
+      showlegend: false,
+      x: labels.map((l) => l.x),
+      y: labels.map((l) => l.z),
+      text: labels.map((l) => l.text),
+      textposition: 'middle center',
+      textfont: { size: 11, color: WAVEFRONT_COLOUR },
+      marker: { symbol: 'square', size: labels.map((l) => 8 + 6 * l.text.length), color: 'rgba(255,255,255,0.8)', line: { width: 0 } },
+      hovertemplate: 'first arrival %{text} ms<extra></extra>',
     } as Data,
   ];
+}
 
-  if (input.field && input.levels) {
-    const f = gridAxes(input.field.grid);
-    traces.push({
-      type: 'contour',
-      name: 'Wavefronts (ms)',
-      x: f.xs,
-      y: f.zs,
-      z: gridRows(input.field.values, input.field.grid, sToMs(1)),
-      autocontour: false,
-      contours: {
-        coloring: 'lines',
-        showlabels: true,
-        labelfont: { size: 11, color: WAVEFRONT_COLOUR },
-        start: input.levels.start,
-        end: input.levels.end,
-        size: input.levels.size,
-      },
-      colorscale: [
-        [0, WAVEFRONT_COLOUR],
-        [1, WAVEFRONT_COLOUR],
-      ],
-      line: { width: 1, smoothing: 0.6 },
-      showscale: false,
-      showlegend: true,
-      hovertemplate: 'first arrival %{z:.1f} ms<extra></extra>',
-    } as Data);
-  }
+function round9(v: number): number {
+  return Math.round(v * 1e9) / 1e9;
+}
 
-  if (input.rays.length > 0) {
-    const all = joinPolylines(input.rays.map((r) => r.points));
+/** All rays of the shot in one trace, and the chosen pick's ray drawn heavier. */
+export function rayTraces(rays: RayPath[], highlightPick: number | null): Data[] {
+  const traces: Data[] = [];
+  if (rays.length > 0) {
+    const all = joinPolylines(rays.map((r) => r.points));
     traces.push({
       type: 'scatter',
       mode: 'lines',
@@ -79,13 +119,18 @@ export function sectionTraces(input: SectionInput): Data[] {
       opacity: 0.75,
       hoverinfo: 'skip',
     });
-    const hit = input.rays.find((r) => r.pickIndex === input.highlightPick);
+    const hit = rays.find((r) => r.pickIndex === highlightPick);
     if (hit) {
       const one = joinPolylines([hit.points]);
       traces.push({ type: 'scatter', mode: 'lines', name: 'Ray of the chosen pick', x: one.x, y: one.y, line: { color: RAY_COLOUR, width: 3.5 }, hoverinfo: 'skip' });
     }
   }
+  return traces;
+}
 
+/** Ground surface, layer bases, stations and shots (the chosen shot larger). */
+export function geometryTraces(input: SectionGeometry): Data[] {
+  const traces: Data[] = [];
   if (input.surface) {
     traces.push({
       type: 'scatter',
