@@ -5,8 +5,7 @@
  */
 import { deflateRawSync } from 'node:zlib';
 import type { Grid } from '../../shared/grid';
-import { sampleTime, TravelTimeSolver, type Point } from '../../shared/eikonal';
-import { RayTracer } from '../../shared/eikonal/rays';
+import { RayTracer, sampleTime, TravelTimeSolver, type Point } from '../../shared/eikonal';
 import { simplifyPolyline } from '../../shared/geometry/simplify';
 
 export interface RunShotTask {
