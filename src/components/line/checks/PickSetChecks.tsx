@@ -1,6 +1,5 @@
 import { useCallback, useDeferredValue, useMemo, useState, type ReactNode } from 'react';
 import { findReciprocalPairs, flagSuspectPicks, travelTimeCurves, type QcPick } from '../../../../shared/qc';
-import { useCreateRevision } from '../../../api/picksets';
 import type { PickSetDetail } from '../../../api/types';
 import { Section } from '../../Section';
 import { ApparentVelocityPanel, type FitRequest } from './ApparentVelocityPanel';
@@ -13,6 +12,7 @@ import { ShotsTable } from './ShotsTable';
 import { SuspectPicksTable } from './SuspectPicksTable';
 import { OVERLAY } from './chartTraces';
 import { TravelTimeChart } from './TravelTimeChart';
+import { useExclusionDraft } from './useExclusionDraft';
 
 function Fact({ term, children, tone }: { term: string; children: ReactNode; tone?: 'warn' }) {
   return (
@@ -31,34 +31,20 @@ function readTolerance(text: string): { ms: number | null; error?: string } {
   return { ms: v };
 }
 
-const savedExclusions = (data: PickSetDetail) => new Map(data.picks.filter((p) => p.excluded).map((p) => [p.index, p.exclusionReason ?? '']));
-
 /**
  * Every check on one revision of one pick set. Unsaved exclusions take effect at once on the
  * chart and tables, so a geophysicist sees what a new revision would change before saving it.
  */
 export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: PickSetDetail; canExclude: boolean; onRevisionSaved: (revision: number) => void }) {
-  const saved = useMemo(() => savedExclusions(data), [data]);
-  const [draft, setDraft] = useState<Map<number, string>>(saved);
-  const [draftOf, setDraftOf] = useState(data);
-  const [selected, setSelected] = useState<Set<number>>(new Set());
+  const ex = useExclusionDraft(data, onRevisionSaved);
   // Hundreds of agreeing pairs would bury the curves in diamonds: start with those hidden.
   const [hidden, setHidden] = useState<Set<string>>(() => new Set(data.qc.reciprocalPairs.length > 40 ? [OVERLAY.pairOk] : []));
   const [tolerance, setTolerance] = useState(String(data.qc.reciprocalToleranceMs));
   const [dragMode, setDragMode] = useState<'zoom' | 'select'>('zoom');
   const [fitRequest, setFitRequest] = useState<FitRequest>({ shotId: data.shots[0]?.shotId ?? '', xFrom: '', xTo: '' });
   const [fits, setFits] = useState<KeptFit[]>([]);
-  const revise = useCreateRevision(data.id, data.lineId);
 
-  // Another revision arrived (chosen, or just saved): start the draft from its exclusions.
-  if (draftOf !== data) {
-    setDraftOf(data);
-    setDraft(saved);
-    setSelected(new Set());
-  }
-
-  const excludedNow = useMemo(() => new Set(draft.keys()), [draft]);
-  const qcPicks = useMemo(() => toQcPicks(data.picks, excludedNow), [data.picks, excludedNow]);
+  const qcPicks = useMemo(() => toQcPicks(data.picks, ex.excluded), [data.picks, ex.excluded]);
   const picksByIndex = useMemo(() => new Map(data.picks.map((p) => [p.index, p])), [data.picks]);
   const curves = useMemo(() => travelTimeCurves(qcPicks), [qcPicks]);
   const flags = useMemo(() => flagSuspectPicks(qcPicks), [qcPicks]);
@@ -76,9 +62,6 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
     return m;
   }, [qcPicks]);
   const shotOrder = useMemo(() => new Map(curves.map((c, k) => [c.shotId, k])), [curves]);
-
-  const added = [...draft.keys()].filter((i) => !saved.has(i)).length + [...draft].filter(([i, r]) => saved.has(i) && saved.get(i) !== r).length;
-  const removed = [...saved.keys()].filter((i) => !draft.has(i)).length;
   const overTolerance = pairs.filter((p) => p.flagged).length;
   const latest = data.revisions.at(-1)?.number ?? data.revision.number;
 
@@ -90,39 +73,18 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
       return next;
     });
   }, []);
-
-  const toggleSelected = useCallback((indices: number[], on: boolean) => {
-    setSelected((s) => {
-      const next = new Set(s);
-      for (const i of indices) {
-        if (on) next.add(i);
-        else next.delete(i);
-      }
-      return next;
-    });
-  }, []);
-
+  const { flipSelected } = ex;
   const onPickClick = useCallback(
     (index: number) => {
       const p = picksByIndex.get(index);
       if (p) setFitRequest((r) => ({ ...r, shotId: p.shotId }));
-      if (canExclude) setSelected((s) => {
-        const next = new Set(s);
-        if (!next.delete(index)) next.add(index);
-        return next;
-      });
+      if (canExclude) flipSelected(index);
     },
-    [picksByIndex, canExclude],
+    [picksByIndex, canExclude, flipSelected],
   );
-
   const onRange = useCallback((a: number, b: number) => {
     setFitRequest((r) => ({ ...r, xFrom: String(+a.toFixed(2)), xTo: String(+b.toFixed(2)) }));
   }, []);
-
-  function save(comment: string) {
-    const exclusions = [...draft].map(([index, reason]) => ({ index, reason })).sort((a, b) => a.index - b.index);
-    revise.mutate(comment ? { exclusions, comment } : { exclusions }, { onSuccess: ({ number }) => onRevisionSaved(number) });
-  }
 
   const pickSetLabel = `${data.fileName}, revision ${data.revision.number}`;
 
@@ -131,7 +93,7 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
       <dl data-testid="checks-facts" className="mb-8 flex flex-wrap gap-x-10 gap-y-3">
         <Fact term="Shots">{data.shots.length}</Fact>
         <Fact term="Picks">{data.picks.length.toLocaleString('en-GB')}</Fact>
-        <Fact term="Excluded">{draft.size}</Fact>
+        <Fact term="Excluded">{ex.draft.size}</Fact>
         <Fact term="Suspect picks" tone={flags.length ? 'warn' : undefined}>
           {flags.length}
         </Fact>
@@ -165,12 +127,12 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
             revisionKey={`${data.id}`}
             curves={curves}
             picksByIndex={picksByIndex}
-            excluded={excludedNow}
+            excluded={ex.excluded}
             hidden={hidden}
             flags={flags}
             pairs={pairs}
             fits={fits}
-            selected={selected}
+            selected={ex.selected}
             dragMode={dragMode}
             onToggleTrace={toggleTrace}
             onRange={onRange}
@@ -193,7 +155,7 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
       </div>
 
       <Section title="Suspect picks" description="Steps between neighbouring receivers faster than 8000 m/s or slower than 100 m/s by more than the picks’ own uncertainty explains, and times that fall away from the source. Look at these traces again; a flag is not a verdict.">
-        <SuspectPicksTable flags={flags} picksByIndex={picksByIndex} selected={selected} onSelect={canExclude ? (i) => toggleSelected([i], !selected.has(i)) : undefined} />
+        <SuspectPicksTable flags={flags} picksByIndex={picksByIndex} selected={ex.selected} onSelect={canExclude ? flipSelected : undefined} />
       </Section>
 
       <Section title="Shots" description="Derived from the pick file: one source position per shot id.">
@@ -208,31 +170,22 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
           <div className="mb-4">
             <ExclusionForm
               key={data.revision.number}
-              selectedCount={selected.size}
-              selectedExcluded={[...selected].filter((i) => draft.has(i)).length}
-              added={added}
-              removed={removed}
+              selectedCount={ex.selected.size}
+              selectedExcluded={[...ex.selected].filter((i) => ex.draft.has(i)).length}
+              added={ex.added}
+              removed={ex.removed}
               nextRevision={latest + 1}
-              saving={revise.isPending}
-              error={revise.error}
-              onExclude={(reason) => {
-                setDraft((d) => new Map([...d, ...[...selected].map((i) => [i, reason] as [number, string])]));
-                setSelected(new Set());
-              }}
-              onInclude={() => {
-                setDraft((d) => new Map([...d].filter(([i]) => !selected.has(i))));
-                setSelected(new Set());
-              }}
-              onClearSelection={() => setSelected(new Set())}
-              onDiscard={() => {
-                setDraft(saved);
-                revise.reset();
-              }}
-              onSave={save}
+              saving={ex.revise.isPending}
+              error={ex.revise.error}
+              onExclude={ex.excludeSelected}
+              onInclude={ex.includeSelected}
+              onClearSelection={ex.clearSelection}
+              onDiscard={ex.discard}
+              onSave={ex.save}
             />
           </div>
         )}
-        <PicksTable picks={data.picks} shots={data.shots} flags={flags} exclusions={draft} saved={saved} selected={selected} onToggle={canExclude ? toggleSelected : undefined} />
+        <PicksTable picks={data.picks} shots={data.shots} flags={flags} exclusions={ex.draft} saved={ex.saved} selected={ex.selected} onToggle={canExclude ? ex.toggleSelected : undefined} />
       </Section>
     </div>
   );
