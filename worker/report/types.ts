@@ -1,0 +1,53 @@
+import type { Grid } from '../../shared/grid';
+import type { ModelFile } from '../../shared/model';
+
+/**
+ * Everything the PDF summary shows, gathered from the database by worker/processors/report.ts.
+ * Pure data: the renderer does no I/O. SI units (m, s, m/s) unless a name says ms.
+ */
+export interface ReportInput {
+  reportId: string;
+  /** Shown on the cover, e.g. "draft", "submitted", "approved", "shared". */
+  status: string;
+  /** Date the PDF was produced. */
+  date: Date;
+  consultancy: string;
+  project: { name: string; site: string; clientOrganisation: string };
+  line: { name: string; notes: string };
+  preparedBy: string;
+  /** Name of the lead who approved it; null before approval. */
+  reviewedBy: string | null;
+  /** Free text from the geophysicist: acquisition notes for the survey section. */
+  acquisitionNotes: string;
+  stations: { station: number; x: number; z: number }[];
+  shots: { shotId: string; sourceX: number; sourceZ: number }[];
+  model: { name: string; version: number; comment: string; file: ModelFile };
+  run: {
+    id: string;
+    order: 1 | 2;
+    createdAt: Date;
+    pickSetFile: string;
+    pickSetRevision: number;
+    /** As stored on the run: rms_ms, chi2, max_abs_residual_ms, mean_residual_ms, shots, picks, excluded, by_shot[], by_receiver[]. */
+    stats: RunStatsJson;
+  };
+  residuals: { shotId: string; receiverX: number; observedMs: number; computedMs: number; residualMs: number; sigmaMs: number; excluded: boolean }[];
+  /** The shot chosen for the section figure: its travel-time field (s, air NaN) and rays. */
+  section: { shotId: string; grid: Grid; source: { x: number; z: number }; times: Float32Array; rays: { pickIndex: number; points: number[] }[] };
+  /** Velocity (m/s) of the iso-velocity surface whose depth is tabulated (e.g. top of rock). */
+  isoVelocity: number;
+}
+
+export interface RunStatsJson {
+  rms_ms: number | null;
+  chi2: number | null;
+  max_abs_residual_ms: number | null;
+  mean_residual_ms: number | null;
+  shots: number;
+  picks: number;
+  excluded: number;
+  solve_seconds: number;
+  active_nodes: number;
+  by_shot: { shotId: string; count: number; rms_ms: number | null; chi2: number | null; max_abs_residual_ms: number | null; mean_residual_ms: number | null }[];
+  by_receiver: { receiverX: number; count: number; rms_ms: number | null; chi2: number | null; max_abs_residual_ms: number | null }[];
+}
