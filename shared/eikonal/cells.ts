@@ -9,6 +9,7 @@
  * (docs/engine.md, "Interfaces"); see InterfaceRule for the candidates.
  */
 import type { Grid } from '../grid';
+import { refineStaircase } from './staircase';
 
 /**
  * How a contrast cell's slowness is taken from its active corners:
@@ -18,10 +19,13 @@ import type { Grid } from '../grid';
  * - 'slowest' largest corner slowness
  * - 'upper'   mean slowness of the cell's upper row (matches a rasteriser that gives a node
  *             lying exactly on an interface to the layer below it)
+ * - 'staircase' horizontal splits read as 'upper' on flat runs and interpolated along the stepped
+ *             runs of a dipping interface (staircase.ts); other contrast cells (the corner
+ *             cells of steps, steep interfaces) take the 'mean'
  */
-export type InterfaceRule = 'node' | 'mean' | 'fastest' | 'slowest' | 'upper';
+export type InterfaceRule = 'node' | 'mean' | 'fastest' | 'slowest' | 'upper' | 'staircase';
 
-export const DEFAULT_INTERFACE_RULE: InterfaceRule = 'upper';
+export const DEFAULT_INTERFACE_RULE: InterfaceRule = 'staircase';
 /** Corner slownesses differing by more than this ratio mark a contrast cell. */
 export const CONTRAST_RATIO = 1.25;
 
@@ -98,6 +102,7 @@ export function cellSlowness(
       else value[c] = mean;
     }
   }
+  if (rule === 'staircase') refineStaircase(grid, slowness, active, value, contrast, ratio);
   return { value, contrast };
 }
 
