@@ -1,5 +1,6 @@
 import { createBrowserRouter } from 'react-router';
 import { AppShell } from './components/AppShell';
+import { Loading } from './components/LoadState';
 import { AccountsPage } from './routes/AccountsPage';
 import { LinePage } from './routes/LinePage';
 import { NotFoundPage } from './routes/NotFoundPage';
@@ -7,6 +8,9 @@ import { ProjectPage } from './routes/ProjectPage';
 import { ProjectsPage } from './routes/ProjectsPage';
 import { RouteErrorPage } from './routes/RouteErrorPage';
 import { SignInPage } from './routes/SignInPage';
+
+/** Shown while a lazily loaded run page arrives on a first visit straight to its address. */
+const runPageLoading = <Loading what="page" />;
 
 /** Every page of the client. Pages inside the shell require a signed-in user. */
 export const router = createBrowserRouter([
@@ -23,9 +27,9 @@ export const router = createBrowserRouter([
           { path: 'projects/:projectId', element: <ProjectPage /> },
           { path: 'lines/:lineId', element: <LinePage /> },
           // Run pages load on first visit: they carry the chart code, which most visits never need.
-          { path: 'lines/:lineId/runs', lazy: async () => ({ Component: (await import('./routes/LineRunsPage')).LineRunsPage }) },
-          { path: 'runs/:runId', lazy: async () => ({ Component: (await import('./routes/RunPage')).RunPage }) },
-          { path: 'runs/:runId/compare/:otherRunId', lazy: async () => ({ Component: (await import('./routes/RunComparePage')).RunComparePage }) },
+          { path: 'lines/:lineId/runs', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/LineRunsPage')).LineRunsPage }) },
+          { path: 'runs/:runId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunPage')).RunPage }) },
+          { path: 'runs/:runId/compare/:otherRunId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunComparePage')).RunComparePage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },
           { path: '*', element: <NotFoundPage /> },
         ],

@@ -6,7 +6,7 @@ import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
 import { runLabel } from '../components/run/compare/CompareChooser';
 import { CompareShots, CompareStats } from '../components/run/compare/CompareStats';
-import { compareSentence } from '../components/run/compare/compareWords';
+import { comparisonHeadline } from '../components/run/compare/compareWords';
 import { DifferenceView } from '../components/run/compare/DifferenceView';
 import { RUN_STATUS_LABELS } from '../components/run/format';
 import { RunCaution } from '../components/run/RunCaution';
@@ -84,7 +84,7 @@ export function RunComparePage() {
     body = (
       <>
         <p data-testid="compare-sentence" className="mb-2 text-lg font-semibold text-stone-900">
-          {compareSentence(sa.rms_ms, sb.rms_ms)}
+          {comparisonHeadline(sa.rms_ms, sb.rms_ms, runA.pickSetId === runB.pickSetId)}
         </p>
         <ul className="mb-6 list-disc pl-5 text-stone-700">
           {runA.order !== runB.order && (
@@ -92,12 +92,13 @@ export function RunComparePage() {
               The runs use different solver orders, so part of every difference is the solver's own error rather than the model.
             </li>
           )}
-          {(runA.pickSetId !== runB.pickSetId || runA.pickSetRevision !== runB.pickSetRevision) && (
-            <li>The runs use different picks; only picks of the same shot at the same receiver position are differenced.</li>
+          {runA.pickSetId === runB.pickSetId && runA.pickSetRevision !== runB.pickSetRevision && (
+            <li>The runs use different revisions of the pick set (different exclusions), so their statistics cover slightly different picks.</li>
           )}
+          {runA.pickSetId !== runB.pickSetId && <li>Only picks of the same shot at the same receiver position are differenced below.</li>}
           {runA.modelId === runB.modelId && <li>Both runs solved the same model version.</li>}
         </ul>
-        <section aria-labelledby="cmp-stats" className="mb-10 grid gap-6 lg:grid-cols-[3fr_2fr]">
+        <section aria-labelledby="cmp-stats" className="mb-10 grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
           <div>
             <h2 id="cmp-stats" className="mb-3 text-xl font-semibold text-stone-900">
               Statistics side by side

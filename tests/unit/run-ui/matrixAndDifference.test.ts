@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { compareResiduals, rmsMs } from '../../../src/components/run/compare/residualDifference';
-import { compareSentence } from '../../../src/components/run/compare/compareWords';
+import { comparisonHeadline, compareSentence } from '../../../src/components/run/compare/compareWords';
 import { buildMatrix } from '../../../src/components/run/misfit/matrix';
 import { row } from './fixtures';
 
@@ -54,5 +54,12 @@ describe('compareSentence', () => {
   it('calls a difference under a hundredth of a millisecond a tie, and never prints NaN', () => {
     expect(compareSentence(0.512, 0.515)).toMatch(/equally well/);
     expect(compareSentence(Number.NaN, 0.5)).not.toMatch(/NaN/);
+  });
+});
+
+describe('comparisonHeadline', () => {
+  it('names no winner when the runs fit different pick sets', () => {
+    expect(comparisonHeadline(0.5, 4.8, false)).toMatch(/do not rank/);
+    expect(comparisonHeadline(0.5, 4.8, true)).toMatch(/^Run A fits the picks better/);
   });
 });

@@ -15,11 +15,11 @@ const pickName = (s: Side) => `${s.summary?.pickSet.fileName ?? 'pick set'} rev 
 function Row({ label, a, b, diff }: { label: string; a: ReactNode; b: ReactNode; diff?: ReactNode }) {
   return (
     <tr className="border-b border-stone-200 last:border-b-0 even:bg-stone-50">
-      <th scope="row" className="px-4 py-2 text-left font-semibold text-stone-700">
+      <th scope="row" className="whitespace-nowrap px-4 py-2 text-left font-semibold text-stone-700">
         {label}
       </th>
-      <td className="px-4 py-2 text-right tabular-nums">{a}</td>
-      <td className="px-4 py-2 text-right tabular-nums">{b}</td>
+      <td className="whitespace-nowrap px-4 py-2 text-right tabular-nums">{a}</td>
+      <td className="whitespace-nowrap px-4 py-2 text-right tabular-nums">{b}</td>
       <td className="px-4 py-2 text-right tabular-nums text-stone-700">{diff ?? ''}</td>
     </tr>
   );

@@ -12,3 +12,14 @@ export function compareSentence(rmsA: number, rmsB: number, tieMs = 0.01): strin
   const pct = worse > 0 ? (Math.abs(diff) / worse) * 100 : 0;
   return `Run ${better} fits the picks better: its RMS misfit is ${Math.abs(diff).toFixed(2)} ms lower (${pct.toFixed(0)} % less).`;
 }
+
+/**
+ * The comparison's headline. RMS figures only rank models when both runs fit the same picks;
+ * runs on different pick sets are shown side by side without a winner.
+ */
+export function comparisonHeadline(rmsA: number, rmsB: number, samePickSet: boolean): string {
+  if (!samePickSet) {
+    return 'These runs fit different pick sets, so their misfits do not rank one model against the other. Compare runs on the same pick set for that.';
+  }
+  return compareSentence(rmsA, rmsB);
+}

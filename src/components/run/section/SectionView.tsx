@@ -1,23 +1,19 @@
-import { useMemo, useState } from 'react';
-import type { Layout } from 'plotly.js';
+import { useMemo, useState, type ReactNode } from 'react';
 import { evalPolyline } from '../../../../shared/model/polyline';
 import { sToMs } from '../../../../shared/units';
 import { errorMessage } from '../../../api/errors';
 import { useModelGrid, usePrefetchFields, useRays, useRunModel, useRunShots, useShotField } from '../../../api/runs';
 import type { RunDetail, Station } from '../../../api/types';
-import { SelectField } from '../../Field';
 import { Button } from '../../Button';
+import { SelectField } from '../../Field';
 import { metres, ms } from '../format';
-import { RunPlot } from '../plot/RunPlot';
-import { RUN_CHART_CONFIG, RUN_CHART_FONT, runAxis } from '../plot/runChartTheme';
 import { useElementWidth } from '../useElementWidth';
 import { contourLevels, defaultContourInterval, finiteMax, usableIntervals } from './contourLevels';
-import { sectionHeight } from './sectionData';
-import { geometryTraces, rayTraces, velocityTrace, wavefrontTraces } from './sectionTraces';
+import { SECTION_COLOURS } from './drawSection';
+import { SectionCanvas, type SectionOverlay } from './SectionCanvas';
+import { wavefronts } from './wavefronts';
 
 const EXAGGERATIONS = [1, 2, 3, 5] as const;
-/** Room around the drawing area: axis titles, tick labels, colour bar and legend (px). */
-const CHROME = { left: 70, right: 110, top: 56, bottom: 70 };
 
 interface SectionViewProps {
   run: RunDetail;
@@ -26,6 +22,17 @@ interface SectionViewProps {
   shotId: string;
   highlightPick: number | null;
   onShot: (shotId: string) => void;
+}
+
+function LegendItem({ swatch, children }: { swatch: ReactNode; children: ReactNode }) {
+  return (
+    <li className="flex items-center gap-1.5">
+      <span aria-hidden="true" className="inline-flex w-6 justify-center">
+        {swatch}
+      </span>
+      {children}
+    </li>
+  );
 }
 
 /**
@@ -53,66 +60,33 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
   const autoInterval = Number.isFinite(maxMs) ? defaultContourInterval(maxMs) : Number.NaN;
   const size = interval === 'auto' || !choices.includes(interval) ? autoInterval : interval;
   const levels = useMemo(() => (Number.isFinite(maxMs) ? contourLevels(maxMs, size) : null), [maxMs, size]);
+  const fronts = useMemo(() => (field.data && levels ? wavefronts(field.data, field.data.source, levels) : null), [field.data, levels]);
 
   const file = model.data?.model;
-  const shotMarks = useMemo(() => {
-    if (!shots.data) return [];
-    return shots.data.map((s) => ({
-      shotId: s.shotId,
-      x: s.sourceX,
-      z: s.sourceZ ?? (file?.surface ? evalPolyline(file.surface, s.sourceX) : Number.NaN),
-    }));
-  }, [shots.data, file]);
-
-  // One memo per group of traces, so a new shot leaves the heatmap's arrays (and plotly's work on them) alone.
-  const velocityLayer = useMemo(() => (velocity.data ? velocityTrace(velocity.data) : null), [velocity.data]);
-  const wavefronts = useMemo(() => (field.data && levels ? wavefrontTraces(field.data, field.data.source, levels) : []), [field.data, levels]);
-  const rayLayer = useMemo(() => (showRays && rays.data ? rayTraces(rays.data, highlightPick) : []), [showRays, rays.data, highlightPick]);
-  const geometry = useMemo(
-    () =>
-      geometryTraces({
-        surface: (file?.surface as [number, number][] | undefined) ?? null,
-        layerBases: (file?.layers ?? []).filter((l) => l.base).map((l) => ({ name: l.name ?? 'layer', base: l.base as [number, number][] })),
-        stations,
-        shots: shotMarks,
-        selectedShot: shotId,
-      }),
-    [file, stations, shotMarks, shotId],
-  );
-  const data = useMemo(
-    () => (velocityLayer ? [velocityLayer, ...wavefronts, ...rayLayer, ...geometry] : []),
-    [velocityLayer, wavefronts, rayLayer, geometry],
-  );
-
-  const grid = velocity.data?.grid;
-  const plotWidth = Math.max(200, width - CHROME.left - CHROME.right);
-  const height = grid ? sectionHeight(grid, plotWidth, ve, CHROME.top + CHROME.bottom) : 320;
-  const layout = useMemo<Partial<Layout>>(
-    () => ({
-      font: RUN_CHART_FONT,
-      uirevision: `${run.id}:${ve}`,
-      margin: { l: CHROME.left, r: 20, t: CHROME.top, b: CHROME.bottom },
-      paper_bgcolor: 'white',
-      plot_bgcolor: '#fafaf9',
-      hovermode: 'closest',
-      legend: { orientation: 'h', yanchor: 'bottom', y: 1, x: 0, font: { size: 13 } },
-      xaxis: { ...runAxis, title: { text: 'x along the line (m)' }, showgrid: false, zeroline: false },
-      yaxis: { ...runAxis, title: { text: 'elevation (m)' }, scaleanchor: 'x', scaleratio: ve, constrain: 'domain', showgrid: false, zeroline: false },
-    }),
-    [run.id, ve],
-  );
+  const overlay = useMemo<SectionOverlay>(() => {
+    const surface = (file?.surface as [number, number][] | undefined) ?? null;
+    return {
+      fronts,
+      rays: showRays ? (rays.data ?? []) : [],
+      highlightPick,
+      surface,
+      layerBases: (file?.layers ?? []).filter((l) => l.base).map((l) => ({ name: l.name ?? 'layer', base: l.base as [number, number][] })),
+      stations,
+      shots: (shots.data ?? []).map((s) => ({ shotId: s.shotId, x: s.sourceX, z: s.sourceZ ?? (surface ? evalPolyline(surface, s.sourceX) : Number.NaN) })),
+      selectedShot: shotId,
+    };
+  }, [fronts, showRays, rays.data, highlightPick, file, stations, shots.data, shotId]);
 
   const problem = velocity.error ?? field.error ?? rays.error ?? model.error;
-  const waiting = velocity.isPending;
 
   return (
     <div data-testid="section-view">
       <div className="mb-4 flex flex-wrap items-end gap-4">
         <div className="flex items-end gap-2">
-          <Button variant="secondary" size="sm" aria-label="Previous shot" disabled={at <= 0} onClick={() => onShot(shotIds[at - 1]!)}>
+          <Button variant="secondary" aria-label="Previous shot" disabled={at <= 0} onClick={() => onShot(shotIds[at - 1]!)} data-testid="section-previous">
             ←
           </Button>
-          <div className="w-40">
+          <div className="w-36">
             <SelectField label="Shot" value={shotId} onChange={(e) => onShot(e.target.value)} data-testid="section-shot">
               {shotIds.map((s) => (
                 <option key={s} value={s}>
@@ -121,11 +95,11 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
               ))}
             </SelectField>
           </div>
-          <Button variant="secondary" size="sm" aria-label="Next shot" disabled={at < 0 || at >= shotIds.length - 1} onClick={() => onShot(shotIds[at + 1]!)}>
+          <Button variant="secondary" aria-label="Next shot" disabled={at < 0 || at >= shotIds.length - 1} onClick={() => onShot(shotIds[at + 1]!)} data-testid="section-next">
             →
           </Button>
         </div>
-        <div className="w-48">
+        <div className="w-52">
           <SelectField
             label="Wavefront every"
             value={String(interval)}
@@ -166,25 +140,34 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
         {ve !== 1 && ' Heights are exaggerated, so slopes and angles look steeper than they are.'}
       </p>
       {problem ? (
-        <p role="alert" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
-          The section could not be drawn: {errorMessage(problem)}
+        <p role="alert" className="mb-2 rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
+          The section could not be drawn completely: {errorMessage(problem)}
         </p>
       ) : null}
-      <div ref={ref}>
-        {waiting ? (
-          <div role="status" style={{ height }} className="flex items-center justify-center rounded-lg border border-stone-200 bg-white text-stone-600">
+      <div ref={ref} className="overflow-x-auto rounded-lg border border-stone-200 bg-white p-2">
+        {velocity.data ? (
+          <SectionCanvas
+            velocity={velocity.data}
+            field={field.data ?? null}
+            overlay={overlay}
+            width={Math.max(320, width - 16)}
+            exaggeration={ve}
+            label={`Velocity section with the wavefronts and rays of shot ${shotId}, vertical exaggeration ${ve} times`}
+          />
+        ) : (
+          <div role="status" className="flex h-72 items-center justify-center text-stone-600">
             Loading the model…
           </div>
-        ) : (
-          <RunPlot
-            height={height}
-            label={`Velocity section with the wavefronts and rays of shot ${shotId}`}
-            data={data}
-            layout={layout}
-            config={RUN_CHART_CONFIG}
-          />
         )}
       </div>
+      <ul className="mt-2 flex flex-wrap gap-x-5 gap-y-1 text-sm text-stone-700" aria-label="Legend">
+        <LegendItem swatch={<span className="block h-px w-6" style={{ background: SECTION_COLOURS.wavefront }} />}>Wavefronts (labels in ms)</LegendItem>
+        <LegendItem swatch={<span className="block h-0.5 w-6" style={{ background: SECTION_COLOURS.rayChosen }} />}>Rays, receiver to shot</LegendItem>
+        <LegendItem swatch={<span className="block w-6 border-t-2 border-dashed" style={{ borderColor: SECTION_COLOURS.base }} />}>Layer bases</LegendItem>
+        <LegendItem swatch={<span className="block h-0.5 w-6" style={{ background: SECTION_COLOURS.surface }} />}>Ground surface</LegendItem>
+        <LegendItem swatch={<span style={{ color: SECTION_COLOURS.station }}>▼</span>}>Stations (geophones)</LegendItem>
+        <LegendItem swatch={<span style={{ color: SECTION_COLOURS.shotChosen }}>★</span>}>Shots (chosen one larger)</LegendItem>
+      </ul>
     </div>
   );
 }
