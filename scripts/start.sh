@@ -19,6 +19,8 @@ start_postgres
 start_redis
 export_service_env
 export PORT NODE_ENV=production
+# Mail goes to the local sink inside the API (admin's outbox page) unless a real SMTP service is set.
+[ -n "${SMTP_HOST:-}" ] || export MAIL_SINK_PORT=${MAIL_SINK_PORT:-2525} SMTP_PORT=${MAIL_SINK_PORT:-2525}
 # A stable session secret per checkout, so sign-ins survive a restart.
 [ -f "$TF_DATA/session-secret" ] || node -e "console.log(require('crypto').randomBytes(32).toString('hex'))" > "$TF_DATA/session-secret"
 export SESSION_SECRET=${SESSION_SECRET:-$(cat "$TF_DATA/session-secret")}

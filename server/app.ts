@@ -10,6 +10,7 @@ import { requireCsrfToken } from './auth/csrf';
 import { passport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import { errorHandler, notFoundApi } from './http/errors';
+import type { Mailer } from './mail/mailer';
 import { apiRouters } from './routes';
 
 export interface AppDeps {
@@ -17,12 +18,13 @@ export interface AppDeps {
   pgPool: pg.Pool;
   /** Producer side of the job queue. */
   queue: Queue;
+  mailer: Mailer;
   /** Folder of the built client; served with a fallback to index.html when present. */
   clientDir?: string;
 }
 
 /** The whole HTTP app, without listening: tests drive it with supertest. */
-export function createApp({ redis, pgPool, queue, clientDir = path.resolve('dist') }: AppDeps): Express {
+export function createApp({ redis, pgPool, queue, mailer, clientDir = path.resolve('dist') }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.use(
@@ -47,7 +49,7 @@ export function createApp({ redis, pgPool, queue, clientDir = path.resolve('dist
 
   const api = express.Router();
   api.use(requireCsrfToken);
-  api.use(...apiRouters(redis, queue));
+  api.use(...apiRouters(redis, queue, mailer));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -16,4 +16,16 @@ export const config = {
   /** Set COOKIE_SECURE=1 behind HTTPS. */
   cookieSecure: env.COOKIE_SECURE === '1',
   isTest: env.NODE_ENV === 'test',
+  smtp: {
+    host: env.SMTP_HOST ?? '127.0.0.1',
+    port: Number(env.SMTP_PORT ?? 2525),
+    secure: env.SMTP_SECURE === '1',
+    user: env.SMTP_USER,
+    password: env.SMTP_PASSWORD,
+    from: env.MAIL_FROM ?? 'Timefield <timefield@localhost>',
+  },
+  /** Port of the in-process mail sink; unset means no sink (a real SMTP service is configured). */
+  mailSinkPort: env.MAIL_SINK_PORT ? Number(env.MAIL_SINK_PORT) : null,
+  /** Links in e-mails point here. */
+  publicUrl: env.PUBLIC_URL ?? `http://127.0.0.1:${env.PORT ?? 8080}`,
 };

@@ -3,11 +3,12 @@ import { PickSet } from './PickSet';
 import { PickSetRevision } from './PickSetRevision';
 import { Station } from './Station';
 import { Project } from './Project';
+import { Report } from './Report';
 import { Run } from './Run';
 import { ProjectMember } from './ProjectMember';
 import { SurveyLine } from './SurveyLine';
 import { User } from './User';
 import { VelocityModel } from './VelocityModel';
 
-export { AuditEntry, PickSet, PickSetRevision, Project, ProjectMember, Run, Station, SurveyLine, User, VelocityModel };
-export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry, Station, PickSet, PickSetRevision, VelocityModel, Run];
+export { AuditEntry, PickSet, PickSetRevision, Project, ProjectMember, Report, Run, Station, SurveyLine, User, VelocityModel };
+export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry, Station, PickSet, PickSetRevision, VelocityModel, Run, Report];

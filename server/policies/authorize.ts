@@ -63,3 +63,11 @@ export function authorize(action: Action, scope?: ProjectScope): PolicyMiddlewar
   };
   return Object.assign(mw, { policyAction: action });
 }
+
+/** The same table, asked inside a handler: may this role in the project do `action`? */
+export function allows(action: Action, role: ProjectRole | null, isAdmin = false): boolean {
+  const rule = policyTable[action];
+  if (rule === 'anyone' || rule === 'signed_in') return true;
+  if ('admin' in rule && rule.admin && isAdmin) return true;
+  return 'roles' in rule && role !== null && (rule.roles as readonly ProjectRole[]).includes(role);
+}

@@ -50,3 +50,10 @@ export const projectOfRun: ProjectScope = async (req) => {
   const rows = await dataSource.query('SELECT l.project_id FROM runs r JOIN survey_lines l ON l.id = r.line_id WHERE r.id = $1', [id]);
   return rows[0]?.project_id ?? null;
 };
+
+export const projectOfReport: ProjectScope = async (req) => {
+  const id = req.params.reportId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT project_id FROM reports WHERE id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};

@@ -45,6 +45,17 @@ export const policyTable = {
   'run.read': { roles: STAFF },
   'run.cancel': { roles: ['geophysicist', 'lead'] },
 
+  'reports.create': { roles: ['geophysicist', 'lead'] },
+  // A client reads a report only once it is shared with them (checked with report.read_unshared).
+  'report.read': { roles: MEMBERS },
+  'report.read_unshared': { roles: STAFF },
+  'report.submit': { roles: ['geophysicist'] },
+  'report.review': { roles: ['lead'] },
+  'report.share': { roles: ['lead'] },
+  'project.reports.list': { roles: MEMBERS },
+  'project.audit.read': { admin: true, roles: ['lead'] },
+  'outbox.read': { admin: true },
+
   'pickset.read': { roles: STAFF },
   'pickset.revise': { roles: ['geophysicist'] },
 } as const satisfies Record<string, Rule>;

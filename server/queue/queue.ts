@@ -2,7 +2,7 @@ import { Queue } from 'bullmq';
 import { createRedis, QUEUE_NAME } from './connection';
 
 /** Job kinds on the one queue; the worker dispatches by name (worker/processors). */
-export type JobName = 'solve';
+export type JobName = 'solve' | 'report';
 
 /** Producer side of the queue (the API). The job id is the database row's id, so a retry never duplicates. */
 export function createJobQueue(): Queue {

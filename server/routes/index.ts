@@ -7,10 +7,13 @@ import { linesRouter } from './lines';
 import { modelsRouter } from './models';
 import { pickSetsRouter } from './pickSets';
 import { runsRouter } from './runs';
+import { reportsRouter } from './reports';
+import { adminRouter } from './admin';
+import type { Mailer } from '../mail/mailer';
 import { projectsRouter } from './projects';
 import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
-export function apiRouters(redis: Redis, queue: Queue): Router[] {
-  return [healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter(), runsRouter(queue)];
+export function apiRouters(redis: Redis, queue: Queue, mailer: Mailer): Router[] {
+  return [healthRouter(redis), authRouter(), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter(), runsRouter(queue), reportsRouter(queue, mailer), adminRouter()];
 }

@@ -44,6 +44,17 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/runs/:runId/fields/:shotId': STAFF_A,
   'GET /api/runs/:runId/rays': STAFF_A,
   'POST /api/runs/:runId/cancel': ['geophysicist', 'lead'],
+  'POST /api/runs/:runId/reports': ['geophysicist', 'lead'],
+  // A draft: the project's client may not read it yet (tests/api/reports.test.ts covers a shared one).
+  'GET /api/reports/:reportId': STAFF_A,
+  'GET /api/reports/:reportId/pdf': STAFF_A,
+  'POST /api/reports/:reportId/submit': ['geophysicist'],
+  'POST /api/reports/:reportId/approve': ['lead'],
+  'POST /api/reports/:reportId/return': ['lead'],
+  'POST /api/reports/:reportId/share': ['lead'],
+  'GET /api/projects/:projectId/reports': MEMBERS_A,
+  'GET /api/projects/:projectId/audit': ['admin', 'lead'],
+  'GET /api/outbox': ['admin'],
   'GET /api/picksets/:pickSetId': STAFF_A,
   'POST /api/picksets/:pickSetId/revisions': ['geophysicist'],
   'GET /api/picksets/:pickSetId/file': STAFF_A,
@@ -58,7 +69,7 @@ interface RouteInfo {
 
 function listRoutes(t: TestApp): RouteInfo[] {
   const out: RouteInfo[] = [];
-  for (const router of apiRouters(t.redis, t.queue)) {
+  for (const router of apiRouters(t.redis, t.queue, t.mailer)) {
     for (const layer of router.stack as { route?: { path: string; methods: Record<string, boolean>; stack: { handle: { policyAction?: string } }[] } }[]) {
       if (!layer.route) continue;
       for (const method of Object.keys(layer.route.methods)) {
@@ -79,6 +90,7 @@ function concretePath(path: string, w: World): string {
     .replace(':pickSetId', w.pickSetA)
     .replace(':modelId', w.modelA)
     .replace(':runId', w.runA)
+    .replace(':reportId', w.reportA)
     .replace(':shotId', 'F')
     .replace(':userId', w.loner.id);
 }
@@ -89,6 +101,8 @@ function concretePath(path: string, w: World): string {
  */
 function bodyFor(key: string, w: World): object {
   if (key === 'POST /api/runs') return { modelId: w.modelA, pickSetId: w.pickSetA, order: 3 };
+  if (/^POST \/api\/reports\/:reportId\//.test(key)) return { comment: 42 }; // not a string: 400 before any step
+  if (key === 'POST /api/runs/:runId/reports') return { isoVelocity: -1 };
   return {};
 }
 

@@ -7,6 +7,8 @@ import { createPgPool } from '../../../server/auth/session';
 import { initDataSource, dataSource } from '../../../server/db/dataSource';
 import { createRedis } from '../../../server/queue/connection';
 import { createJobQueue } from '../../../server/queue/queue';
+import { createMailer, type Mailer } from '../../../server/mail/mailer';
+import { startMailSink } from '../../../server/mail/sink';
 import type { Queue } from 'bullmq';
 
 export interface TestApp {
@@ -14,6 +16,7 @@ export interface TestApp {
   redis: Redis;
   pgPool: pg.Pool;
   queue: Queue;
+  mailer: Mailer;
   close(): Promise<void>;
 }
 
@@ -24,13 +27,19 @@ export async function startTestApp(): Promise<TestApp> {
   if (redis.status !== 'ready') await new Promise((resolve) => redis.once('ready', resolve));
   const pgPool = createPgPool();
   const queue = createJobQueue();
-  const app = createApp({ redis, pgPool, queue, clientDir: '/nonexistent' });
+  // A mail sink of this test's own, on a free port, writing to the test database.
+  const sink = await startMailSink(0);
+  const mailer = createMailer(sink.port);
+  const app = createApp({ redis, pgPool, queue, mailer, clientDir: '/nonexistent' });
   return {
     app,
     redis,
     pgPool,
     queue,
+    mailer,
     async close() {
+      mailer.close();
+      await sink.close();
       await Promise.allSettled([queue.close(), redis.quit(), pgPool.end()]);
       await dataSource.destroy();
     },

@@ -1,6 +1,6 @@
 import { dataSource } from '../../../server/db/dataSource';
 import { hashPassword } from '../../../server/auth/password';
-import { Project, ProjectMember, Run, SurveyLine, User } from '../../../server/entities';
+import { Project, ProjectMember, Report, Run, SurveyLine, User } from '../../../server/entities';
 import type { ProjectRole } from '../../../shared/schemas/projects';
 import { importPicks } from '../../../server/services/importPicks';
 import { saveModelVersion } from '../../../server/services/models';
@@ -23,6 +23,8 @@ export interface World {
   modelA: string;
   /** A finished run row of model A against pick set A (no results stored). */
   runA: string;
+  /** A draft report of run A (no PDF yet). */
+  reportA: string;
   /** An active account that belongs to no project. */
   loner: User;
 }
@@ -55,7 +57,9 @@ export async function resetWorld(): Promise<World> {
   const { id: modelA } = await saveModelVersion(users.geophysicist.id, projectA.id, lineA.id, WORLD_MODEL, { name: 'main', comment: '', basedOn: null });
   const runs = dataSource.getRepository(Run);
   const runA = (await runs.save(runs.create({ lineId: lineA.id, modelId: modelA, pickSetId: pickSetA, pickSetRevision: 0, order: 2, status: 'done', shotsTotal: 2, shotsDone: 2 }))).id;
-  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, loner };
+  const reports = dataSource.getRepository(Report);
+  const reportA = (await reports.save(reports.create({ runId: runA, projectId: projectA.id, status: 'draft', renderState: 'queued', options: { shotId: 'F', isoVelocity: 2500, acquisitionNotes: '' }, createdBy: users.geophysicist.id }))).id;
+  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, loner };
 }
 
 /** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */

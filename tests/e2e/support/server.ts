@@ -7,6 +7,8 @@ import { createPgPool } from '../../../server/auth/session';
 import { dataSource, initDataSource } from '../../../server/db/dataSource';
 import { createRedis } from '../../../server/queue/connection';
 import { createJobQueue } from '../../../server/queue/queue';
+import { createMailer } from '../../../server/mail/mailer';
+import { startMailSink } from '../../../server/mail/sink';
 import { seedDemo } from '../../../server/services/seedDemo';
 
 export interface E2eServer {
@@ -23,7 +25,9 @@ export async function startDemoServer(): Promise<E2eServer> {
   const redis = createRedis();
   const pgPool = createPgPool();
   const queue = createJobQueue();
-  const app = createApp({ redis, pgPool, queue, clientDir: path.resolve('dist') });
+  const sink = await startMailSink(0);
+  const mailer = createMailer(sink.port);
+  const app = createApp({ redis, pgPool, queue, mailer, clientDir: path.resolve('dist') });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -32,6 +36,8 @@ export async function startDemoServer(): Promise<E2eServer> {
     baseUrl: `http://127.0.0.1:${port}`,
     async close() {
       await new Promise((r) => server.close(r));
+      mailer.close();
+      await sink.close();
       await Promise.allSettled([queue.close(), redis.quit(), pgPool.end()]);
       await dataSource.destroy();
     },

@@ -1,0 +1,53 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+/** draft → submitted → approved | returned (→ submitted again) ; approved → shared with the client. */
+export type ReportStatus = 'draft' | 'submitted' | 'returned' | 'approved' | 'shared';
+export type RenderState = 'queued' | 'rendering' | 'ready' | 'failed';
+
+export interface ReportOptions {
+  /** Shot whose wavefronts and rays the velocity-section figure shows. */
+  shotId: string;
+  /** m/s: the iso-velocity surface whose depth is tabulated (e.g. top of rock). */
+  isoVelocity: number;
+  acquisitionNotes: string;
+}
+
+/** A PDF summary of one run and its review. Every step is in the audit log (object_type 'report'). */
+@Entity('reports')
+export class Report {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ type: 'uuid', name: 'run_id' })
+  runId: string;
+
+  @Column({ type: 'uuid', name: 'project_id' })
+  projectId: string;
+
+  @Column({ type: 'text', default: 'draft' })
+  status: ReportStatus;
+
+  @Column({ type: 'text', name: 'render_state', default: 'queued' })
+  renderState: RenderState;
+
+  @Column({ type: 'text', name: 'render_error', nullable: true })
+  renderError: string | null;
+
+  @Column({ type: 'jsonb' })
+  options: ReportOptions;
+
+  @Column({ type: 'bytea', nullable: true, select: false })
+  pdf: Buffer | null;
+
+  @Column({ type: 'timestamptz', name: 'pdf_rendered_at', nullable: true })
+  pdfRenderedAt: Date | null;
+
+  @Column({ type: 'uuid', name: 'reviewed_by', nullable: true })
+  reviewedBy: string | null;
+
+  @Column({ type: 'uuid', name: 'created_by', nullable: true })
+  createdBy: string | null;
+
+  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
+  createdAt: Date;
+}

@@ -1,0 +1,58 @@
+import { Router, type Request } from 'express';
+import type { Queue } from 'bullmq';
+import { reportStepBody, startReportBody } from '../../shared/schemas/reports';
+import { HttpError } from '../http/errors';
+import type { Mailer } from '../mail/mailer';
+import { parse } from '../http/parse';
+import { allows, authorize } from '../policies/authorize';
+import type { Action } from '../policies/table';
+import { projectFromParam, projectOfReport, projectOfRun } from '../policies/scopes';
+import { presentReport } from '../presenters/report';
+import { getReport, listProjectReports, loadPdf, reportHistory } from '../services/reportQueries';
+import { startReport, stepReport, type ReportStep } from '../services/reports';
+
+/** A report that is not yet shared exists, for a client, only as "not for you yet". */
+async function readableReport(req: Request) {
+  const report = await getReport(req.params.reportId as string);
+  if (report.status !== 'shared' && !allows('report.read_unshared', req.access!.role, req.user!.globalRole === 'admin')) {
+    throw new HttpError(403, 'forbidden', 'This report has not been shared with you yet.');
+  }
+  return report;
+}
+
+const STEP_ACTIONS: Record<ReportStep, Action> = { submit: 'report.submit', approve: 'report.review', return: 'report.review', share: 'report.share' };
+
+export function reportsRouter(queue: Queue, mailer: Mailer): Router {
+  const r = Router();
+
+  r.post('/runs/:runId/reports', authorize('reports.create', projectOfRun), async (req, res) => {
+    const report = await startReport(req.user!.id, req.access!.projectId, req.params.runId as string, parse(startReportBody, req.body), queue);
+    res.status(202).json({ id: report.id });
+  });
+
+  r.get('/reports/:reportId', authorize('report.read', projectOfReport), async (req, res) => {
+    const report = await readableReport(req);
+    res.json(presentReport(report, await reportHistory(report.id)));
+  });
+
+  r.get('/reports/:reportId/pdf', authorize('report.read', projectOfReport), async (req, res) => {
+    const report = await readableReport(req);
+    const pdf = await loadPdf(report.id);
+    if (!pdf) throw new HttpError(409, 'pdf_not_ready', 'The PDF is still being prepared. Try again in a few seconds.');
+    res.type('application/pdf').attachment(`timefield-report-${report.id.slice(0, 8)}.pdf`).send(pdf);
+  });
+
+  for (const step of Object.keys(STEP_ACTIONS) as ReportStep[]) {
+    r.post(`/reports/:reportId/${step}`, authorize(STEP_ACTIONS[step], projectOfReport), async (req, res) => {
+      const { comment } = parse(reportStepBody, req.body);
+      const result = await stepReport(req.user!, req.access!.projectId, req.params.reportId as string, step, comment, queue, mailer);
+      res.json({ ...presentReport(result.report, await reportHistory(result.report.id)), mailed: result.mailed, mailError: result.mailError });
+    });
+  }
+
+  r.get('/projects/:projectId/reports', authorize('project.reports.list', projectFromParam), async (req, res) => {
+    res.json(await listProjectReports(req.access!.projectId, !allows('report.read_unshared', req.access!.role)));
+  });
+
+  return r;
+}

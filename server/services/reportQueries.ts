@@ -1,0 +1,38 @@
+import { dataSource } from '../db/dataSource';
+import { Report } from '../entities';
+import { HttpError } from '../http/errors';
+import type { ReportEvent } from '../presenters/report';
+
+export async function getReport(id: string): Promise<Report> {
+  const report = await dataSource.getRepository(Report).findOneBy({ id });
+  if (!report) throw new HttpError(404, 'not_found', 'Not found.');
+  return report;
+}
+
+/** Who did what to the report, from the audit trail. */
+export async function reportHistory(id: string): Promise<ReportEvent[]> {
+  const rows = await dataSource.query(
+    `SELECT a.at, a.action, u.name AS actor, coalesce(a.detail->>'comment', '') AS comment
+     FROM audit_log a LEFT JOIN users u ON u.id = a.actor_id WHERE a.object_type = 'report' AND a.object_id = $1 ORDER BY a.id`,
+    [id],
+  );
+  return rows.map((r: ReportEvent) => ({ at: r.at, action: r.action.replace(/^report\./, ''), actor: r.actor, comment: r.comment }));
+}
+
+export async function loadPdf(id: string): Promise<Buffer | null> {
+  const [row] = await dataSource.query('SELECT pdf FROM reports WHERE id = $1', [id]);
+  return row?.pdf ?? null;
+}
+
+/** Reports of a project, newest first; `sharedOnly` for clients. */
+export async function listProjectReports(projectId: string, sharedOnly: boolean) {
+  const rows = await dataSource.query(
+    `SELECT r.id, r.status, r.render_state, r.created_at, r.run_id, l.name AS line, u.name AS created_by
+     FROM reports r JOIN runs x ON x.id = r.run_id JOIN survey_lines l ON l.id = x.line_id LEFT JOIN users u ON u.id = r.created_by
+     WHERE r.project_id = $1 ${sharedOnly ? `AND r.status = 'shared'` : ''} ORDER BY r.created_at DESC`,
+    [projectId],
+  );
+  return rows.map((r: Record<string, never>) => ({
+    id: r.id, status: r.status, renderState: r.render_state, createdAt: r.created_at, runId: r.run_id, line: r.line, createdBy: r.created_by,
+  }));
+}

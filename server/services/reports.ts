@@ -1,0 +1,75 @@
+import type { Queue } from 'bullmq';
+import { dataSource } from '../db/dataSource';
+import { Report } from '../entities';
+import type { ReportStatus } from '../entities/Report';
+import { HttpError } from '../http/errors';
+import type { Mailer } from '../mail/mailer';
+import type { StartReportBody } from '../../shared/schemas/reports';
+import { audit } from './audit';
+import { mailForStep } from './reportMail';
+
+export type ReportStep = 'submit' | 'approve' | 'return' | 'share';
+
+/** Which status each step leaves from, and where it goes. */
+const STEPS: Record<ReportStep, { from: ReportStatus[]; to: ReportStatus }> = {
+  submit: { from: ['draft', 'returned'], to: 'submitted' },
+  approve: { from: ['submitted'], to: 'approved' },
+  return: { from: ['submitted'], to: 'returned' },
+  share: { from: ['approved'], to: 'shared' },
+};
+
+/** Starts a report of a finished run: a draft row, and a job that renders its PDF. */
+export async function startReport(actorId: string, projectId: string, runId: string, body: StartReportBody, queue: Queue): Promise<Report> {
+  const [run] = await dataSource.query('SELECT status FROM runs WHERE id = $1', [runId]);
+  if (run?.status !== 'done') throw new HttpError(409, 'run_not_done', `Only a finished run can be reported; this one is ${run?.status ?? 'missing'}.`);
+  const shots: { shot_id: string }[] = await dataSource.query('SELECT shot_id FROM run_fields WHERE run_id = $1 ORDER BY shot_id', [runId]);
+  const shotId = body.shotId ?? shots[0]?.shot_id;
+  if (!shotId || !shots.some((s) => s.shot_id === shotId)) {
+    throw new HttpError(422, 'validation_failed', `shotId: this run has shots ${shots.map((s) => s.shot_id).join(', ')}`, [{ path: 'shotId', message: 'not a shot of this run' }]);
+  }
+  const report = await dataSource.transaction(async (em) => {
+    const saved = await em.save(em.create(Report, { runId, projectId, status: 'draft', renderState: 'queued', options: { shotId, isoVelocity: body.isoVelocity, acquisitionNotes: body.acquisitionNotes }, createdBy: actorId }));
+    await audit(em, { actorId, action: 'report.create', objectType: 'report', objectId: saved.id, projectId, detail: { runId } });
+    return saved;
+  });
+  await queueRender(queue, report.id);
+  return report;
+}
+
+/** Renders (again) the report's PDF; a render already waiting for the same report is not duplicated. */
+async function queueRender(queue: Queue, reportId: string): Promise<void> {
+  await queue.add('report', { reportId }, { jobId: `report-${reportId}-${Date.now()}` });
+}
+
+/** One workflow step: checks the status, records it in the audit trail, e-mails the people concerned. */
+export async function stepReport(actor: Express.User, projectId: string, reportId: string, step: ReportStep, comment: string, queue: Queue, mailer: Mailer) {
+  if (step === 'return' && !comment) {
+    throw new HttpError(400, 'validation_failed', 'comment: say what needs changing when returning a report', [{ path: 'comment', message: 'say what needs changing when returning a report' }]);
+  }
+  const report = await dataSource.transaction(async (em) => {
+    const found = await em.findOne(Report, { where: { id: reportId }, lock: { mode: 'pessimistic_write' } });
+    if (!found) throw new HttpError(404, 'not_found', 'Not found.');
+    const { from, to } = STEPS[step];
+    if (!from.includes(found.status)) {
+      throw new HttpError(409, 'invalid_step', `A ${found.status} report cannot be ${PAST[step]}; it must be ${from.join(' or ')} first.`);
+    }
+    found.status = to;
+    if (step === 'approve') found.reviewedBy = actor.id;
+    if (step === 'approve') found.renderState = 'queued';
+    await em.save(found);
+    await audit(em, { actorId: actor.id, action: `report.${step}`, objectType: 'report', objectId: reportId, projectId, detail: { comment, status: to } });
+    return found;
+  });
+  // The approved PDF names its reviewer and its status on the cover.
+  if (step === 'approve') await queueRender(queue, reportId);
+  const mail = await mailForStep(step, report, actor, comment);
+  try {
+    await mailer.send(mail);
+    return { report, mailed: mail.to };
+  } catch (err) {
+    console.error(`[mail] ${step} of report ${reportId}: ${(err as Error).message}`);
+    return { report, mailed: [], mailError: 'The step is recorded, but the e-mail could not be sent.' };
+  }
+}
+
+const PAST: Record<ReportStep, string> = { submit: 'submitted', approve: 'approved', return: 'returned', share: 'shared' };
