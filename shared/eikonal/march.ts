@@ -223,7 +223,8 @@ export function march(m: MarchState): void {
       // cells of that line go on to the exact test.
       const oAcross = alongX ? zq - zs : xq - xs;
       const hAcross = alongX ? dz : dx;
-      if (nearAxisOn && !two && (state[q] & HAS_TWO) === 0 && sEdge === sq && Math.abs(oAcross - (rq * rq * (alongX ? gz : gx)) / (2 * (vs + gx * (xq - xs) + gz * (zq - zs)))) <= 3 * hAcross) {
+      const vq = vs + gx * (xq - xs) + gz * (zq - zs); // reference velocity at q (> 0 near the source)
+      if (nearAxisOn && !two && (state[q] & HAS_TWO) === 0 && sEdge === sq && Math.abs(2 * oAcross * vq - rq * rq * (alongX ? gz : gx)) <= 6 * hAcross * vq) {
         // Slope of ln T₀ across the axis; small means q sits within about a cell of the reference's
         // own axis (the line where the across slope vanishes), where no upwind neighbour exists.
         const kappa = referenceLogSlope(xq - xs, zq - zs, gx, gz, vs, alongX);
