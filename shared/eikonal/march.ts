@@ -60,14 +60,15 @@ export function march(m: MarchState): void {
   const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, F, state, cellS, cellC, heap, safe, vs, gx, gz } = m;
   const nearAxisOn = factored;
   const ncx = nx - 1;
+  const invNx = 1 / nx;
   const invDx = 1 / dx;
   const invDz = 1 / dz;
 
   while (heap.size > 0) {
     const p = heap.pop();
     state[p] = DONE;
-    const pix = p % nx;
-    const piz = (p - pix) / nx;
+    const piz = Math.floor((p + 0.5) * invNx); // exact: the +½ keeps float rounding off row ends
+    const pix = p - piz * nx;
     const Tp = F[3 * p];
     if (factored) {
       const ox = x0 + pix * dx - xs;
