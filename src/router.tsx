@@ -12,6 +12,9 @@ import { SignInPage } from './routes/SignInPage';
 /** Shown while a lazily loaded run page arrives on a first visit straight to its address. */
 const runPageLoading = <Loading what="page" />;
 
+const modelEditorLoading = <Loading what="model editor" />;
+const loadModelEditor = () => import('./routes/ModelEditorPage').then((m) => ({ Component: m.ModelEditorPage }));
+
 /** Every page of the client. Pages inside the shell require a signed-in user. */
 export const router = createBrowserRouter([
   { path: '/signin', element: <SignInPage />, errorElement: <RouteErrorPage /> },
@@ -26,11 +29,18 @@ export const router = createBrowserRouter([
           { index: true, element: <ProjectsPage /> },
           { path: 'projects/:projectId', element: <ProjectPage /> },
           { path: 'lines/:lineId', element: <LinePage /> },
+          // The model editor (canvas section, preview worker) loads in its own chunk on first visit.
+          { path: 'lines/:lineId/models/new', hydrateFallbackElement: modelEditorLoading, lazy: loadModelEditor },
+          { path: 'models/:modelId', hydrateFallbackElement: modelEditorLoading, lazy: loadModelEditor },
           // Run pages load on first visit: they carry the chart code, which most visits never need.
           { path: 'lines/:lineId/runs', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/LineRunsPage')).LineRunsPage }) },
           { path: 'runs/:runId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunPage')).RunPage }) },
           { path: 'runs/:runId/compare/:otherRunId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunComparePage')).RunComparePage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },
+          // Reports, the mail outbox and the audit trail (issue 7), each in its own small chunk.
+          { path: 'reports/:reportId', hydrateFallbackElement: <Loading what="report" />, lazy: async () => ({ Component: (await import('./routes/ReportPage')).ReportPage }) },
+          { path: 'projects/:projectId/audit', hydrateFallbackElement: <Loading what="audit trail" />, lazy: async () => ({ Component: (await import('./routes/AuditPage')).AuditPage }) },
+          { path: 'admin/outbox', hydrateFallbackElement: <Loading what="outbox" />, lazy: async () => ({ Component: (await import('./routes/OutboxPage')).OutboxPage }) },
           { path: '*', element: <NotFoundPage /> },
         ],
       },

@@ -11,6 +11,11 @@ export const queryKeys = {
   pickSetRevision: (pickSetId: string, revision: number | null) => ['picksets', pickSetId, revision ?? 'latest'] as const,
 };
 
+/** Model versions never change once saved, so their keys are simple. */
+export const modelKeys = {
+  version: (modelId: string) => ['models', modelId] as const,
+};
+
 /** Forward runs. A finished run never changes, so its results, fields and rays are cached for good. */
 export const runKeys = {
   run: (runId: string) => ['runs', runId] as const,

@@ -199,6 +199,43 @@ export interface UserPatch {
   password?: string;
 }
 
+// Velocity model versions (issue 5). Each save is a new immutable version.
+
+/** One saved model version as the line lists it (newest version first per name). */
+export interface ModelVersionSummary {
+  id: string;
+  name: string;
+  version: number;
+  comment: string;
+  basedOn: string | null;
+  nx: number;
+  nz: number;
+  createdAt: string;
+  createdBy: PersonRef | null;
+}
+
+/** GET /api/models/:modelId — the file as saved plus its rasterised summary. */
+export interface ModelVersionDetail {
+  id: string;
+  lineId: string;
+  name: string;
+  version: number;
+  comment: string;
+  basedOn: string | null;
+  createdAt: string;
+  createdBy: PersonRef | null;
+  model: import('../../shared/model').ModelFile;
+  summary: { grid: import('../../shared/grid').Grid; nodes: number; activeNodes: number; vMin: number | null; vMax: number | null; warnings: string[] };
+}
+
+/** POST /api/lines/:lineId/models → 201 */
+export interface ModelSaved {
+  id: string;
+  version: number;
+  name: string;
+  warnings: string[];
+}
+
 // Forward runs (issue 6): state, statistics, residuals and rays as the runs API returns them.
 export type RunStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
 export type SolverOrder = 1 | 2;

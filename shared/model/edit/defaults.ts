@@ -1,8 +1,8 @@
 /**
- * A sensible first model for a survey line: the grid spans the stations and shots with a
- * margin, reaches about a quarter of the spread length below the lowest station (a common
- * rule of thumb for the depth a refraction spread sees; common practice, no source), and
- * holds two layers whose boundary follows the ground surface.
+ * A sensible first model for a survey line: the grid spans the stations and the shots within one
+ * spread length of them, with a margin, and reaches about a quarter of the spread length below
+ * the lowest station (a common rule of thumb for the depth a refraction spread sees; common
+ * practice, no source). It holds two layers whose boundary follows the ground surface.
  */
 import type { ModelFile } from '../../schemas/model';
 import { MODEL_FORMAT } from '../../schemas/model';
@@ -35,7 +35,11 @@ const tidy = (v: number): number => +v.toFixed(6);
 
 export function defaultGridSpec(geom: LineGeometry): GridSpec {
   const surface = stationSurface(geom.stations);
-  const xs = [...surface.map((p) => p[0]), ...(geom.shotXs ?? []).filter(Number.isFinite)];
+  const spreadOf = surface.length >= 2 ? surface[surface.length - 1][0] - surface[0][0] : 0;
+  // Off-end shots up to one spread length beyond the stations are covered; farther ones would
+  // stretch the grid for little gain (the preview says when a shot lies outside).
+  const near = (x: number) => Number.isFinite(x) && (surface.length < 2 || (x >= surface[0][0] - spreadOf && x <= surface[surface.length - 1][0] + spreadOf));
+  const xs = [...surface.map((p) => p[0]), ...(geom.shotXs ?? []).filter(near)];
   const zs = surface.map((p) => p[1]);
   const xMin = xs.length ? Math.min(...xs) : 0;
   const xMax = xs.length ? Math.max(...xs) : 100;

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Grid } from '../../../shared/grid';
 import { parseModelFile } from '../../../shared/model';
 import {
-  addLayerBelow, deleteNode, defaultModel, fitPolylineToRange, insertNode, insertNodeInWidestGap, moveNode, removeLayer, type Point,
+  addLayerBelow, deleteNode, defaultGridSpec, defaultModel, fitPolylineToRange, insertNode, insertNodeInWidestGap, moveNode, removeLayer, type Point,
 } from '../../../shared/model/edit';
 
 const grid: Grid = { x0: 0, dx: 1, nx: 101, z0: 20, dz: 1, nz: 21 };
@@ -72,5 +72,19 @@ describe('layers', () => {
     expect(two[1].base).toBeUndefined();
     expect(parseModelFile({ ...model, layers: two }).ok).toBe(true);
     expect(removeLayer([model.layers![0]], 0)).toHaveLength(1);
+  });
+});
+
+describe('default grid', () => {
+  it('covers stations and near off-end shots with a margin, but not a shot ten spreads away', () => {
+    const stations = [{ x: 0, z: 100 }, { x: 100, z: 102 }];
+    const near = defaultGridSpec({ stations, shotXs: [-40, 150] });
+    expect(near.xStart).toBeLessThanOrEqual(-40 - 5);
+    expect(near.xEnd).toBeGreaterThanOrEqual(150 + 5);
+    const far = defaultGridSpec({ stations, shotXs: [1000] });
+    expect(far.xEnd).toBeLessThan(200);
+    // a quarter of the spread below the lowest station, from a top above the highest one
+    expect(far.top).toBeGreaterThan(102);
+    expect(far.top - far.depth).toBeLessThanOrEqual(100 - 25);
   });
 });

@@ -1,0 +1,68 @@
+/**
+ * The velocity colour scale: slow ground light and warm, fast rock dark and cool, so the eye
+ * reads "darker = stiffer" at once. Anchors are our own; colours between them are interpolated
+ * in sRGB, which is smooth enough at this number of anchors.
+ */
+const ANCHORS: [number, number, number][] = [
+  [253, 244, 200],
+  [246, 200, 110],
+  [229, 137, 64],
+  [196, 72, 62],
+  [140, 40, 88],
+  [84, 36, 110],
+  [36, 38, 92],
+];
+
+export const LUT_SIZE = 256;
+/** 256 colours, r g b per entry. */
+export const VELOCITY_LUT: Uint8Array = (() => {
+  const lut = new Uint8Array(LUT_SIZE * 3);
+  for (let i = 0; i < LUT_SIZE; i++) {
+    const t = (i / (LUT_SIZE - 1)) * (ANCHORS.length - 1);
+    const k = Math.min(ANCHORS.length - 2, Math.floor(t));
+    const f = t - k;
+    for (let c = 0; c < 3; c++) lut[3 * i + c] = Math.round(ANCHORS[k][c] + (ANCHORS[k + 1][c] - ANCHORS[k][c]) * f);
+  }
+  return lut;
+})();
+
+export const AIR_RGB: [number, number, number] = [236, 241, 244];
+/** A velocity that cannot be drawn (≤ 0 or not a number): a loud colour so it is found at once. */
+export const INVALID_RGB: [number, number, number] = [0, 200, 90];
+
+export interface VelocityRange {
+  lo: number;
+  hi: number;
+}
+
+/** The colour range for the ground velocities, rounded outwards to a step that suits the spread. */
+export function velocityRange(velocity: Float32Array, active: Uint8Array): VelocityRange {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < velocity.length; i++) {
+    if (!active[i]) continue;
+    const v = velocity[i];
+    if (!(v > 0) || !Number.isFinite(v)) continue;
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  if (!Number.isFinite(lo)) return { lo: 0, hi: 1000 };
+  const step = hi - lo > 2000 ? 500 : hi - lo > 500 ? 100 : 50;
+  const rlo = Math.floor(lo / step) * step;
+  let rhi = Math.ceil(hi / step) * step;
+  if (rhi <= rlo) rhi = rlo + step;
+  return { lo: rlo, hi: rhi };
+}
+
+export function lutIndex(v: number, r: VelocityRange): number {
+  const t = (v - r.lo) / (r.hi - r.lo);
+  return Math.max(0, Math.min(LUT_SIZE - 1, Math.round(t * (LUT_SIZE - 1))));
+}
+
+export const lutCss = (i: number): string => `rgb(${VELOCITY_LUT[3 * i]} ${VELOCITY_LUT[3 * i + 1]} ${VELOCITY_LUT[3 * i + 2]})`;
+
+/** A CSS gradient of the scale, bottom (slow) to top (fast), for the colour bar. */
+export function lutGradient(): string {
+  const stops = Array.from({ length: 9 }, (_, k) => `${lutCss(Math.round((k / 8) * (LUT_SIZE - 1)))} ${(k / 8) * 100}%`);
+  return `linear-gradient(to top, ${stops.join(', ')})`;
+}
