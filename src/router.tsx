@@ -37,6 +37,10 @@ export const router = createBrowserRouter([
           { path: 'runs/:runId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunPage')).RunPage }) },
           { path: 'runs/:runId/compare/:otherRunId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunComparePage')).RunComparePage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },
+          // Reports, the mail outbox and the audit trail (issue 7), each in its own small chunk.
+          { path: 'reports/:reportId', hydrateFallbackElement: <Loading what="report" />, lazy: async () => ({ Component: (await import('./routes/ReportPage')).ReportPage }) },
+          { path: 'projects/:projectId/audit', hydrateFallbackElement: <Loading what="audit trail" />, lazy: async () => ({ Component: (await import('./routes/AuditPage')).AuditPage }) },
+          { path: 'admin/outbox', hydrateFallbackElement: <Loading what="outbox" />, lazy: async () => ({ Component: (await import('./routes/OutboxPage')).OutboxPage }) },
           { path: '*', element: <NotFoundPage /> },
         ],
       },

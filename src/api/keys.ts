@@ -26,3 +26,15 @@ export const runKeys = {
   model: (modelId: string) => ['run-models', modelId] as const,
   modelGrid: (modelId: string) => ['run-models', modelId, 'grid'] as const,
 };
+
+/** Reports: a project's list sits under the project's key, so refreshing the project refreshes it too. */
+export const reportKeys = {
+  list: (projectId: string) => ['projects', projectId, 'reports'] as const,
+  report: (reportId: string) => ['reports', reportId] as const,
+};
+
+/** Administration and oversight: the mail outbox and each project's audit trail. */
+export const adminKeys = {
+  outbox: ['outbox'] as const,
+  audit: (projectId: string) => ['projects', projectId, 'audit'] as const,
+};

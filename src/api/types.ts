@@ -338,3 +338,75 @@ export interface RunStarted {
   id: string;
   status: RunStatus;
 }
+
+// Reports, mail outbox and audit trail (issue 7).
+export type ReportStatus = 'draft' | 'submitted' | 'returned' | 'approved' | 'shared';
+export type ReportRenderState = 'queued' | 'rendering' | 'ready' | 'failed';
+export type ReportStep = 'submit' | 'approve' | 'return' | 'share';
+
+/** One report as GET /api/projects/:projectId/reports lists it (newest first; a client gets shared ones only). */
+export interface ReportSummary {
+  id: string;
+  status: ReportStatus;
+  renderState: ReportRenderState;
+  createdAt: string;
+  runId: string;
+  line: string;
+  createdBy: string | null;
+}
+
+/** One entry of a report's history; `action` is create, submit, return, approve or share. */
+export interface ReportEvent {
+  at: string;
+  action: 'create' | ReportStep;
+  actor: string | null;
+  comment: string;
+}
+
+/** GET /api/reports/:reportId */
+export interface ReportDetail {
+  id: string;
+  runId: string;
+  projectId: string;
+  status: ReportStatus;
+  render: { state: ReportRenderState; error?: string; renderedAt: string | null };
+  pdfReady: boolean;
+  options: { shotId: string; isoVelocity: number; acquisitionNotes: string };
+  createdAt: string;
+  history: ReportEvent[];
+}
+
+/** A workflow step's answer: the report as it now stands, and who was e-mailed. */
+export interface ReportStepResult extends ReportDetail {
+  mailed: string[];
+  mailError?: string;
+}
+
+/** POST /api/runs/:runId/reports (isoVelocity in m/s). */
+export interface StartReportBody {
+  shotId?: string;
+  isoVelocity?: number;
+  acquisitionNotes?: string;
+}
+
+/** GET /api/outbox (admin): mail the local sink received, newest first. */
+export interface OutboxMessage {
+  id: number;
+  receivedAt: string;
+  from: string;
+  to: string[];
+  subject: string;
+  body: string;
+}
+
+/** GET /api/projects/:projectId/audit (lead, admin), newest first. */
+export interface AuditEntry {
+  id: number;
+  at: string;
+  action: string;
+  objectType: string;
+  objectId: string | null;
+  detail: Record<string, unknown> | null;
+  actor: string | null;
+  actorEmail: string | null;
+}

@@ -17,7 +17,7 @@ function TopBar({ me }: { me: Me }) {
   const navigate = useNavigate();
   const { pathname } = useLocation();
   // Project and line pages live under "Projects" even though their addresses do not start with "/".
-  const inProjects = pathname === '/' || pathname.startsWith('/projects/') || pathname.startsWith('/lines/');
+  const inProjects = pathname === '/' || pathname.startsWith('/projects/') || pathname.startsWith('/lines/') || pathname.startsWith('/reports/');
   const signOut = useSignOut(() => navigate('/signin', { replace: true }));
   return (
     <header className="border-b border-stone-200 bg-white">
@@ -32,6 +32,11 @@ function TopBar({ me }: { me: Me }) {
           {isAdmin(me) && (
             <NavLink to="/admin/accounts" className={navClass}>
               Accounts
+            </NavLink>
+          )}
+          {isAdmin(me) && (
+            <NavLink to="/admin/outbox" className={navClass}>
+              Mail outbox
             </NavLink>
           )}
         </nav>

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { useNavigate, useParams } from 'react-router';
+import { Link, useNavigate, useParams } from 'react-router';
 import { useProject } from '../api/projects';
 import type { Me, ProjectDetail } from '../api/types';
 import { Disclosure } from '../components/Disclosure';
@@ -11,11 +11,12 @@ import { Loading, LoadError } from '../components/LoadState';
 import { MembersTable } from '../components/MembersTable';
 import { PageHeader } from '../components/PageHeader';
 import { Panel } from '../components/Panel';
+import { ReportsSection } from '../components/reports/ReportsSection';
 import { Section } from '../components/Section';
 import { StatusBadge } from '../components/StatusBadge';
 import { useSignedInUser } from '../components/meContext';
 import { formatDate, ROLE_LABELS } from '../lib/format';
-import { canCreateLine, canManageMembers, canSeeLines } from '../lib/permissions';
+import { canCreateLine, canManageMembers, canSeeLines, isAdmin } from '../lib/permissions';
 
 function Fact({ term, children }: { term: string; children: ReactNode }) {
   return (
@@ -102,8 +103,24 @@ export function ProjectPage() {
           <Fact term="My role">{p.myRole ? ROLE_LABELS[p.myRole] : 'Administrator (not a member)'}</Fact>
           <Fact term="Created">{formatDate(p.createdAt)}</Fact>
         </dl>
+        {(isAdmin(me) || p.myRole === 'lead') && (
+          <p className="mt-3">
+            <Link to={`/projects/${p.id}/audit`} className="font-semibold" data-testid="audit-link">
+              Audit trail
+            </Link>{' '}
+            <span className="text-stone-600">– every change on this project, who made it and when</span>
+          </p>
+        )}
       </PageHeader>
-      <LinesSection me={me} project={p} />
+      {/* A client sees shared reports first; survey data is not theirs to see. */}
+      {p.myRole === 'client' ? (
+        <ReportsSection project={p} />
+      ) : (
+        <>
+          <LinesSection me={me} project={p} />
+          <ReportsSection project={p} />
+        </>
+      )}
       <MembersSection me={me} project={p} />
     </>
   );
