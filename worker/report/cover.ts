@@ -1,0 +1,52 @@
+/** Page 1: who, where, what and in which state, with a pointer to the cautions. */
+import type { ReportContext } from './context';
+import { labelValues } from './flow';
+import { FONT } from './fonts';
+import { isoDate } from './format';
+import { sectionNumber, sectionTitle } from './outline';
+import { COLOUR, CONTENT, PAGE, SIZE } from './style';
+
+export const COVER_TITLE = 'Seismic refraction summary';
+
+export function drawCover(ctx: ReportContext): void {
+  const { doc, input } = ctx;
+  doc.font(FONT.semibold).fontSize(SIZE.subheading).fillColor(COLOUR.accent).text(input.consultancy, CONTENT.left, CONTENT.top, { width: CONTENT.width });
+  doc.save().lineWidth(1.2).strokeColor(COLOUR.accent).moveTo(CONTENT.left, doc.y + 6).lineTo(CONTENT.left + 60, doc.y + 6).stroke().restore();
+
+  ctx.y = 190;
+  doc.font(FONT.semibold).fontSize(SIZE.title).fillColor(COLOUR.ink).text(COVER_TITLE, CONTENT.left, ctx.y, { width: CONTENT.width });
+  doc.font(FONT.regular).fontSize(SIZE.subtitle).fillColor(COLOUR.muted)
+    .text(`Forward travel-time model of line ${input.line.name}`, CONTENT.left, doc.y + 4, { width: CONTENT.width });
+  doc.font(FONT.semibold).fontSize(SIZE.subtitle + 2).fillColor(COLOUR.ink).text(input.project.name, CONTENT.left, doc.y + 26, { width: CONTENT.width });
+  ctx.y = doc.y + 22;
+
+  labelValues(ctx, [
+    ['Project', input.project.name],
+    ['Site', input.project.site],
+    ['Client', input.project.clientOrganisation],
+    ['Survey line', input.line.name],
+    ['Date', isoDate(input.date)],
+    ['Prepared by', input.preparedBy],
+    ['Reviewed by', input.reviewedBy ?? 'not yet reviewed'],
+    ['Report status', input.status],
+    ['Report reference', input.reportId],
+  ], { labelWidth: 120, size: SIZE.body + 1 });
+
+  // A plain box on the status: until a lead approves it the report is a working document.
+  const cautions = `${sectionNumber('cautions')}, ${sectionTitle('cautions', input)}`;
+  const approved = input.status === 'approved' || input.status === 'shared';
+  const note = approved
+    ? `Approved for issue by ${input.reviewedBy ?? 'the project lead'}. Read the results together with section ${cautions}.`
+    : `This report is ${input.status} and has not been approved for issue. Do not base design or excavation decisions on it. Read the results together with section ${cautions}.`;
+  const boxTop = ctx.y + 18;
+  doc.font(FONT.regular).fontSize(SIZE.body);
+  const h = doc.heightOfString(note, { width: CONTENT.width - 24 }) + 18;
+  doc.save().lineWidth(0.8).strokeColor(approved ? COLOUR.accent : COLOUR.shot).rect(CONTENT.left, boxTop, CONTENT.width, h).stroke().restore();
+  doc.fillColor(COLOUR.ink).text(note, CONTENT.left + 12, boxTop + 9, { width: CONTENT.width - 24 });
+  ctx.y = boxTop + h + 10;
+
+  doc.font(FONT.regular).fontSize(SIZE.small).fillColor(COLOUR.muted).text(
+    `Produced with Timefield from run ${input.run.id} (${isoDate(input.run.createdAt)}), model "${input.model.name}" version ${input.model.version}, pick set ${input.run.pickSetFile} revision ${input.run.pickSetRevision}.`,
+    CONTENT.left, PAGE.height - 120, { width: CONTENT.width },
+  );
+}

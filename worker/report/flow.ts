@@ -1,0 +1,95 @@
+/** Flowing text blocks: section headings, paragraphs, bullet lists, captions and label–value lists. */
+import type { ReportContext } from './context';
+import { FONT } from './fonts';
+import { sectionHeadingText, type SectionKey } from './outline';
+import { COLOUR, CONTENT, GAP, SIZE } from './style';
+
+/** "2  Velocity section" at the top of a new page (or below the cursor when `newPage` is false). */
+export function sectionHeading(ctx: ReportContext, key: SectionKey, o: { newPage?: boolean } = {}): void {
+  if (o.newPage ?? true) ctx.newPage();
+  else {
+    ctx.y += GAP.block;
+    ctx.ensureSpace(120);
+  }
+  const { doc } = ctx;
+  doc.font(FONT.semibold).fontSize(SIZE.heading).fillColor(COLOUR.accent);
+  doc.text(sectionHeadingText(key, ctx.input), CONTENT.left, ctx.y, { width: CONTENT.width });
+  ctx.y = doc.y + 3;
+  doc.save().lineWidth(0.6).strokeColor(COLOUR.rule).moveTo(CONTENT.left, ctx.y).lineTo(CONTENT.right, ctx.y).stroke().restore();
+  ctx.y += GAP.afterHeading + 2;
+}
+
+export function subheading(ctx: ReportContext, title: string): void {
+  ctx.ensureSpace(60);
+  const { doc } = ctx;
+  doc.font(FONT.semibold).fontSize(SIZE.subheading).fillColor(COLOUR.ink);
+  doc.text(title, CONTENT.left, ctx.y, { width: CONTENT.width });
+  ctx.y = doc.y + 3;
+}
+
+export function paragraph(ctx: ReportContext, text: string, o: { size?: number; colour?: string; italic?: boolean; gap?: number } = {}): void {
+  const { doc } = ctx;
+  const size = o.size ?? SIZE.body;
+  doc.font(o.italic ? FONT.italic : FONT.regular).fontSize(size).fillColor(o.colour ?? COLOUR.ink);
+  ctx.ensureSpace(Math.min(doc.heightOfString(text, { width: CONTENT.width, lineGap: 1.5 }), 3 * size * 1.4));
+  doc.text(text, CONTENT.left, ctx.y, { width: CONTENT.width, lineGap: 1.5 });
+  ctx.y = doc.y + (o.gap ?? GAP.paragraph);
+}
+
+/** Bullet points with a hanging indent; each item may start with a short semibold lead-in. */
+export function bullets(ctx: ReportContext, items: { lead?: string; text: string }[]): void {
+  const { doc } = ctx;
+  const indent = 12;
+  for (const item of items) {
+    const width = CONTENT.width - indent;
+    doc.font(FONT.regular).fontSize(SIZE.body);
+    const h = doc.heightOfString(`${item.lead ?? ''} ${item.text}`, { width, lineGap: 1.5 });
+    ctx.ensureSpace(h + 2);
+    doc.fillColor(COLOUR.accent).circle(CONTENT.left + 3.5, ctx.y + SIZE.body * 0.62, 1.4).fill();
+    doc.fillColor(COLOUR.ink);
+    if (item.lead) {
+      doc.font(FONT.semibold).text(`${item.lead} `, CONTENT.left + indent, ctx.y, { width, lineGap: 1.5, continued: true });
+      doc.font(FONT.regular).text(item.text, { lineGap: 1.5 });
+    } else {
+      doc.text(item.text, CONTENT.left + indent, ctx.y, { width, lineGap: 1.5 });
+    }
+    ctx.y = doc.y + 4;
+  }
+  ctx.y += GAP.paragraph - 4;
+}
+
+/** "Figure 2. …" or "Table 1. …" below (or above) a figure or table; returns its number. */
+export function caption(ctx: ReportContext, kind: 'Figure' | 'Table', text: string, n = kind === 'Figure' ? ctx.nextFigure() : ctx.nextTable()): number {
+  const { doc } = ctx;
+  doc.font(FONT.regular).fontSize(SIZE.caption);
+  const h = doc.heightOfString(`${kind} ${n}. ${text}`, { width: CONTENT.width, lineGap: 1 });
+  ctx.ensureSpace(h);
+  doc.font(FONT.semibold).fillColor(COLOUR.ink).text(`${kind} ${n}. `, CONTENT.left, ctx.y, { width: CONTENT.width, lineGap: 1, continued: true });
+  doc.font(FONT.regular).fillColor(COLOUR.muted).text(text, { lineGap: 1 });
+  ctx.y = doc.y + GAP.block;
+  return n;
+}
+
+/** Height a caption will take, to keep a figure and its caption on one page. */
+export function captionHeight(ctx: ReportContext, text: string): number {
+  ctx.doc.font(FONT.regular).fontSize(SIZE.caption);
+  return ctx.doc.heightOfString(`Figure 00. ${text}`, { width: CONTENT.width, lineGap: 1 }) + GAP.block;
+}
+
+/** Two columns: labels in muted type, values in ink. */
+export function labelValues(ctx: ReportContext, rows: [string, string][], o: { labelWidth?: number; size?: number; left?: number; width?: number } = {}): void {
+  const { doc } = ctx;
+  const size = o.size ?? SIZE.body;
+  const left = o.left ?? CONTENT.left;
+  const width = o.width ?? CONTENT.width;
+  const lw = o.labelWidth ?? 130;
+  for (const [k, v] of rows) {
+    doc.font(FONT.regular).fontSize(size);
+    const h = Math.max(doc.heightOfString(v, { width: width - lw }), size * 1.3);
+    ctx.ensureSpace(h);
+    const y = ctx.y;
+    doc.fillColor(COLOUR.muted).text(k, left, y, { width: lw - 8 });
+    doc.fillColor(COLOUR.ink).text(v, left + lw, y, { width: width - lw });
+    ctx.y = Math.max(doc.y, y + size * 1.3) + 2.5;
+  }
+}

@@ -1,0 +1,39 @@
+/**
+ * Single-line labels placed exactly, for figures and the page frame. They never wrap and never
+ * trigger pdfkit's automatic page break (no width is passed), so a label near the page foot stays
+ * on its page.
+ */
+import { FONT, type FontName } from './fonts';
+import { COLOUR } from './style';
+
+export interface LabelOptions {
+  size: number;
+  font?: FontName;
+  colour?: string;
+  /** Horizontal anchor at x. */
+  align?: 'left' | 'center' | 'right';
+  /** Vertical anchor at y: top of the capitals, their middle, or the baseline. */
+  valign?: 'top' | 'middle' | 'baseline';
+  /** Degrees, counter-clockwise, about (x, y). */
+  rotate?: number;
+}
+
+/** Cap height of Source Sans 3 as a share of the font size (660/1000 units). */
+const CAP = 0.66;
+
+export function label(doc: PDFKit.PDFDocument, text: string, x: number, y: number, o: LabelOptions): { width: number; height: number } {
+  doc.font(o.font ?? FONT.regular).fontSize(o.size);
+  const width = doc.widthOfString(text);
+  const dx = o.align === 'center' ? -width / 2 : o.align === 'right' ? -width : 0;
+  const valign = o.valign ?? 'baseline';
+  const dy = valign === 'top' ? CAP * o.size : valign === 'middle' ? (CAP * o.size) / 2 : 0;
+  doc.save();
+  if (o.rotate) doc.rotate(-o.rotate, { origin: [x, y] });
+  doc.fillColor(o.colour ?? COLOUR.ink).text(text, x + dx, y + dy, { lineBreak: false, baseline: 'alphabetic' });
+  doc.restore();
+  return { width, height: CAP * o.size };
+}
+
+export function textWidth(doc: PDFKit.PDFDocument, text: string, size: number, font: FontName = FONT.regular): number {
+  return doc.font(font).fontSize(size).widthOfString(text);
+}
