@@ -16,7 +16,7 @@ import { IndexedMinHeap } from './heap';
 import { startTimes } from './source';
 import { AIR, FAR, march, TRIAL } from './march';
 import type { Point, SolveOptions, VelocityField } from './types';
-import { validateSolveInput } from './validate';
+import { validateGrid, validateSolveInput } from './validate';
 
 /** Knobs beyond the public options, for the benchmark's measurements. Defaults are the chosen ones. */
 export interface MarchOptions extends SolveOptions {
@@ -24,13 +24,7 @@ export interface MarchOptions extends SolveOptions {
   factored?: boolean;
   rule?: InterfaceRule;
   contrastRatio?: number;
-  /** Radius (m) around the source inside which one-axis updates keep the factored source term. */
-  tauRadius?: number;
 }
-
-/** Default of MarchOptions.tauRadius: a few metres, fixed in metres so it does not shrink with the grid. */
-export const TAU_RADIUS_M = 1000;
-
 
 /**
  * Reusable solver for one grid: keeps its buffers between shots so a line of many shots
@@ -48,6 +42,7 @@ export class TravelTimeSolver {
   private cells: CellSlowness | undefined;
 
   constructor(grid: Grid) {
+    validateGrid(grid); // before allocating: an oversized grid is an input error, not a crash
     this.grid = { ...grid };
     const n = grid.nx * grid.nz;
     this.slow = new Float64Array(n);

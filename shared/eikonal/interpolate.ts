@@ -26,6 +26,9 @@ function keys(t: number): number {
 
 export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, p: Point): number {
   const { x0, dx, nx, z0, dz, nz } = grid;
+  if (times.length !== nx * nz || active.length !== nx * nz) {
+    throw new EikonalInputError(`travel times (${times.length}) and ground mask (${active.length}) must both have nx × nz = ${nx * nz} values`);
+  }
   const fx = (p.x - x0) / dx;
   const fz = (z0 - p.z) / dz;
   if (!(fx >= -EDGE_TOLERANCE && fx <= nx - 1 + EDGE_TOLERANCE && fz >= -EDGE_TOLERANCE && fz <= nz - 1 + EDGE_TOLERANCE)) {

@@ -14,6 +14,7 @@ import type { Grid } from '../grid';
 import { cellSlowness, type CellSlowness } from './cells';
 import { EikonalInputError } from './errors';
 import { nodeGradient } from './gradient';
+import { validateGrid } from './validate';
 import type { Point, VelocityField } from './types';
 
 export interface Ray {
@@ -58,7 +59,11 @@ export class RayTracer {
     velocity: VelocityField,
     readonly active: Uint8Array,
   ) {
+    validateGrid(grid);
     const n = grid.nx * grid.nz;
+    if (velocity.length !== n || active.length !== n) {
+      throw new EikonalInputError(`velocity (${velocity.length}) and ground mask (${active.length}) must both have nx × nz = ${n} values`);
+    }
     const s = new Float64Array(n);
     for (let i = 0; i < n; i++) s[i] = active[i] ? 1 / velocity[i] : Infinity;
     this.cells = cellSlowness(grid, s, active);
@@ -76,7 +81,7 @@ export class RayTracer {
   trace(times: Float64Array, receiver: Point, source: Point): Ray {
     const g = this.grid;
     const { x0, dx, nx, z0, dz, nz } = g;
-    const ncx = nx - 1;
+    if (times.length !== nx * nz) throw new EikonalInputError(`travel-time field has ${times.length} values; the grid needs ${nx * nz}`);
     const toFx = (x: number): number => (x - x0) / dx;
     const toFz = (z: number): number => (z0 - z) / dz;
     const inside = (fx: number, fz: number): boolean => fx >= -EPS && fx <= nx - 1 + EPS && fz >= -EPS && fz <= nz - 1 + EPS;

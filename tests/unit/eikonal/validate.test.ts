@@ -78,3 +78,15 @@ describe('validateSolveInput', () => {
     expectInputError(() => traceRay(grid, T, uniform(), ground(), { x: 9, z: 0 }, { x: 1, z: -1 }), /outside the model grid/);
   });
 });
+
+describe('other entry points', () => {
+  it('a solver for an oversized grid is refused before any allocation', async () => {
+    const { TravelTimeSolver } = await import('../../../shared/eikonal');
+    expectInputError(() => new TravelTimeSolver({ x0: 0, dx: 1, nx: 100_000, z0: 0, dz: 1, nz: 100_000 }), /limit is 2,000,000/);
+  });
+  it('sampleTime and traceRay refuse arrays of the wrong length', () => {
+    const T = solveTravelTimes(grid, uniform(), ground(), { x: 1, z: -1 });
+    expectInputError(() => sampleTime(grid, T.subarray(1), ground(), { x: 1, z: 0 }), /travel times \(23\)/);
+    expectInputError(() => traceRay(grid, T, uniform().subarray(2), ground(), { x: 4, z: 0 }, { x: 1, z: -1 }), /velocity \(22\)/);
+  });
+});
