@@ -1,4 +1,5 @@
 import { useParams } from 'react-router';
+import { useProject } from '../api/projects';
 import { useRunLine } from '../api/runs';
 import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
@@ -11,6 +12,7 @@ import { LineRunsPanel } from '../components/run/line/LineRunsPanel';
 export function LineRunsPage() {
   const { lineId = '' } = useParams();
   const line = useRunLine(lineId);
+  const project = useProject(line.data?.projectId ?? '', { enabled: Boolean(line.data?.projectId) });
   if (line.isPending) return <Loading what="survey line" />;
   if (line.isError) return <LoadError error={line.error} what="survey line" onRetry={() => void line.refetch()} />;
   return (
@@ -20,7 +22,7 @@ export function LineRunsPage() {
         title={`Forward runs of ${line.data.name}`}
         crumbs={[
           { label: 'Projects', to: '/' },
-          { label: 'Project', to: `/projects/${line.data.projectId}` },
+          { label: project.data?.name ?? 'Project', to: `/projects/${line.data.projectId}` },
           { label: line.data.name, to: `/lines/${line.data.id}` },
         ]}
       />

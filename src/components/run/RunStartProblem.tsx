@@ -20,10 +20,10 @@ function heading(err: unknown): string {
   return 'The run could not be started.';
 }
 
-/** Why a run was refused, in plain words, with the server's listed issues (at most 20 shown). */
+/** Why a run was refused, in plain words, with the first few of the server's listed issues (they repeat). */
 export function RunStartProblem({ error }: { error: unknown }) {
   const issues = error instanceof ApiError ? error.issues : [];
-  const shown = issues.slice(0, 20);
+  const shown = issues.slice(0, 8);
   return (
     <div role="alert" data-testid="run-start-problem" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
       <p className="font-semibold">{heading(error)}</p>
