@@ -1,4 +1,5 @@
 import type { Job } from 'bullmq';
+import { reportJob } from './report';
 import { solveJob } from './solve';
 
 /** One processor per job kind (job name → function). */
@@ -6,6 +7,7 @@ export type Processor = (job: Job) => Promise<unknown>;
 
 export const processors: Record<string, Processor> = {
   solve: solveJob,
+  report: reportJob,
 };
 
 export async function dispatch(job: Job): Promise<unknown> {
