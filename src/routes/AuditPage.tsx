@@ -63,7 +63,7 @@ function AuditContent({ projectId, linkable }: { projectId: string; linkable: bo
               </datalist>
             </div>
             <p role="status" className="pb-7 text-stone-600">
-              {needle ? `${plural(shown.length, 'entry', 'entries')} of ${all.length} match.` : `${plural(all.length, 'entry', 'entries')}.`}
+              {needle ? `Showing ${shown.length} of ${plural(all.length, 'entry', 'entries')}.` : `${plural(all.length, 'entry', 'entries')}.`}
             </p>
           </div>
           {shown.length > 0 ? (

@@ -48,7 +48,7 @@ function OutboxContent() {
             </div>
             <div className="flex gap-3 pb-7">
               <p role="status" className="text-stone-600">
-                {needle ? `${plural(shown.length, 'message')} match.` : ''}
+                {needle ? `Showing ${shown.length} of ${plural(outbox.data.length, 'message')}.` : ''}
               </p>
               <button type="button" onClick={() => void outbox.refetch()} className="font-semibold text-accent-700 underline underline-offset-3">
                 {outbox.isFetching ? 'Checking…' : 'Check for new mail'}

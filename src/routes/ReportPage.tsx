@@ -8,13 +8,13 @@ import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
 import { Section } from '../components/Section';
 import { useSignedInUser } from '../components/meContext';
-import { isAdmin } from '../lib/permissions';
 import { HistoryTimeline } from '../components/reports/HistoryTimeline';
 import { PdfPanel } from '../components/reports/PdfPanel';
 import { ReportCaution } from '../components/reports/ReportCaution';
 import { ReportStatusBadge } from '../components/reports/ReportStatusBadge';
 import { WorkflowPanel } from '../components/reports/WorkflowPanel';
 import { dateTime, NEXT_FOR_CLIENT } from '../components/reports/wording';
+import { isAdmin } from '../lib/permissions';
 
 function Fact({ term, children }: { term: string; children: ReactNode }) {
   return (
@@ -100,7 +100,7 @@ function TeamView({ report, role }: { report: ReportDetail; role: ProjectRole | 
       <div className="mb-8">
         <ReportCaution />
       </div>
-      <div className="mb-10 grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+      <div className="mb-10 grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
         <PdfPanel report={report} />
         <WorkflowPanel report={report} role={role} />
       </div>
@@ -124,7 +124,7 @@ function ClientView({ report }: { report: ReportDetail }) {
       <div className="mb-8">
         <ReportCaution />
       </div>
-      <div className="mb-10 grid gap-6 lg:grid-cols-2">
+      <div className="mb-10 grid items-start gap-6 lg:grid-cols-2">
         <PdfPanel report={report} forClient />
         <div className="rounded-lg border border-stone-200 bg-white p-5 shadow-xs">
           <h2 className="text-lg font-semibold text-stone-900">About this report</h2>

@@ -57,7 +57,7 @@ export function OutboxTable({ messages }: { messages: OutboxMessage[] }) {
                     <span aria-hidden="true" className={`mt-0.5 inline-block w-3 transition-transform ${expanded ? 'rotate-90' : ''}`}>
                       ▸
                     </span>
-                    <span>{m.subject || '(no subject)'}</span>
+                    <span data-testid="outbox-subject">{m.subject || '(no subject)'}</span>
                   </button>
                 </td>
               </tr>

@@ -45,7 +45,7 @@ export function ClientReportsTable({ reports }: { reports: ReportSummary[] }) {
     <DataTable caption="Reports shared with you, newest first" testId="reports-table" minWidth="32rem">
       <thead>
         <tr>
-          <Th>Line</Th>
+          <Th>Report</Th>
           <Th>Prepared by</Th>
           <Th>Created</Th>
           <Th>
@@ -58,7 +58,7 @@ export function ClientReportsTable({ reports }: { reports: ReportSummary[] }) {
           <Tr key={r.id} testId="report-row">
             <Td>
               <Link to={`/reports/${r.id}`} className="font-semibold" aria-label={`Report on line ${r.line}, created ${dateTime(r.createdAt)}`}>
-                {r.line}
+                Line {r.line}
               </Link>
             </Td>
             <Td>{r.createdBy ?? '–'}</Td>

@@ -27,10 +27,11 @@ export function StepForm({ step, busy, error, warning, onConfirm, onCancel }: St
   const problems = formProblems(error, ['comment']);
   const commentError = missing ? 'Say what needs changing, so the author knows what to do.' : problems.fields.comment;
 
-  function submit(e: FormEvent) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     if (step === 'return' && !comment.trim()) {
       setMissing(true);
+      e.currentTarget.querySelector('textarea')?.focus();
       return;
     }
     onConfirm(comment.trim());

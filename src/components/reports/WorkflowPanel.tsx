@@ -103,6 +103,7 @@ export function WorkflowPanel({ report, role }: { report: ReportDetail; role: Pr
               key={s}
               variant={s === 'return' ? 'secondary' : 'primary'}
               aria-expanded={open === s}
+              className={open === s ? 'ring-2 ring-accent-600/50 ring-offset-1' : ''}
               onClick={() => (open === s ? cancel() : openStep(s))}
               data-testid={`step-${s}`}
             >
