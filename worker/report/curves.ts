@@ -22,7 +22,8 @@ export function drawCurves(ctx: ReportContext): void {
   const text =
     'Travel-time curves: observed picks (filled points; hollow grey points are picks excluded from the misfit) and computed times (lines, joined through 0 ms at the shot), coloured by shot; shots marked by stars on the time axis. ' +
     'Lower panel: residual observed − computed (ms) with the band ±σ of the pick uncertainty (grey). Distance x along the line in metres.';
-  const legendH = 16;
+  const legendRows = Math.ceil((input.shots.length + 1) / 7);
+  const legendH = 4 + 12 * legendRows;
   const mainH = 280;
   const resH = 110;
   const total = legendH + mainH + 14 + resH + 44;
@@ -100,17 +101,29 @@ function groupByShot(input: ReportInput): { shotId: string; sourceX: number | nu
   return [...order.values()];
 }
 
-function drawLegend(ctx: ReportContext, shotIds: string[], left: number, y: number): void {
+/** One row of swatches (wrapping if the shots do not fit); returns its height. */
+function drawLegend(ctx: ReportContext, shotIds: string[], left: number, top: number): number {
   const { doc } = ctx;
   let x = left;
+  let y = top;
   shotIds.forEach((id, i) => {
     const colour = shotColour(i);
+    const itemWidth = 18 + textWidth(doc, `shot ${id}`, SIZE.small) + 12;
+    if (x > left && x + itemWidth > CONTENT.right) {
+      x = left;
+      y += 12;
+    }
     doc.save().lineWidth(0.9).strokeColor(colour).moveTo(x, y).lineTo(x + 14, y).stroke().restore();
     dot(doc, x + 7, y, 1.7, colour);
     const text = `shot ${id}`;
     label(doc, text, x + 18, y, { size: SIZE.small, valign: 'middle' });
     x += 18 + textWidth(doc, text, SIZE.small) + 12;
   });
+  if (x + 80 > CONTENT.right) {
+    x = left;
+    y += 12;
+  }
   dot(doc, x + 7, y, 1.9, COLOUR.excluded, true);
   label(doc, 'excluded pick', x + 13, y, { size: SIZE.small, valign: 'middle', colour: COLOUR.muted });
+  return y - top + 12;
 }

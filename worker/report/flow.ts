@@ -36,6 +36,13 @@ export function paragraph(ctx: ReportContext, text: string, o: { size?: number; 
   ctx.y = doc.y + (o.gap ?? GAP.paragraph);
 }
 
+/** Height the bullet list will take (lead-ins measured in the regular weight, a little narrower than drawn). */
+export function bulletsHeight(ctx: ReportContext, items: { lead?: string; text: string }[]): number {
+  const { doc } = ctx;
+  doc.font(FONT.regular).fontSize(SIZE.body);
+  return items.reduce((h, item) => h + doc.heightOfString(`${item.lead ?? ''} ${item.text}`, { width: CONTENT.width - 12, lineGap: 1.5 }) + 4, 0) + GAP.paragraph;
+}
+
 /** Bullet points with a hanging indent; each item may start with a short semibold lead-in. */
 export function bullets(ctx: ReportContext, items: { lead?: string; text: string }[]): void {
   const { doc } = ctx;

@@ -31,7 +31,7 @@ export function drawMethod(ctx: ReportContext): void {
   sectionHeading(ctx, 'method');
   paragraph(
     ctx,
-    `Travel times were computed with ${SOFTWARE} by a fast marching eikonal solver: the first-arrival time T satisfies |∇T| = 1/v on the grid of the velocity model, and grid nodes are accepted in order of increasing time, each one updating its neighbours from the upwind side. ` +
+    `Travel times were computed with ${SOFTWARE} by a fast marching eikonal solver: the first-arrival time T satisfies the eikonal equation |grad T| = 1/v on the grid of the velocity model, and grid nodes are accepted in order of increasing time, each one updating its neighbours from the upwind side. ` +
       'This is a forward model: the velocities are those of the model below, set by the geophysicist; they were not adjusted to fit the picks (no inversion).',
   );
   labelValues(ctx, [

@@ -77,8 +77,8 @@ function drawHeatmap(ctx: ReportContext): void {
   const w = xs.length * k;
   const h = shots.length * k;
   const rgb = new Uint8Array(w * h * 3);
-  const missing = [241, 243, 244];
-  const excluded = [170, 178, 184];
+  const missing: Rgb = [241, 243, 244];
+  const excluded: Rgb = [170, 178, 184];
   shots.forEach((id, row) => {
     xs.forEach((x, col) => {
       const c = cell.get(`${id}\u0000${x}`);
@@ -103,16 +103,15 @@ function drawHeatmap(ctx: ReportContext): void {
     if (row % rowLabelStep === 0) label(doc, id, left - 5, top + (row + 0.5) * rowH, { size: SIZE.tick, align: 'right', valign: 'middle' });
   });
   label(doc, 'Shot', left - 5 - Math.max(...shots.map((id) => textWidth(doc, id, SIZE.tick))) - 8, top + height / 2, { size: SIZE.small, align: 'center', valign: 'baseline', rotate: 90, colour: COLOUR.muted });
-  let lastRight = -Infinity;
+  // Every k-th column, k the smallest stride at which the widest label clears its neighbours.
+  const widest = Math.max(...xs.map((x) => textWidth(doc, plain(x, 2), SIZE.tick)));
+  const stride = Math.max(1, Math.ceil((widest + 8) / colW));
   doc.save().lineWidth(0.5).strokeColor(COLOUR.ink);
   xs.forEach((x, col) => {
+    if (col % stride !== 0) return;
     const cx = left + (col + 0.5) * colW;
-    const t = plain(x, 2);
-    const tw = textWidth(doc, t, SIZE.tick);
-    if (cx - tw / 2 < lastRight + 8) return;
     doc.moveTo(cx, top + height).lineTo(cx, top + height + 3).stroke();
-    label(doc, t, cx, top + height + 5, { size: SIZE.tick, align: 'center', valign: 'top' });
-    lastRight = cx + tw / 2;
+    label(doc, plain(x, 2), cx, top + height + 5, { size: SIZE.tick, align: 'center', valign: 'top' });
   });
   doc.restore();
   label(doc, 'Receiver position x (m)', left + width / 2, top + height + 18, { size: SIZE.small, align: 'center', valign: 'top', colour: COLOUR.muted });
@@ -122,8 +121,8 @@ function drawHeatmap(ctx: ReportContext): void {
   const barW = 200;
   const barLeft = left + (width - barW) / 2 - 60;
   horizontalColourBar(doc, { stops: RESIDUAL_STOPS, min: -limit, max: limit, title: 'Residual (ms)', ticks: [-limit, -limit / 2, 0, limit / 2, limit] }, barLeft, barTop, barW, 8);
-  const swatch = (x: number, c: number[], t: string) => {
-    doc.save().fillColor(hex(c as unknown as Rgb)).lineWidth(0.5).strokeColor(COLOUR.ink).rect(x, barTop, 12, 8).fillAndStroke().restore();
+  const swatch = (x: number, c: Rgb, t: string) => {
+    doc.save().fillColor(hex(c)).lineWidth(0.5).strokeColor(COLOUR.ink).rect(x, barTop, 12, 8).fillAndStroke().restore();
     label(doc, t, x + 16, barTop + 4, { size: SIZE.small, valign: 'middle', colour: COLOUR.muted });
   };
   swatch(barLeft + barW + 30, excluded, 'excluded');

@@ -16,10 +16,10 @@ export function drawSection(ctx: ReportContext): void {
 
   const axisRoom = 44;
   const barRoom = 58;
-  const layout = sectionLayout(ctx, CONTENT.left + axisRoom, ctx.y + 14, CONTENT.width - axisRoom - barRoom, 230, 380);
+  const layout = sectionLayout(ctx, CONTENT.left + axisRoom, ctx.y + 14, CONTENT.width - axisRoom - barRoom, 240, 380);
   // Caption text depends on the drawing; measure with a representative one to keep them together.
   ctx.ensureSpace(layout.box.height + 60 + captionHeight(ctx, 'x'.repeat(420)));
-  const placed = sectionLayout(ctx, CONTENT.left + axisRoom, ctx.y + 14, CONTENT.width - axisRoom - barRoom, 230, 380);
+  const placed = sectionLayout(ctx, CONTENT.left + axisRoom, ctx.y + 14, CONTENT.width - axisRoom - barRoom, 240, 380);
   const info = drawVelocityFigure(ctx, placed);
   ctx.y = placed.box.top + placed.box.height + 40;
   const ve = info.exaggeration === 1 ? 'True scale (no vertical exaggeration).' : `Vertical exaggeration ${plain(info.exaggeration)}:1.`;

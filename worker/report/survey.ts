@@ -20,7 +20,8 @@ export function drawSurvey(ctx: ReportContext): void {
       `, ${input.shots.length} shots, ${count(input.residuals.length)} first-arrival picks.`
     : `Line ${input.line.name}: no stations recorded, ${input.shots.length} shots.`;
   paragraph(ctx, summary);
-  if (input.line.notes.trim()) paragraph(ctx, input.line.notes.trim(), { colour: '#38454d' });
+  const lineNotes = input.line.notes.trim();
+  if (lineNotes && lineNotes !== input.acquisitionNotes.trim()) paragraph(ctx, lineNotes, { colour: COLOUR.muted });
 
   subheading(ctx, 'Acquisition notes');
   paragraph(ctx, input.acquisitionNotes.trim() || 'No acquisition notes were recorded for this report.');
@@ -84,5 +85,5 @@ function drawLayout(ctx: ReportContext, box: { left: number; top: number; width:
   }
   plot.frame();
   plot.xAxis('Distance along line x (m)');
-  plot.yAxis('Elevation (m)', { target: 4 });
+  plot.yAxis('Elevation (m)', { target: 5 });
 }

@@ -127,7 +127,7 @@ export function drawVelocityFigure(ctx: ReportContext, layout: SectionLayout): S
     doc.save().fillColor('#ffffff').fillOpacity(0.85).roundedRect(p.x - w / 2 - 1.5, p.y - labelSize * 0.45 - 1, w + 3, labelSize * 0.9 + 2, 1.5).fill().restore();
     label(doc, text, p.x, p.y, { size: labelSize, align: 'center', valign: 'middle' });
   }
-  layerNames(ctx, plot, layers);
+  layerNames(ctx, plot, layers, [{ x: shot.x - 30, y: shot.y - 20, w: 60, h: 40 }, ...placed.map((p) => ({ x: p.x - 10, y: p.y - 6, w: 20, h: 12 }))]);
   plot.restore();
 
   for (const s of input.stations) if (s.x >= plot.x.min && s.x <= plot.x.max) stationMark(doc, plot.px(s.x), plot.py(s.z), 4);
@@ -167,17 +167,25 @@ function velocityPixels(velocity: Float32Array, range: { min: number; max: numbe
   return out;
 }
 
-/** Layer names in small italics, at the left of each layer where it is thick enough to hold them. */
-function layerNames(ctx: ReportContext, plot: Plot, layers: ReturnType<typeof layerOutlines>): void {
+/**
+ * Layer names in small italics inside each layer, at the first of a few positions along the line
+ * (ends first) where the layer is thick enough and the name clears the shot and the time labels.
+ */
+function layerNames(ctx: ReportContext, plot: Plot, layers: ReturnType<typeof layerOutlines>, avoid: { x: number; y: number; w: number; h: number }[]): void {
   const size = SIZE.small - 0.5;
   for (const l of layers) {
-    for (const f of [0.015, 0.5, 0.985]) {
+    const w = textWidth(ctx.doc, l.name, size, FONT.italic);
+    for (const f of [0.015, 0.985, 0.25, 0.75, 0.5]) {
       const x = plot.x.min + f * (plot.x.max - plot.x.min);
       const top = plot.py(Math.min(l.topAt(x), plot.y.max));
       const bottom = plot.py(Math.max(l.baseAt(x), plot.y.min));
       if (bottom - top < size * 1.6) continue;
       const align = f < 0.1 ? 'left' : f > 0.9 ? 'right' : 'center';
-      label(ctx.doc, l.name, plot.px(x) + (align === 'left' ? 3 : align === 'right' ? -3 : 0), (top + bottom) / 2, { size, font: FONT.italic, align, valign: 'middle', colour: '#33424b' });
+      const ax = plot.px(x) + (align === 'left' ? 3 : align === 'right' ? -3 : 0);
+      const left = align === 'left' ? ax : align === 'right' ? ax - w : ax - w / 2;
+      const y = (top + bottom) / 2;
+      if (avoid.some((b) => left < b.x + b.w && b.x < left + w && y - size < b.y + b.h && b.y < y + size)) continue;
+      label(ctx.doc, l.name, ax, y, { size, font: FONT.italic, align, valign: 'middle', colour: '#33424b' });
       break;
     }
   }
