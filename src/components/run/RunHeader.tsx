@@ -29,7 +29,7 @@ export function RunHeader({ run, line, summary, title, extraCrumbs = [] }: { run
       <p className="mt-1 text-sm text-stone-600">
         Started {when(run.createdAt)}
         {summary?.createdBy && <> by {summary.createdBy}</>}
-        {took && <> · solved in {took}</>}
+        {took && <> · {run.status === 'done' ? 'solved' : 'stopped'} in {took}</>}
       </p>
     </PageHeader>
   );

@@ -1,4 +1,4 @@
-import { useId, useMemo } from 'react';
+import { useEffect, useId, useMemo } from 'react';
 import { useSearchParams } from 'react-router';
 import { lineRuns, useResiduals } from '../../api/runs';
 import type { LineDetail, ResidualRow, RunDetail, RunStats } from '../../api/types';
@@ -6,6 +6,7 @@ import { Loading, LoadError } from '../LoadState';
 import { CompareChooser } from './compare/CompareChooser';
 import { TravelTimeCurves } from './curves/TravelTimeCurves';
 import { MisfitView } from './misfit/MisfitView';
+import { preloadRunCharts } from './plot/RunPlot';
 import { RunTabPanel, RunTabs, type RunTab } from './RunTabs';
 import { SectionView } from './section/SectionView';
 import { RunSummary } from './summary/RunSummary';
@@ -36,6 +37,11 @@ export function RunResults({ run, stats, line }: { run: RunDetail; stats: RunSta
   const shotId = shotParam && shotIds.includes(shotParam) ? shotParam : (shotIds[0] ?? '');
   const pickText = params.get('pick');
   const pick = pickText !== null && /^\d+$/.test(pickText) ? Number(pickText) : null;
+  // The section needs no chart library; load it quietly for the curves tab once the page has settled.
+  useEffect(() => {
+    const timer = setTimeout(preloadRunCharts, 1500);
+    return () => clearTimeout(timer);
+  }, []);
   const selectedRow = useMemo(() => residuals.data?.find((r) => r.pickIndex === pick) ?? null, [residuals.data, pick]);
 
   const update = (changes: Record<string, string | null>) =>

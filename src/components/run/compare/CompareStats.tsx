@@ -15,12 +15,12 @@ const pickName = (s: Side) => `${s.summary?.pickSet.fileName ?? 'pick set'} rev 
 function Row({ label, a, b, diff }: { label: string; a: ReactNode; b: ReactNode; diff?: ReactNode }) {
   return (
     <tr className="border-b border-stone-200 last:border-b-0 even:bg-stone-50">
-      <th scope="row" className="whitespace-nowrap px-4 py-2 text-left font-semibold text-stone-700">
+      <th scope="row" className="whitespace-nowrap px-3 py-2 text-left font-semibold text-stone-700">
         {label}
       </th>
-      <td className="whitespace-nowrap px-4 py-2 text-right tabular-nums">{a}</td>
-      <td className="whitespace-nowrap px-4 py-2 text-right tabular-nums">{b}</td>
-      <td className="px-4 py-2 text-right tabular-nums text-stone-700">{diff ?? ''}</td>
+      <td className="whitespace-nowrap px-3 py-2 text-right tabular-nums">{a}</td>
+      <td className="whitespace-nowrap px-3 py-2 text-right tabular-nums">{b}</td>
+      <td className="whitespace-nowrap px-3 py-2 text-right tabular-nums text-stone-700">{diff ?? ''}</td>
     </tr>
   );
 }
@@ -35,16 +35,16 @@ export function CompareStats({ a, b }: { a: Side; b: Side }) {
         <caption className="sr-only">Statistics of run A and run B, and their difference B − A</caption>
         <thead>
           <tr className="bg-stone-100 text-sm text-stone-700">
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-left">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-left">
               &nbsp;
             </th>
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-right">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-right">
               Run A
             </th>
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-right">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-right">
               Run B
             </th>
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-right">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-right">
               B − A
             </th>
           </tr>
@@ -73,20 +73,20 @@ export function CompareShots({ a, b }: { a: RunStats; b: RunStats }) {
   const byA = new Map(a.by_shot.map((s) => [s.shotId, s]));
   return (
     <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
-      <table data-testid="compare-shots" className="w-full min-w-[30rem] border-collapse">
+      <table data-testid="compare-shots" className="w-full min-w-[20rem] border-collapse">
         <caption className="sr-only">RMS misfit of each shot in run A and run B</caption>
         <thead>
           <tr className="bg-stone-100 text-sm text-stone-700">
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-left">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-left">
               Shot
             </th>
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-right">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-right">
               RMS A (ms)
             </th>
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-right">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-right">
               RMS B (ms)
             </th>
-            <th scope="col" className="border-b border-stone-300 px-4 py-2 text-right">
+            <th scope="col" className="border-b border-stone-300 px-3 py-2 text-right">
               B − A
             </th>
           </tr>

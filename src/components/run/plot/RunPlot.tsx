@@ -1,6 +1,17 @@
 import { Component, lazy, Suspense, type ComponentProps, type ReactNode } from 'react';
 
-const RunPlotlyChart = lazy(() => import('./RunPlotlyChart'));
+const loadChart = () => import('./RunPlotlyChart');
+const RunPlotlyChart = lazy(loadChart);
+
+/**
+ * Fetch and evaluate the chart library while the browser is idle, so the first chart tab opens
+ * without the multi-second wait for ~5 MB of script. Safe to call more than once.
+ */
+export function preloadRunCharts(): void {
+  const start = () => void loadChart().catch(() => undefined); // a failure shows later, in ChartBoundary
+  if ('requestIdleCallback' in window) window.requestIdleCallback(start, { timeout: 5000 });
+  else setTimeout(start, 2000);
+}
 
 export type RunPlotProps = ComponentProps<typeof RunPlotlyChart>;
 
