@@ -59,7 +59,13 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
   const [basedOn, setBasedOn] = useState<string | null>(base?.id ?? null);
   const save = useSaveModel(line.id);
 
-  const raster = useMemo(() => (gridIsUsable(draft.grid) ? rasteriseModel(draft) : null), [draft]);
+  const raster = useMemo(() => {
+    if (!gridIsUsable(draft.grid)) return null;
+    const t0 = performance.now();
+    const r = rasteriseModel(draft);
+    performance.measure('timefield:rasterise', { start: t0, end: performance.now() });
+    return r;
+  }, [draft]);
   const deferred = useDeferredValue(draft);
   const check = useMemo(() => checkDraft(deferred, deferred === draft && raster ? raster : undefined), [deferred, draft, raster]);
   const issueMap = useMemo(() => new Map(check.errors.map((e) => [e.path, e.message])), [check]);

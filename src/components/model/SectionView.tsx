@@ -76,7 +76,12 @@ export function SectionView(props: SectionViewProps) {
 
   const layout = useMemo(() => layoutSection(raster.grid, width, exaggeration), [raster.grid, width, exaggeration]);
   const range = useMemo(() => velocityRange(raster.velocity, raster.active), [raster]);
-  const heatmap = useMemo(() => heatmapImage(raster, range), [raster, range]);
+  const heatmap = useMemo(() => {
+    const t0 = performance.now();
+    const image = heatmapImage(raster, range);
+    performance.measure('timefield:heatmap', { start: t0, end: performance.now() });
+    return image;
+  }, [raster, range]);
   const painted = useMemo(() => paintedOutline(raster.grid, model.edits ?? []), [raster.grid, model.edits]);
   const interfaces: SceneInterface[] = useMemo(
     () => (model.layers ?? []).flatMap((l, k) => (l.base ? [{ layer: k, points: l.base as Pt[] }] : [])),
@@ -120,7 +125,9 @@ export function SectionView(props: SectionViewProps) {
     const ctx = canvas.getContext('2d');
     if (!ctx) return;
     ctx.setTransform(dpr, 0, 0, dpr, 0, 0);
+    const t0 = performance.now();
     drawSection(ctx, scene);
+    performance.measure('timefield:section-draw', { start: t0, end: performance.now() });
     const editedAt = preview.editedAt;
     if (preview.field && editedAt !== null && measured.current !== editedAt) {
       measured.current = editedAt;
