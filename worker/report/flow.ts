@@ -65,7 +65,7 @@ export function bullets(ctx: ReportContext, items: { lead?: string; text: string
   ctx.y += GAP.paragraph - 4;
 }
 
-/** "Figure 2. …" or "Table 1. …" below (or above) a figure or table; returns its number. */
+/** "Figure 2. …" or "Table 1. …" below a figure or above a table; returns its number. */
 export function caption(ctx: ReportContext, kind: 'Figure' | 'Table', text: string, n = kind === 'Figure' ? ctx.nextFigure() : ctx.nextTable()): number {
   const { doc } = ctx;
   doc.font(FONT.regular).fontSize(SIZE.caption);

@@ -53,9 +53,10 @@ export function drawIsoDepth(ctx: ReportContext): void {
   caption(ctx, 'Figure', text);
 
   ctx.ensureSpace(60);
-  caption(ctx, 'Table', `Depth to the ${v} m/s surface at the stations: ground elevation of the model, depth below ground and elevation of the surface (m).`);
+  const table = caption(ctx, 'Table', `Depth to the ${v} m/s surface at the stations: ground elevation of the model, depth below ground and elevation of the surface (m).`);
   ctx.y -= 8;
   drawTable(ctx, {
+    continued: `Table ${table} (continued)`,
     columns: [
       { title: 'Station', width: 60 },
       { title: 'x (m)', width: 60, align: 'right' },

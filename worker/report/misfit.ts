@@ -30,9 +30,10 @@ export function drawMisfit(ctx: ReportContext): void {
   ctx.y += 8;
 
   ctx.ensureSpace(60 + Math.min(s.by_shot.length, 10) * 13);
-  caption(ctx, 'Table', 'Misfit by shot (picks used only).');
+  const table = caption(ctx, 'Table', 'Misfit by shot (picks used only).');
   ctx.y -= 8;
   drawTable(ctx, {
+    continued: `Table ${table} (continued)`,
     columns: [
       { title: 'Shot', width: 70 },
       { title: 'Picks', width: 55, align: 'right' },
@@ -103,9 +104,11 @@ function drawHeatmap(ctx: ReportContext): void {
     if (row % rowLabelStep === 0) label(doc, id, left - 5, top + (row + 0.5) * rowH, { size: SIZE.tick, align: 'right', valign: 'middle' });
   });
   label(doc, 'Shot', left - 5 - Math.max(...shots.map((id) => textWidth(doc, id, SIZE.tick))) - 8, top + height / 2, { size: SIZE.small, align: 'center', valign: 'baseline', rotate: 90, colour: COLOUR.muted });
-  // Every k-th column, k the smallest stride at which the widest label clears its neighbours.
+  // Every k-th column, k the smallest of 1, 2, 4, 5, 10, … at which the widest label clears its
+  // neighbours (with a regular spread such strides land on round positions).
   const widest = Math.max(...xs.map((x) => textWidth(doc, plain(x, 2), SIZE.tick)));
-  const stride = Math.max(1, Math.ceil((widest + 8) / colW));
+  const need = (widest + 8) / colW;
+  const stride = [1, 2, 4, 5, 10, 20, 40, 50, 100, 200, 500].find((k) => k >= need) ?? Math.ceil(need);
   doc.save().lineWidth(0.5).strokeColor(COLOUR.ink);
   xs.forEach((x, col) => {
     if (col % stride !== 0) return;

@@ -27,16 +27,17 @@ export function drawSection(ctx: ReportContext): void {
     ctx,
     'Figure',
     `Velocity section with the wavefronts of shot ${input.section.shotId} every ${plain(info.contourStepMs, 3)} ms (black lines, labels in ms), ` +
-      `rays from the shot to the geophones (red), ground surface (solid) and layer interfaces (dashed); stations as triangles, the shot as a star. ` +
+      `rays from the shot to the geophones (red), ground surface (solid)${info.interfaces ? ' and layer interfaces (dashed)' : ''}; stations as triangles, the shot as a star. ` +
       `Colours give the velocity in m/s (${plain(info.velocityRange.min, 0)} to ${plain(info.velocityRange.max, 0)} m/s). ${ve}`,
   );
 
   const layers = layerOutlines(m.file, ctx.model);
   if (layers.length) {
     ctx.ensureSpace(40 + layers.length * 14);
-    caption(ctx, 'Table', 'Layers of the model, top to bottom; velocity at the top and at the base of each layer, varying linearly with depth in between.');
+    const table = caption(ctx, 'Table', 'Layers of the model, top to bottom; velocity at the top and at the base of each layer, varying linearly with depth in between.');
     ctx.y -= 8;
     drawTable(ctx, {
+      continued: `Table ${table} (continued)`,
       columns: [
         { title: 'Layer', width: 200 },
         { title: 'v at top (m/s)', width: 90, align: 'right' },

@@ -40,9 +40,10 @@ export function drawSurvey(ctx: ReportContext): void {
     return [s.shotId, fixed(s.sourceX, 2), fixed(s.sourceZ, 2), String(c.picks), String(c.excluded)];
   });
   ctx.ensureSpace(40 + Math.min(rows.length, 8) * 14);
-  caption(ctx, 'Table', 'Shots: position along the line, source elevation, number of picks and how many of them were excluded from the misfit.');
+  const table = caption(ctx, 'Table', 'Shots: position along the line, source elevation, number of picks and how many of them were excluded from the misfit.');
   ctx.y -= 8;
   drawTable(ctx, {
+    continued: `Table ${table} (continued)`,
     columns: [
       { title: 'Shot', width: 70 },
       { title: 'x (m)', width: 70, align: 'right' },

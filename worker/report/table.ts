@@ -21,6 +21,8 @@ export interface TableOptions {
   /** Side-by-side blocks (rows split evenly, top to bottom then left to right). */
   blocks?: number;
   size?: number;
+  /** Written above the header on every page after the first, e.g. "Table 3 (continued)". */
+  continued?: string;
 }
 
 const PAD = 4;
@@ -35,6 +37,13 @@ export function drawTable(ctx: ReportContext, o: TableOptions): void {
   if (gap < 0) throw new RangeError(`table of ${blocks} blocks × ${blockWidth} pt does not fit the page width`);
   const perBlock = Math.ceil(o.rows.length / blocks);
 
+  if (perBlock === 0) {
+    // No rows: the header alone says what would be here.
+    ctx.ensureSpace(headH + rowH);
+    drawBlock(ctx.doc, CONTENT.left, ctx.y, o.columns, [], size, rowH, headH);
+    ctx.y += headH + 10;
+    return;
+  }
   let start = 0;
   while (start < perBlock) {
     ctx.ensureSpace(headH + 3 * rowH);
@@ -49,7 +58,13 @@ export function drawTable(ctx: ReportContext, o: TableOptions): void {
     }
     ctx.y += headH + take * rowH + 10;
     start += take;
-    if (start < perBlock) ctx.newPage();
+    if (start < perBlock) {
+      ctx.newPage();
+      if (o.continued) {
+        label(ctx.doc, o.continued, CONTENT.left, ctx.y, { size: SIZE.caption, valign: 'top', colour: COLOUR.muted });
+        ctx.y += SIZE.caption + 8;
+      }
+    }
   }
 }
 

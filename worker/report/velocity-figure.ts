@@ -54,6 +54,8 @@ export function sectionLayout(ctx: ReportContext, left: number, top: number, wid
 }
 
 export interface SectionFigureInfo {
+  /** Whether layer interfaces were drawn. */
+  interfaces: boolean;
   contourStepMs: number;
   exaggeration: number;
   velocityRange: { min: number; max: number };
@@ -132,13 +134,17 @@ export function drawVelocityFigure(ctx: ReportContext, layout: SectionLayout): S
 
   for (const s of input.stations) if (s.x >= plot.x.min && s.x <= plot.x.max) stationMark(doc, plot.px(s.x), plot.py(s.z), 4);
   shotMark(doc, shot.x, shot.y, 5);
-  label(doc, `shot ${input.section.shotId}`, shot.x, shot.y - 8, { size: SIZE.small, align: 'center', colour: COLOUR.shot, font: FONT.semibold });
+  // The shot's name above its star, kept within the plot's width so it never runs into the axis labels.
+  const shotName = `shot ${input.section.shotId}`;
+  const half = textWidth(doc, shotName, SIZE.small, FONT.semibold) / 2;
+  const nameX = Math.min(Math.max(shot.x, plot.box.left + half), plot.right - half);
+  label(doc, shotName, nameX, shot.y - 8, { size: SIZE.small, align: 'center', colour: COLOUR.shot, font: FONT.semibold });
 
   plot.frame();
   plot.xAxis('Distance along line x (m)');
   plot.yAxis('Elevation (m)', { target: 5 });
   verticalColourBar(doc, { stops: VELOCITY_STOPS, min: range.min, max: range.max, title: 'Velocity (m/s)' }, plot.right + 12, plot.box.top, 9, plot.box.height);
-  return { contourStepMs: stepMs, exaggeration: layout.exaggeration, velocityRange: range };
+  return { interfaces: layers.some((l) => l.base.length > 0), contourStepMs: stepMs, exaggeration: layout.exaggeration, velocityRange: range };
 }
 
 /** Velocity range over ground nodes; widened a little when the ground is uniform. */
