@@ -38,7 +38,7 @@ describe('brush and rectangle cells', () => {
 describe('cells to edits', () => {
   const model: ModelFile = {
     format: 'timefield-model/1',
-    grid: { ...grid },
+    grid: { ...grid } as ModelFile['grid'],
     surface: [[0, 8], [20, 8]],
     layers: [
       { name: 'soil', base: [[0, 5], [20, 5]], v_top: 400, v_base: 400 },
