@@ -11,6 +11,7 @@ import { availableParallelism } from 'node:os';
 import Piscina from 'piscina';
 import type { Grid } from '../../shared/grid';
 import type { Point } from '../../shared/eikonal';
+import { workerExecArgv } from './exec-argv';
 import type { SolveShotResult, SolveShotTask, WarmupTask } from './solve-shot';
 
 export interface ShotJob {
@@ -32,11 +33,6 @@ export class ShotSolveError extends Error {
     super(message);
     this.name = 'ShotSolveError';
   }
-}
-
-function workerExecArgv(): string[] {
-  const hasTsLoader = process.execArgv.some((a) => /(^|[\\/])tsx([\\/]|$)/.test(a));
-  return hasTsLoader ? process.execArgv : [...process.execArgv, '--import', 'tsx'];
 }
 
 export function defaultThreadCount(): number {
