@@ -26,20 +26,23 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
 const OBJECT_PAGES: Record<string, (id: string) => string> = {
   report: (id) => `/reports/${id}`,
   run: (id) => `/runs/${id}`,
-  line: (id) => `/lines/${id}`,
-  model: (id) => `/models/${id}`,
+  survey_line: (id) => `/lines/${id}`,
+  velocity_model: (id) => `/models/${id}`,
 };
+
+/** "survey_line" → "survey line". */
+const typeWords = (objectType: string) => objectType.replace(/_/g, ' ');
 
 function ObjectCell({ entry, linkable }: { entry: AuditEntry; linkable: boolean }) {
   const { objectType, objectId } = entry;
-  if (!objectId) return <span className="text-stone-700">{objectType}</span>;
+  if (!objectId) return <span className="text-stone-700">{typeWords(objectType)}</span>;
   const page = linkable ? OBJECT_PAGES[objectType] : undefined;
   const short = objectId.length > 12 ? `${objectId.slice(0, 8)}…` : objectId;
   return (
     <span className="whitespace-nowrap">
-      <span className="text-stone-700">{objectType}</span>{' '}
+      <span className="text-stone-700">{typeWords(objectType)}</span>{' '}
       {page ? (
-        <Link to={page(objectId)} title={objectId} aria-label={`${objectType} ${objectId}`} className="font-mono text-sm">
+        <Link to={page(objectId)} title={objectId} aria-label={`${typeWords(objectType)} ${objectId}`} className="font-mono text-sm">
           {short}
         </Link>
       ) : (
@@ -91,7 +94,7 @@ export function AuditTable({ entries, linkable }: { entries: AuditEntry[]; linka
               {e.actor ? (
                 <>
                   <span className="font-semibold text-stone-900">{e.actor}</span>
-                  <span className="block text-sm break-all text-stone-600">{e.actorEmail}</span>
+                  <span className="block text-sm whitespace-nowrap text-stone-600">{e.actorEmail}</span>
                 </>
               ) : (
                 <span className="text-stone-600">system or a former account</span>

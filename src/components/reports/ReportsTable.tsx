@@ -1,4 +1,5 @@
 import { Link } from 'react-router';
+import { reportPdfUrl } from '../../api/reports';
 import type { ReportSummary } from '../../api/types';
 import { DataTable, Td, Th, Tr } from '../Table';
 import { PdfDownload } from './PdfDownload';
@@ -11,7 +12,7 @@ export function TeamReportsTable({ reports }: { reports: ReportSummary[] }) {
     <DataTable caption="Reports of this project, newest first" testId="reports-table">
       <thead>
         <tr>
-          <Th>Line</Th>
+          <Th>Report</Th>
           <Th>Status</Th>
           <Th>Prepared by</Th>
           <Th>Created</Th>
@@ -23,7 +24,7 @@ export function TeamReportsTable({ reports }: { reports: ReportSummary[] }) {
           <Tr key={r.id} testId="report-row">
             <Td>
               <Link to={`/reports/${r.id}`} className="font-semibold" aria-label={`Report on line ${r.line}, created ${dateTime(r.createdAt)}`}>
-                {r.line}
+                Line {r.line}
               </Link>
             </Td>
             <Td>
@@ -31,7 +32,15 @@ export function TeamReportsTable({ reports }: { reports: ReportSummary[] }) {
             </Td>
             <Td>{r.createdBy ?? <span className="text-stone-500">former member</span>}</Td>
             <Td className="whitespace-nowrap text-stone-700">{dateTime(r.createdAt)}</Td>
-            <Td className={r.renderState === 'failed' ? 'font-semibold text-red-800' : 'text-stone-700'}>{RENDER_LABELS[r.renderState]}</Td>
+            <Td className={r.renderState === 'failed' ? 'font-semibold text-red-800' : 'text-stone-700'}>
+              {r.renderState === 'ready' ? (
+                <a href={reportPdfUrl(r.id)} download aria-label={`Download the PDF of the report on line ${r.line}, created ${dateTime(r.createdAt)}`}>
+                  Download
+                </a>
+              ) : (
+                RENDER_LABELS[r.renderState]
+              )}
+            </Td>
           </Tr>
         ))}
       </tbody>

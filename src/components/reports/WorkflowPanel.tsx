@@ -1,7 +1,9 @@
 import { useRef, useState } from 'react';
 import { isRendering, useReportStep } from '../../api/reports';
 import type { ProjectRole, ReportDetail, ReportStep } from '../../api/types';
+import { formProblems } from '../../lib/formErrors';
 import { Button } from '../Button';
+import { FormAlert } from '../FormAlert';
 import { StepForm } from './StepForm';
 import { NEXT_FOR_TEAM, STEP_WORDING, stepsFor } from './wording';
 
@@ -60,6 +62,8 @@ export function WorkflowPanel({ report, role }: { report: ReportDetail; role: Pr
   const [outcome, setOutcome] = useState<Outcome | null>(null);
   const buttons = useRef<HTMLDivElement>(null);
   const steps = stepsFor(role, report.status);
+  // A step someone else has made impossible meanwhile (the report moved on) folds its form away.
+  const shown = open && steps.includes(open) ? open : null;
 
   function openStep(s: ReportStep) {
     step.reset();
@@ -96,15 +100,20 @@ export function WorkflowPanel({ report, role }: { report: ReportDetail; role: Pr
           <OutcomeNote outcome={outcome} />
         </div>
       )}
+      {step.isError && !shown && (
+        <div className="mt-4">
+          <FormAlert problems={formProblems(step.error, [])} testId="step-refused" />
+        </div>
+      )}
       {steps.length > 0 ? (
         <div ref={buttons} className="mt-4 flex flex-wrap gap-3" role="group" aria-label="Review steps">
           {steps.map((s) => (
             <Button
               key={s}
               variant={s === 'return' ? 'secondary' : 'primary'}
-              aria-expanded={open === s}
-              className={open === s ? 'ring-2 ring-accent-600/50 ring-offset-1' : ''}
-              onClick={() => (open === s ? cancel() : openStep(s))}
+              aria-expanded={shown === s}
+              className={shown === s ? 'ring-2 ring-accent-600/50 ring-offset-1' : ''}
+              onClick={() => (shown === s ? cancel() : openStep(s))}
               data-testid={`step-${s}`}
             >
               {STEP_WORDING[s].button}
@@ -118,14 +127,14 @@ export function WorkflowPanel({ report, role }: { report: ReportDetail; role: Pr
             : 'Only project members can take review steps.'}
         </p>
       )}
-      {open && (
+      {shown && (
         <StepForm
-          key={open}
-          step={open}
+          key={shown}
+          step={shown}
           busy={step.isPending}
           error={step.error}
-          warning={pdfWarning(open, report)}
-          onConfirm={(comment) => confirm(open, comment)}
+          warning={pdfWarning(shown, report)}
+          onConfirm={(comment) => confirm(shown, comment)}
           onCancel={cancel}
         />
       )}
