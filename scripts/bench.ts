@@ -60,6 +60,7 @@ function printRow(r: BenchResult): void {
       String(r.order).padStart(5),
       (r.median_seconds * 1000).toFixed(1).padStart(10),
       (r.nodes_per_second / 1e6).toFixed(2).padStart(9),
+      (r.cpu_median_seconds * 1000).toFixed(1).padStart(8),
       pct(r.max_rel_error).padStart(10),
       pct(r.mean_rel_error).padStart(10),
       String(r.measured_nodes).padStart(9),
@@ -71,15 +72,16 @@ function main(): void {
   const args = parseArgs(process.argv.slice(2));
   if (!args.json) {
     console.log(`Eikonal benchmark — node ${process.version}, single thread, medians of repeated solves`);
-    console.log(['case'.padEnd(24), 'grid'.padStart(10), 'order'.padStart(5), 'median ms'.padStart(10), 'Mnodes/s'.padStart(9), 'max err'.padStart(10), 'mean err'.padStart(10), 'measured'.padStart(9)].join(' '));
+    console.log(['case'.padEnd(24), 'grid'.padStart(10), 'order'.padStart(5), 'median ms'.padStart(10), 'Mnodes/s'.padStart(9), 'cpu ms'.padStart(8), 'max err'.padStart(10), 'mean err'.padStart(10), 'measured'.padStart(9)].join(' '));
   }
   for (const c of cases(args)) {
     if (args.filter && !c.name.includes(args.filter)) continue;
     for (const order of [1, 2] as const) {
       const r = runCase(c, { order }, repeatsFor(c, args));
       if (args.json) {
-        const { measured_nodes: _unused, ...contract } = r;
-        console.log(JSON.stringify(contract));
+        // Exactly the contract's fields (FORMATS.md §3).
+        const { case: name, nx, nz, order: o, median_seconds, nodes_per_second, max_rel_error, mean_rel_error } = r;
+        console.log(JSON.stringify({ case: name, nx, nz, order: o, median_seconds, nodes_per_second, max_rel_error, mean_rel_error }));
       } else {
         printRow(r);
       }
