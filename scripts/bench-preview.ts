@@ -45,7 +45,9 @@ async function lineId(page: Page, name: string): Promise<string> {
   }, name);
 }
 
-async function editAndTime(page: Page, v: number): Promise<{ redrawMs: number; solveMs: number }> {
+let step = 'start';
+async function editAndTime(page: Page, v: number): Promise<{ redrawMs: number; solveMs: number; contourMs: number }> {
+  step = `edit to ${v}`;
   const before = await page.evaluate((m) => performance.getEntriesByName(m).length, MEASURE);
   const input = page.getByLabel('Layer 1 velocity at top (m/s)');
   await input.fill(String(v));
@@ -53,8 +55,8 @@ async function editAndTime(page: Page, v: number): Promise<{ redrawMs: number; s
   await page.waitForFunction(([m, n]) => performance.getEntriesByName(m as string).length > (n as number), [MEASURE, before] as const, { timeout: 90_000 });
   await page.waitForFunction(() => document.querySelector('[data-testid=preview-status]')?.getAttribute('data-status') === 'done');
   const redrawMs = await page.evaluate((m) => performance.getEntriesByName(m).at(-1)!.duration, MEASURE);
-  const status = (await page.getByTestId('preview-status').textContent()) ?? '';
-  return { redrawMs, solveMs: Number(/solved in (\d+) ms/.exec(status)?.[1] ?? NaN) };
+  const status = page.getByTestId('preview-status');
+  return { redrawMs, solveMs: Number(await status.getAttribute('data-solve-ms')), contourMs: Number(await status.getAttribute('data-contour-ms')) };
 }
 
 async function main(): Promise<void> {
@@ -89,7 +91,7 @@ async function main(): Promise<void> {
       w.__longTasks = [];
       new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: 'longtask' });
     });
-    const runs: { redrawMs: number; solveMs: number }[] = [];
+    const runs: { redrawMs: number; solveMs: number; contourMs: number }[] = [];
     for (let k = 0; k < RUNS; k++) runs.push(await editAndTime(page, k % 2 ? 400 : 420));
     const longTasks = await page.evaluate(() => (window as unknown as { __longTasks: number[] }).__longTasks);
     // Main-thread parts of each edit, as the page measures them (the last RUNS of each).
@@ -102,7 +104,7 @@ async function main(): Promise<void> {
     const withRays: number[] = [];
     for (let k = 0; k < Math.ceil(RUNS / 2); k++) {
       const before = performance.now();
-      await editAndTime(page, k % 2 ? 400 : 420);
+      await editAndTime(page, k % 2 ? 410 : 430); // never the value already there, or nothing would change
       await page.waitForFunction(() => document.querySelector('[data-testid=preview-status]')?.getAttribute('data-status') === 'done');
       withRays.push(performance.now() - before);
     }
@@ -118,6 +120,7 @@ async function main(): Promise<void> {
       p90_edit_to_redraw_ms: +quantile(redraw, 0.9).toFixed(1),
       min_edit_to_redraw_ms: +Math.min(...redraw).toFixed(1),
       median_worker_solve_ms: solve.length ? quantile(solve, 0.5) : null,
+      median_worker_contour_ms: quantile(runs.map((r) => r.contourMs), 0.5),
       median_rasterise_ms: +quantile(parts.rasterise, 0.5).toFixed(1),
       median_heatmap_ms: +quantile(parts.heatmap, 0.5).toFixed(1),
       median_section_draw_ms: +quantile(parts['section-draw'], 0.5).toFixed(1),
@@ -129,7 +132,7 @@ async function main(): Promise<void> {
     else {
       console.log(`preview on a 500 × 100 grid, ${RUNS} edits (after 3 warm-up edits):`);
       console.log(`  edit → redrawn wavefronts: median ${result.median_edit_to_redraw_ms} ms, p90 ${result.p90_edit_to_redraw_ms} ms, min ${result.min_edit_to_redraw_ms} ms`);
-      console.log(`  of which the worker's solve: median ${result.median_worker_solve_ms} ms`);
+      console.log(`  in the worker: solve and receiver times median ${result.median_worker_solve_ms} ms, wavefront contours ${result.median_worker_contour_ms} ms`);
       console.log(`  main thread per edit (medians): rasterise ${result.median_rasterise_ms} ms, heatmap ${result.median_heatmap_ms} ms, section draw ${result.median_section_draw_ms} ms`);
       console.log(`  main thread: ${result.long_tasks_over_50ms} tasks over 50 ms, longest ${result.longest_main_thread_task_ms} ms`);
       console.log(`  with rays (seen from the test driver, including its own round trips): median ${result.median_with_rays_roundtrip_ms} ms`);
@@ -138,7 +141,10 @@ async function main(): Promise<void> {
     const page = browser.contexts()[0]?.pages()[0];
     if (page) {
       const status = await page.getByTestId('preview-status').evaluate((el) => `${el.getAttribute('data-status')}: ${el.textContent}`).catch(() => null);
-      throw new Error(`${(err as Error).message}\n(preview status: ${status ?? 'not shown'}; page ${page.url()})`);
+      const measures = await page.evaluate((m) => performance.getEntriesByName(m).length, MEASURE).catch(() => null);
+      const v = await page.getByLabel('Layer 1 velocity at top (m/s)').inputValue().catch(() => null);
+      await page.screenshot({ path: '/tmp/bench-preview-failure.png', fullPage: true }).catch(() => undefined);
+      throw new Error(`${(err as Error).message} at ${step}\n(preview status: ${status ?? 'not shown'}; ${measures} redraw measures; layer 1 v_top ${v}; page ${page.url()}; screenshot /tmp/bench-preview-failure.png)`);
     }
     throw err;
   } finally {

@@ -63,7 +63,14 @@ export function PreviewPanel(p: PreviewPanelProps) {
           <input type="checkbox" data-testid="preview-rays" checked={p.rays} onChange={(e) => p.onRays(e.target.checked)} className="h-4 w-4 accent-accent-700" />
           Rays to the receivers
         </label>
-        <p data-testid="preview-status" data-status={p.state.status} role="status" className="pb-1 text-sm tabular-nums text-stone-700">
+        <p
+          data-testid="preview-status"
+          data-status={p.state.status}
+          data-solve-ms={p.state.field?.solveMs.toFixed(1)}
+          data-contour-ms={p.state.field?.contourMs.toFixed(1)}
+          role="status"
+          className="pb-1 text-sm tabular-nums text-stone-700"
+        >
           {status}
         </p>
       </div>

@@ -1,7 +1,7 @@
 /**
- * The live preview's link to its Web Worker. Changes are debounced briefly; at most one solve
- * runs at a time and only the newest waiting request is kept, so a burst of edits costs one
- * extra solve, not one per edit. A solve that has run long while newer work waits (a big grid)
+ * The live preview's link to its Web Worker. When the worker is idle a change is sent at once;
+ * while it solves, changes are debounced and only the newest waiting request is kept, so a burst
+ * of edits costs one extra solve, not one per edit. A solve that has run long while newer work waits (a big grid)
  * is cancelled for real by terminating the worker and starting a fresh one. Replies to stale
  * requests are dropped.
  */
@@ -60,6 +60,10 @@ class PreviewLink {
       order: 2,
       rays: job.rays,
     });
+  }
+
+  get busy(): boolean {
+    return this.inFlight !== null;
   }
 
   clear(): void {
@@ -150,7 +154,7 @@ export function usePreview(job: PreviewJob | null): PreviewState {
       linkRef.current?.clear();
       return;
     }
-    const timer = window.setTimeout(() => linkRef.current?.request(job), DEBOUNCE_MS);
+    const timer = window.setTimeout(() => linkRef.current?.request(job), linkRef.current?.busy ? DEBOUNCE_MS : 0);
     return () => window.clearTimeout(timer);
   }, [job]);
 
