@@ -53,6 +53,17 @@ export function ModelEditorPage() {
   if (version.isError) return <LoadError error={version.error} what="model version" onRetry={() => void version.refetch()} />;
 
   const l = line.data;
+  if (lineParam && !modelId && version.data && version.data.lineId !== lineParam) {
+    return (
+      <div role="alert" data-testid="load-error" className="rounded-lg border border-stone-300 bg-white px-5 py-6">
+        <p className="text-lg font-semibold text-stone-900">That model version belongs to another survey line.</p>
+        <p className="mt-1 text-stone-700">A new version can only start from a version of the same line.</p>
+        <p className="mt-3">
+          <Link to={`/models/${version.data.id}`}>Open that version</Link>
+        </p>
+      </div>
+    );
+  }
   const versions = l ? lineModelVersions(l.models) : [];
   const summaryOf = (id: string | null) => versions.find((v) => v.id === id) ?? null;
 

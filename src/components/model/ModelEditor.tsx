@@ -3,7 +3,7 @@
  * import/export and the live wavefront preview. The draft lives in an undo/redo history; the
  * preview is solved in a Web Worker from the rasterised draft.
  */
-import { useDeferredValue, useEffect, useMemo, useRef, useState } from 'react';
+import { useDeferredValue, useMemo, useRef, useState } from 'react';
 import type { Grid } from '../../../shared/grid';
 import { evalPolyline, rasteriseModel, type ModelFile, type ModelLayer, type RasterModel } from '../../../shared/model';
 import {
@@ -13,6 +13,7 @@ import {
 import { isApiError, type ApiIssue } from '../../api/errors';
 import { useSaveModel } from '../../api/models';
 import type { LineDetail, ModelVersionSummary } from '../../api/types';
+import { Button } from '../Button';
 import { Section } from '../Section';
 import { ChecksPanel } from './ChecksPanel';
 import { GridForm } from './GridForm';
@@ -26,6 +27,7 @@ import { Toolbar } from './Toolbar';
 import type { Tool } from './tools';
 import { usePreview, type PreviewJob } from './usePreview';
 import { usePreviewShots } from './usePreviewShots';
+import { useLeaveGuard } from './useLeaveGuard';
 import { useModelDraft } from './useModelDraft';
 import { VersionList } from './VersionList';
 
@@ -83,12 +85,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
   const preview = usePreview(job);
   const misfit = shots.misfit(preview);
 
-  useEffect(() => {
-    if (readOnly || !dirty) return;
-    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
-    window.addEventListener('beforeunload', warn);
-    return () => window.removeEventListener('beforeunload', warn);
-  }, [dirty, readOnly]);
+  const { blocker, justSaved } = useLeaveGuard(dirty && !readOnly);
 
   const select = (layer: number | null, node: number | null) => {
     setSelectedLayer(layer);
@@ -170,6 +167,26 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
 
   return (
     <div data-testid="model-editor" data-dirty={dirty}>
+      {blocker.state === 'blocked' && (
+        <div
+          role="alertdialog"
+          aria-labelledby="leave-title"
+          data-testid="leave-guard"
+          ref={(el) => el?.scrollIntoView({ block: 'center' })}
+          className="mb-4 rounded-lg border border-amber-300 bg-amber-50 px-4 py-3 text-amber-950">
+          <p id="leave-title" className="font-semibold">
+            Leave the editor without saving? The changes since the last save will be lost.
+          </p>
+          <p className="mt-2 flex gap-3">
+            <Button size="sm" variant="danger" onClick={() => blocker.proceed()}>
+              Leave without saving
+            </Button>
+            <Button size="sm" variant="secondary" onClick={() => blocker.reset()}>
+              Stay and keep editing
+            </Button>
+          </p>
+        </div>
+      )}
       <Toolbar
         tool={tool}
         onTool={setTool}
@@ -289,6 +306,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
                     { model: snapshot, name, comment, basedOn },
                     {
                       onSuccess: (res) => {
+                        justSaved.current = res.id;
                         setSavedDraft(snapshot);
                         setBasedOn(res.id);
                         onSaved(res.id);
