@@ -23,7 +23,9 @@ export function placeShots(model: RasterModel, shots: readonly ShotPicks[], maxE
   const placed: PlacedShot[] = [];
   const { grid } = model;
   const eps = 1e-6 * grid.dz;
-  const where = `grid x ${grid.x0} to ${nodeX(grid, grid.nx - 1)} m, z ${nodeZ(grid, grid.nz - 1)} to ${grid.z0} m`;
+  // Rounded to the millimetre: x0 + (nx−1)·dx carries float noise (39.699999999999996).
+  const mm = (v: number) => +v.toFixed(3);
+  const where = `grid x ${mm(grid.x0)} to ${mm(nodeX(grid, grid.nx - 1))} m, z ${mm(nodeZ(grid, grid.nz - 1))} to ${mm(grid.z0)} m`;
 
   const check = (p: Pick, what: 'source' | 'receiver', x: number, z: number): void => {
     if (errors.length >= maxErrors) return;
