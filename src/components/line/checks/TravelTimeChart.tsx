@@ -14,9 +14,9 @@ export interface TravelTimeChartProps extends ChartInput {
 /** Fixed, so plotly never sees a "changed" config and redraws for nothing. */
 const CONFIG = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'autoScale2d'] };
 
-/** A horizontal legend for a few shots; with many, a scrolling one at the side keeps the axis title clear. */
-const legendFor = (entries: number) =>
-  entries <= 14 ? { orientation: 'h', yanchor: 'top', y: -0.16, font: { size: 13 } } : { orientation: 'v', x: 1.01, y: 1, font: { size: 12 } };
+/** A legend row above the plot for a few shots (clear of the axis title); with many, a scrolling column at the side. */
+const legendFor = (shots: number) =>
+  shots <= 14 ? { orientation: 'h', xanchor: 'left', x: 0, yanchor: 'bottom', y: 1.02, font: { size: 13 } } : { orientation: 'v', x: 1.01, y: 1, font: { size: 12 } };
 
 /**
  * Travel-time curves of every shot on one chart, with the QC marks and kept velocity fits over
@@ -32,7 +32,7 @@ export const TravelTimeChart = memo(function TravelTimeChart(props: TravelTimeCh
     () => ({
       font: CHART_FONT,
       uirevision: revisionKey,
-      margin: { l: 64, r: 16, t: 16, b: 56 },
+      margin: { l: 64, r: 16, t: 24, b: 56 },
       paper_bgcolor: 'white',
       plot_bgcolor: 'white',
       dragmode: dragMode,
