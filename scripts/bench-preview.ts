@@ -96,7 +96,7 @@ async function main(): Promise<void> {
     const longTasks = await page.evaluate(() => (window as unknown as { __longTasks: number[] }).__longTasks);
     // Main-thread parts of each edit, as the page measures them (the last RUNS of each).
     const parts = await page.evaluate((n) =>
-      Object.fromEntries(['rasterise', 'heatmap', 'section-draw'].map((k) => [k, performance.getEntriesByName(`timefield:${k}`).slice(-n).map((e) => e.duration)])),
+      Object.fromEntries(['rasterise', 'check', 'heatmap', 'section-draw', 'preview-dispatch', 'preview-worker', 'preview-paint'].map((k) => [k, performance.getEntriesByName(`timefield:${k}`).slice(-n).map((e) => e.duration)])),
     RUNS);
 
     await page.getByTestId('preview-rays').check();
@@ -121,7 +121,11 @@ async function main(): Promise<void> {
       min_edit_to_redraw_ms: +Math.min(...redraw).toFixed(1),
       median_worker_solve_ms: solve.length ? quantile(solve, 0.5) : null,
       median_worker_contour_ms: quantile(runs.map((r) => r.contourMs), 0.5),
+      median_edit_to_worker_ms: +quantile(parts['preview-dispatch'], 0.5).toFixed(1),
+      median_worker_round_trip_ms: +quantile(parts['preview-worker'], 0.5).toFixed(1),
+      median_reply_to_drawn_ms: +quantile(parts['preview-paint'], 0.5).toFixed(1),
       median_rasterise_ms: +quantile(parts.rasterise, 0.5).toFixed(1),
+      median_check_ms: +quantile(parts.check, 0.5).toFixed(1),
       median_heatmap_ms: +quantile(parts.heatmap, 0.5).toFixed(1),
       median_section_draw_ms: +quantile(parts['section-draw'], 0.5).toFixed(1),
       longest_main_thread_task_ms: longTasks.length ? +Math.max(...longTasks).toFixed(1) : 0,
@@ -132,8 +136,9 @@ async function main(): Promise<void> {
     else {
       console.log(`preview on a 500 × 100 grid, ${RUNS} edits (after 3 warm-up edits):`);
       console.log(`  edit → redrawn wavefronts: median ${result.median_edit_to_redraw_ms} ms, p90 ${result.p90_edit_to_redraw_ms} ms, min ${result.min_edit_to_redraw_ms} ms`);
+      console.log(`  split (medians): edit → sent to worker ${result.median_edit_to_worker_ms} ms, worker round trip ${result.median_worker_round_trip_ms} ms, reply → drawn ${result.median_reply_to_drawn_ms} ms`);
       console.log(`  in the worker: solve and receiver times median ${result.median_worker_solve_ms} ms, wavefront contours ${result.median_worker_contour_ms} ms`);
-      console.log(`  main thread per edit (medians): rasterise ${result.median_rasterise_ms} ms, heatmap ${result.median_heatmap_ms} ms, section draw ${result.median_section_draw_ms} ms`);
+      console.log(`  main thread per edit (medians): rasterise ${result.median_rasterise_ms} ms, checks ${result.median_check_ms} ms, heatmap ${result.median_heatmap_ms} ms, section draw ${result.median_section_draw_ms} ms`);
       console.log(`  main thread: ${result.long_tasks_over_50ms} tasks over 50 ms, longest ${result.longest_main_thread_task_ms} ms`);
       console.log(`  with rays (seen from the test driver, including its own round trips): median ${result.median_with_rays_roundtrip_ms} ms`);
     }

@@ -25,7 +25,8 @@ import { SectionView } from './SectionView';
 import { defaultExaggeration } from './sectionGeometry';
 import { Toolbar } from './Toolbar';
 import type { Tool } from './tools';
-import { usePreview, type PreviewJob } from './usePreview';
+import type { PreviewJob } from './usePreview';
+import { WithPreview } from './WithPreview';
 import { usePreviewShots } from './usePreviewShots';
 import { useLeaveGuard } from './useLeaveGuard';
 import { useModelDraft } from './useModelDraft';
@@ -69,7 +70,12 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
     return r;
   }, [draft]);
   const deferred = useDeferredValue(draft);
-  const check = useMemo(() => checkDraft(deferred, deferred === draft && raster ? raster : undefined), [deferred, draft, raster]);
+  const check = useMemo(() => {
+    const t0 = performance.now();
+    const c = checkDraft(deferred, deferred === draft && raster ? raster : undefined);
+    performance.measure('timefield:check', { start: t0, end: performance.now() });
+    return c;
+  }, [deferred, draft, raster]);
   const issueMap = useMemo(() => new Map(check.errors.map((e) => [e.path, e.message])), [check]);
   const dirty = draft !== savedDraft;
 
@@ -82,8 +88,6 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
     jobRaster.current = raster;
     return { raster, shot: shots.placed.shot, rays, editedAt };
   }, [raster, shots.placed, rays, d.editedAt]);
-  const preview = usePreview(job);
-  const misfit = shots.misfit(preview);
 
   const { blocker, justSaved } = useLeaveGuard(dirty && !readOnly);
 
@@ -203,55 +207,64 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
         onExaggeration={setExaggeration}
         readOnly={readOnly}
       />
-      {raster ? (
-        <SectionView
-          model={draft}
-          raster={raster}
-          exaggeration={exaggeration}
-          tool={tool}
-          brushRadius={brushRadius}
-          readOnly={readOnly}
-          selectedLayer={selectedLayer}
-          selectedNode={selectedNode}
-          onSelect={select}
-          onNodeDrag={onNodeDrag}
-          onInsertNode={onInsertNode}
-          onStroke={onStroke}
-          onRectangle={onRectangle}
-          onNudge={onNudge}
-          onDeleteNode={() => onDeleteNode()}
-          stations={line.stations}
-          shots={shots.shots}
-          selectedShot={shots.shotId}
-          onSelectShot={shots.setShotId}
-          preview={preview}
-          previewShot={shots.placed?.ok ? shots.placed.shot : null}
-        />
-      ) : (
-        <p role="alert" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
-          The grid cannot be drawn: {check.errors.find((e) => e.path === 'grid')?.message ?? 'its numbers are not usable'}.
-        </p>
-      )}
-      <p className="mt-1 text-sm text-stone-600" data-testid="edit-count">
-        {(draft.edits ?? []).length} painted cells · {draft.layers ? `${draft.layers.length} layers` : 'raw velocity grid'}
-        {dirty && !readOnly && <span className="ml-2 rounded-full bg-amber-100 px-2 text-amber-900">unsaved changes</span>}
-      </p>
+      <WithPreview job={job}>
+        {(preview) => {
+          const misfit = shots.misfit(preview);
+          return (
+            <>
+              {raster ? (
+                <SectionView
+                  model={draft}
+                  raster={raster}
+                  exaggeration={exaggeration}
+                  tool={tool}
+                  brushRadius={brushRadius}
+                  readOnly={readOnly}
+                  selectedLayer={selectedLayer}
+                  selectedNode={selectedNode}
+                  onSelect={select}
+                  onNodeDrag={onNodeDrag}
+                  onInsertNode={onInsertNode}
+                  onStroke={onStroke}
+                  onRectangle={onRectangle}
+                  onNudge={onNudge}
+                  onDeleteNode={() => onDeleteNode()}
+                  stations={line.stations}
+                  shots={shots.shots}
+                  selectedShot={shots.shotId}
+                  onSelectShot={shots.setShotId}
+                  preview={preview}
+                  previewShot={shots.placed?.ok ? shots.placed.shot : null}
+                />
+              ) : (
+                <p role="alert" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
+                  The grid cannot be drawn: {check.errors.find((e) => e.path === 'grid')?.message ?? 'its numbers are not usable'}.
+                </p>
+              )}
+              <p className="mt-1 text-sm text-stone-600" data-testid="edit-count">
+                {(draft.edits ?? []).length} painted cells · {draft.layers ? `${draft.layers.length} layers` : 'raw velocity grid'}
+                {dirty && !readOnly && <span className="ml-2 rounded-full bg-amber-100 px-2 text-amber-900">unsaved changes</span>}
+              </p>
 
-      <PreviewPanel
-        pickSets={line.pickSets}
-        pickSetId={shots.pickSetId}
-        onPickSet={shots.setPickSetId}
-        shots={shots.shots}
-        shotId={shots.shotId}
-        onShot={shots.setShotId}
-        rays={rays}
-        onRays={setRays}
-        state={preview}
-        placementProblem={shots.placed && !shots.placed.ok ? shots.placed.message : null}
-        rmsMs={misfit?.rmsMs ?? null}
-        picks={misfit?.count ?? 0}
-        loadingPicks={shots.loading}
-      />
+              <PreviewPanel
+                pickSets={line.pickSets}
+                pickSetId={shots.pickSetId}
+                onPickSet={shots.setPickSetId}
+                shots={shots.shots}
+                shotId={shots.shotId}
+                onShot={shots.setShotId}
+                rays={rays}
+                onRays={setRays}
+                state={preview}
+                placementProblem={shots.placed && !shots.placed.ok ? shots.placed.message : null}
+                rmsMs={misfit?.rmsMs ?? null}
+                picks={misfit?.count ?? 0}
+                loadingPicks={shots.loading}
+              />
+            </>
+          );
+        }}
+      </WithPreview>
 
       <div className="mt-8 grid gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <div>

@@ -132,7 +132,14 @@ export function SectionView(props: SectionViewProps) {
     if (preview.field && editedAt !== null && measured.current !== editedAt) {
       measured.current = editedAt;
       try {
-        performance.measure('timefield:preview-redraw', { start: editedAt, end: performance.now() });
+        const now = performance.now();
+        performance.measure('timefield:preview-redraw', { start: editedAt, end: now });
+        // Its parts: edit → sent to the worker, worker round trip, reply → drawn.
+        if (preview.sentAt !== null && preview.receivedAt !== null && preview.sentAt >= editedAt) {
+          performance.measure('timefield:preview-dispatch', { start: editedAt, end: preview.sentAt });
+          performance.measure('timefield:preview-worker', { start: preview.sentAt, end: preview.receivedAt });
+          performance.measure('timefield:preview-paint', { start: preview.receivedAt, end: now });
+        }
       } catch {
         // an edit older than the page's time origin: nothing to measure
       }

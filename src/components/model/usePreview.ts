@@ -25,13 +25,16 @@ export interface PreviewState {
   message: string | null;
   /** editedAt of the job whose field is shown. */
   editedAt: number | null;
+  /** performance.now() when that job went to the worker and when its field came back. */
+  sentAt: number | null;
+  receivedAt: number | null;
 }
 
 const DEBOUNCE_MS = 30;
 /** A running solve older than this is abandoned (worker restarted) when newer work is waiting. */
 const CANCEL_AFTER_MS = 400;
 
-const IDLE: PreviewState = { status: 'idle', field: null, rays: null, message: null, editedAt: null };
+const IDLE: PreviewState = { status: 'idle', field: null, rays: null, message: null, editedAt: null, sentAt: null, receivedAt: null };
 
 /** One worker, one request in flight, the newest request waiting. */
 class PreviewLink {
@@ -42,6 +45,7 @@ class PreviewLink {
   private pending: PreviewRequest | null = null;
   private staleTimer = 0;
   private editedAt = new Map<number, number>();
+  private sentAt = new Map<number, number>();
 
   constructor(private readonly update: (fn: (s: PreviewState) => PreviewState) => void) {}
 
@@ -90,6 +94,7 @@ class PreviewLink {
     }
     this.pending = null;
     this.inFlight = { id: request.id, since: performance.now() };
+    this.sentAt.set(request.id, this.inFlight.since);
     this.ensureWorker().postMessage(request, [request.velocity.buffer, request.active.buffer, request.receivers.buffer]);
   }
 
@@ -121,13 +126,14 @@ class PreviewLink {
 
   private receive(reply: PreviewReply): void {
     if (reply.id === this.latest) {
-      const editedAt = this.editedAt.get(reply.id) ?? null;
-      if (reply.kind === 'field') this.update(() => ({ status: reply.final ? 'done' : 'solving', field: reply, rays: null, message: null, editedAt }));
+      const times = { editedAt: this.editedAt.get(reply.id) ?? null, sentAt: this.sentAt.get(reply.id) ?? null, receivedAt: performance.now() };
+      if (reply.kind === 'field') this.update(() => ({ status: reply.final ? 'done' : 'solving', field: reply, rays: null, message: null, ...times }));
       else if (reply.kind === 'rays') this.update((s) => ({ ...s, status: 'done', rays: reply }));
-      else this.update(() => ({ status: 'error', field: null, rays: null, message: reply.message, editedAt }));
+      else this.update(() => ({ status: 'error', field: null, rays: null, message: reply.message, ...times }));
     }
     if (reply.final) {
       this.editedAt.delete(reply.id);
+      this.sentAt.delete(reply.id);
       this.inFlight = null;
       window.clearTimeout(this.staleTimer);
       const next = this.pending;
@@ -154,7 +160,12 @@ export function usePreview(job: PreviewJob | null): PreviewState {
       linkRef.current?.clear();
       return;
     }
-    const timer = window.setTimeout(() => linkRef.current?.request(job), linkRef.current?.busy ? DEBOUNCE_MS : 0);
+    const link = linkRef.current;
+    if (link && !link.busy) {
+      link.request(job); // idle worker: no reason to wait
+      return;
+    }
+    const timer = window.setTimeout(() => linkRef.current?.request(job), DEBOUNCE_MS);
     return () => window.clearTimeout(timer);
   }, [job]);
 
