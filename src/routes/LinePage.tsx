@@ -4,6 +4,8 @@ import { useLine } from '../api/lines';
 import { useProject } from '../api/projects';
 import type { ProjectRole } from '../api/types';
 import { ChecksTab } from '../components/line/checks/ChecksTab';
+import { ModelVersionsPanel } from '../components/line/models/ModelVersionsPanel';
+import { LineRunsPanel } from '../components/run/line/LineRunsPanel';
 import { LineTabs, TabPanel, type TabDef } from '../components/line/LineTabs';
 import { PickSetsTab } from '../components/line/picksets/PickSetsTab';
 import { StationsTab } from '../components/line/stations/StationsTab';
@@ -11,15 +13,15 @@ import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
 import { formatDate, ROLE_LABELS } from '../lib/format';
 
-type TabKey = 'stations' | 'picks' | 'checks';
-const TAB_KEYS: TabKey[] = ['stations', 'picks', 'checks'];
+type TabKey = 'stations' | 'picks' | 'checks' | 'models' | 'runs';
+const TAB_KEYS: TabKey[] = ['stations', 'picks', 'checks', 'models', 'runs'];
 
 /** Who may change field data on a line (the server's policy table decides; this only picks the view). */
 const FIELD_EDITORS: ProjectRole[] = ['geophysicist', 'field_tech'];
 
 /**
- * A survey line's field data in three tabs: its stations, its pick sets, and the quality checks
- * of one pick set. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
+ * A survey line in five tabs: its stations, its pick sets, the quality checks of one pick set,
+ * its velocity model versions, and its forward runs. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
  * so a link or a reload brings back the same view.
  */
 export function LinePage() {
@@ -64,6 +66,8 @@ export function LinePage() {
     { key: 'stations', label: 'Stations', badge: l.stations.length },
     { key: 'picks', label: 'Pick sets', badge: l.pickSets.length },
     { key: 'checks', label: 'Checks' },
+    { key: 'models', label: 'Models', badge: l.models.length },
+    { key: 'runs', label: 'Runs', badge: l.runs.length },
   ];
 
   return (
@@ -104,6 +108,16 @@ export function LinePage() {
       {visited.has('checks') && (
         <TabPanel idPrefix={idPrefix} tabKey="checks" hidden={tab !== 'checks'}>
           <ChecksTab line={l} pickSetId={pickSetId} revision={revision} canExclude={canExclude} onChoose={(id, rev) => setParams(checksSearch(id, rev))} />
+        </TabPanel>
+      )}
+      {visited.has('models') && (
+        <TabPanel idPrefix={idPrefix} tabKey="models" hidden={tab !== 'models'}>
+          <ModelVersionsPanel line={l} />
+        </TabPanel>
+      )}
+      {visited.has('runs') && (
+        <TabPanel idPrefix={idPrefix} tabKey="runs" hidden={tab !== 'runs'}>
+          <LineRunsPanel line={l} />
         </TabPanel>
       )}
     </>

@@ -7,6 +7,8 @@ import { RunProgress } from '../components/run/progress/RunProgress';
 import { RunCaution } from '../components/run/RunCaution';
 import { RunHeader } from '../components/run/RunHeader';
 import { RunResults } from '../components/run/RunResults';
+import { Disclosure } from '../components/Disclosure';
+import { StartReportForm } from '../components/reports/StartReportForm';
 
 /**
  * One forward run: live progress while it is queued or running, a plain message if it failed or
@@ -29,6 +31,13 @@ export function RunPage() {
       <RunCaution />
       {isRunActive(r.status) && <RunProgress run={r} canCancel={canStartRuns(line.data?.myRole)} />}
       {(r.status === 'failed' || r.status === 'cancelled') && <RunOutcome run={r} />}
+      {r.status === 'done' && r.stats && canStartRuns(line.data?.myRole) && (
+        <div className="mb-6">
+          <Disclosure label="Make a report of this run" testId="make-report-toggle">
+            {() => <StartReportForm runId={r.id} shotIds={r.stats!.by_shot.map((s) => s.shotId)} />}
+          </Disclosure>
+        </div>
+      )}
       {r.status === 'done' && r.stats && <RunResults run={r} stats={r.stats} line={line.data} />}
       {r.status === 'done' && !r.stats && (
         <p role="alert" className="rounded-md border border-amber-300 bg-amber-50 px-4 py-3 text-amber-900">
