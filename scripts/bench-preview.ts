@@ -59,6 +59,38 @@ async function editAndTime(page: Page, v: number): Promise<{ redrawMs: number; s
   return { redrawMs, solveMs: Number(await status.getAttribute('data-solve-ms')), contourMs: Number(await status.getAttribute('data-contour-ms')) };
 }
 
+async function dragBurst(page: Page, moves: number) {
+  step = 'drag burst';
+  await page.locator('[data-testid=layer-row-0] button[aria-pressed]').click();
+  const x = Number(await page.getByLabel('Node 3 x (m)').inputValue());
+  const z = Number(await page.getByLabel('Node 3 z (m)').inputValue());
+  const canvas = page.getByTestId('section-canvas');
+  await canvas.scrollIntoViewIfNeeded();
+  const L = JSON.parse((await canvas.getAttribute('data-layout'))!);
+  const box = (await canvas.boundingBox())!;
+  const px = (xm: number) => box.x + L.left + ((xm - L.xMin) / (L.xMax - L.xMin)) * L.width;
+  const py = (zm: number) => box.y + L.top + ((L.zMax - zm) / (L.zMax - L.zMin)) * L.height;
+  const before = await page.evaluate((m) => {
+    const w = window as unknown as { __dragTasks: number[] };
+    w.__dragTasks = [];
+    new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__dragTasks.push(e.duration))).observe({ type: 'longtask' });
+    return performance.getEntriesByName(m).length;
+  }, MEASURE);
+  await page.mouse.move(px(x), py(z));
+  await page.mouse.down();
+  for (let k = 1; k <= moves; k++) await page.mouse.move(px(x + (3 * k) / moves), py(z - (2 * Math.sin((Math.PI * k) / moves)) - k / moves));
+  await page.mouse.up();
+  const upAt = await page.evaluate(() => performance.now());
+  await page.waitForFunction(() => document.querySelector('[data-testid=preview-status]')?.getAttribute('data-status') === 'done', null, { timeout: 90_000 });
+  await page.waitForTimeout(300);
+  const after = await page.evaluate((m) => {
+    const all = performance.getEntriesByName(m);
+    const last = all.at(-1)!;
+    return { count: all.length, end: last.startTime + last.duration, tasks: (window as unknown as { __dragTasks: number[] }).__dragTasks };
+  }, MEASURE);
+  return { moves, redraws: after.count - before, settleMs: +Math.max(0, after.end - upAt).toFixed(1), longestTask: after.tasks.length ? +Math.max(...after.tasks).toFixed(1) : 0 };
+}
+
 async function main(): Promise<void> {
   const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--no-sandbox', '--disable-background-networking', '--disable-gpu'] });
   try {
@@ -99,6 +131,10 @@ async function main(): Promise<void> {
       Object.fromEntries(['rasterise', 'check', 'heatmap', 'section-draw', 'preview-dispatch', 'preview-worker', 'preview-paint'].map((k) => [k, performance.getEntriesByName(`timefield:${k}`).slice(-n).map((e) => e.duration)])),
     RUNS);
 
+    // A continuous drag of an interface node: 40 pointer moves, each a new model. Solves are not
+    // queued one per move: while one runs only the newest model waits, so the page keeps up.
+    const drag = await dragBurst(page, 40);
+
     await page.getByTestId('preview-rays').check();
     await page.waitForFunction(() => document.querySelector('[data-testid=preview-status]')?.getAttribute('data-status') === 'done', null, { timeout: 90_000 });
     const withRays: number[] = [];
@@ -130,6 +166,10 @@ async function main(): Promise<void> {
       median_section_draw_ms: +quantile(parts['section-draw'], 0.5).toFixed(1),
       longest_main_thread_task_ms: longTasks.length ? +Math.max(...longTasks).toFixed(1) : 0,
       long_tasks_over_50ms: longTasks.length,
+      drag_moves: drag.moves,
+      drag_wavefront_redraws: drag.redraws,
+      drag_release_to_final_redraw_ms: drag.settleMs,
+      drag_longest_main_thread_task_ms: drag.longestTask,
       median_with_rays_roundtrip_ms: +quantile(withRays, 0.5).toFixed(1),
     };
     if (values.json) console.log(JSON.stringify(result));
@@ -140,6 +180,7 @@ async function main(): Promise<void> {
       console.log(`  in the worker: solve and receiver times median ${result.median_worker_solve_ms} ms, wavefront contours ${result.median_worker_contour_ms} ms`);
       console.log(`  main thread per edit (medians): rasterise ${result.median_rasterise_ms} ms, checks ${result.median_check_ms} ms, heatmap ${result.median_heatmap_ms} ms, section draw ${result.median_section_draw_ms} ms`);
       console.log(`  main thread: ${result.long_tasks_over_50ms} tasks over 50 ms, longest ${result.longest_main_thread_task_ms} ms`);
+      console.log(`  drag of a node, ${result.drag_moves} moves: ${result.drag_wavefront_redraws} wavefront redraws, release → final redraw ${result.drag_release_to_final_redraw_ms} ms, longest main-thread task ${result.drag_longest_main_thread_task_ms} ms`);
       console.log(`  with rays (seen from the test driver, including its own round trips): median ${result.median_with_rays_roundtrip_ms} ms`);
     }
   } catch (err) {
