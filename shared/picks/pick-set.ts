@@ -10,7 +10,9 @@ export interface PickSetConflict {
   message: string;
 }
 
-type ReceiverIndex = Map<number, { z: number | null; line: number }[]>;
+/** Picks by receiver x: the first pick itself (no extra allocation), or a list when one x has several z. */
+type ReceiverIndex = Map<number, Pick | Pick[]>;
+const NONE: readonly PickSetConflict[] = [];
 
 const zText = (z: number | null): string => (z === null ? 'on the surface' : String(z));
 
@@ -21,8 +23,8 @@ export class PickSetTracker {
   constructor(private readonly unit: 'line' | 'row' = 'line') {}
 
   /** Records the pick and returns what it conflicts with (empty when it fits). */
-  add(p: Pick): PickSetConflict[] {
-    const conflicts: PickSetConflict[] = [];
+  add(p: Pick): readonly PickSetConflict[] {
+    let conflicts: PickSetConflict[] | null = null;
     let shot = this.shots.get(p.shotId);
     if (!shot) {
       shot = { shotId: p.shotId, sourceX: p.sourceX, sourceZ: p.sourceZ, picks: 1, line: p.line, receivers: new Map() };
@@ -30,25 +32,27 @@ export class PickSetTracker {
     } else {
       shot.picks++;
       if (shot.sourceX !== p.sourceX) {
-        conflicts.push({ column: 'source_x', message: `shot ${p.shotId} has source_x = ${shot.sourceX} on ${this.unit} ${shot.line} but ${p.sourceX} here; all picks of a shot share one source position` });
+        (conflicts ??= []).push({ column: 'source_x', message: `shot ${p.shotId} has source_x = ${shot.sourceX} on ${this.unit} ${shot.line} but ${p.sourceX} here; all picks of a shot share one source position` });
       }
       if (shot.sourceZ !== p.sourceZ) {
-        conflicts.push({ column: 'source_z', message: `shot ${p.shotId} has source_z ${zText(shot.sourceZ)} on ${this.unit} ${shot.line} but ${zText(p.sourceZ)} here; all picks of a shot share one source position` });
+        (conflicts ??= []).push({ column: 'source_z', message: `shot ${p.shotId} has source_z ${zText(shot.sourceZ)} on ${this.unit} ${shot.line} but ${zText(p.sourceZ)} here; all picks of a shot share one source position` });
       }
     }
-    // Receivers keyed by x (a number key, no string building), then a short list of z values.
-    let atX = shot.receivers.get(p.receiverX);
-    if (!atX) {
-      atX = [];
-      shot.receivers.set(p.receiverX, atX);
-    }
-    const first = atX.find((r) => r.z === p.receiverZ);
-    if (first) {
-      conflicts.push({ column: 'receiver_x', message: `shot ${p.shotId} already has a pick at receiver_x = ${p.receiverX}, receiver_z ${zText(p.receiverZ)} (${this.unit} ${first.line}); duplicate pick` });
+    // Receivers keyed by x (a number key, no string building), then by z.
+    const prev = shot.receivers.get(p.receiverX);
+    if (prev === undefined) {
+      shot.receivers.set(p.receiverX, p);
     } else {
-      atX.push({ z: p.receiverZ, line: p.line });
+      const list = Array.isArray(prev) ? prev : [prev];
+      const first = list.find((q) => q.receiverZ === p.receiverZ);
+      if (first) {
+        (conflicts ??= []).push({ column: 'receiver_x', message: `shot ${p.shotId} already has a pick at receiver_x = ${p.receiverX}, receiver_z ${zText(p.receiverZ)} (${this.unit} ${first.line}); duplicate pick` });
+      } else {
+        list.push(p);
+        if (list !== prev) shot.receivers.set(p.receiverX, list);
+      }
     }
-    return conflicts;
+    return conflicts ?? NONE;
   }
 
   /** Shots in order of first appearance. */
