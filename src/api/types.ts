@@ -1,4 +1,4 @@
-/** Shapes returned by the Timefield API (see /work/shared/API.md and the issue 2 and 4 briefs). */
+/** Shapes returned by the Timefield API (see ../shared/API.md and the issue 2 and 4 briefs). */
 import type { PickFlag, ReciprocalPair } from '../../shared/qc';
 
 export type ProjectRole = 'geophysicist' | 'field_tech' | 'lead' | 'client';

@@ -5,7 +5,7 @@
  * downloads its PDF, and is refused a draft; the admin reads each step's e-mail in the outbox; the lead
  * reads the project's audit trail. Bad input is refused in plain words (a return without a comment,
  * steps out of order). The workflow and who is mailed at each step are the contract of issue 7 and
- * /work/shared/API.md. Screenshots land in tests/e2e/screenshots/ (ignored by git) for a person to look at.
+ * ../shared/API.md. Screenshots land in tests/e2e/screenshots/ (ignored by git) for a person to look at.
  */
 import { mkdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';

@@ -2,7 +2,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { apiRequest, resetCsrfToken } from '../../../src/api/client';
 import { ApiError } from '../../../src/api/errors';
 
-// Contract under test: /work/shared/API.md — the CSRF token from GET /api/auth/csrf goes in the
+// Contract under test: ../shared/API.md — the CSRF token from GET /api/auth/csrf goes in the
 // X-CSRF-Token header of every POST, PUT, PATCH and DELETE; errors are { error, message, issues? }.
 
 type Call = { url: string; method: string; headers: Record<string, string>; body?: string };

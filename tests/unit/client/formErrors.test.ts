@@ -3,7 +3,7 @@ import { ApiError, issueField } from '../../../src/api/errors';
 import { formProblems, mergeFieldErrors } from '../../../src/lib/formErrors';
 import { roleSummary } from '../../../src/lib/format';
 
-// Issue paths follow /work/shared/API.md ("layers[1].base[3]"); zod also reports array paths.
+// Issue paths follow ../shared/API.md ("layers[1].base[3]"); zod also reports array paths.
 // Which input owns an issue is our own rule (first path segment): common practice, no source.
 
 describe('issueField', () => {
