@@ -11,17 +11,11 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, demoLine, demoProject } from '../../fixtures/demo/scenario';
 import { launchBrowser, SCREENSHOT_DIR, startDemoServer, type E2eServer } from './support/server';
+import { signIn } from './support/page';
 
 const BAD_FILE = path.resolve('fixtures/picks/non-numeric.picks.csv');
 const DEMO_PICKS = path.resolve('fixtures/demo/tq-l1.picks.csv');
 
-async function signIn(page: Page, baseUrl: string, email: string) {
-  await page.goto(`${baseUrl}/signin`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByLabel('Password').press('Enter');
-  await page.getByTestId('user-menu').waitFor();
-}
 
 /** From the projects list to the demo line, the way a user gets there. */
 async function openDemoLine(page: Page) {

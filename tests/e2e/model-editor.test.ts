@@ -12,14 +12,8 @@ import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, demoLine, demoProject } from '../../fixtures/demo/scenario';
 import { launchBrowser, SCREENSHOT_DIR, startDemoServer, type E2eServer } from './support/server';
+import { signIn } from './support/page';
 
-async function signIn(page: Page, baseUrl: string, email: string) {
-  await page.goto(`${baseUrl}/signin`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByLabel('Password').press('Enter');
-  await page.getByTestId('user-menu').waitFor();
-}
 
 /** The line's address, found the way a person would: through the project page. */
 async function lineUrl(page: Page): Promise<string> {

@@ -14,30 +14,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, demoLine, demoProject } from '../../fixtures/demo/scenario';
 import { startWorker, waitFor, type WorkerProcess } from '../api/support/worker';
 import { launchBrowser, SCREENSHOT_DIR, startDemoServer, type E2eServer } from './support/server';
+import { api, signIn } from './support/page';
 
-async function signIn(page: Page, baseUrl: string, email: string) {
-  await page.goto(`${baseUrl}/signin`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByLabel('Password').press('Enter');
-  await page.getByTestId('user-menu').waitFor();
-}
 
-/** A JSON call from inside the signed-in page (same cookies, the session's CSRF token). */
-async function api(page: Page, method: string, url: string, body?: unknown): Promise<{ status: number; body: Record<string, unknown> }> {
-  return page.evaluate(
-    async ({ method, url, body }) => {
-      const token = ((await (await fetch('/api/auth/csrf')).json()) as { token: string }).token;
-      const res = await fetch(url, {
-        method,
-        headers: { 'Content-Type': 'application/json', 'X-CSRF-Token': token },
-        body: body === undefined ? undefined : JSON.stringify(body),
-      });
-      return { status: res.status, body: (await res.json().catch(() => ({}))) as Record<string, unknown> };
-    },
-    { method, url, body },
-  );
-}
 
 describe('reports: review workflow, client delivery, outbox and audit trail in the browser', () => {
   let server: E2eServer;
