@@ -1,6 +1,6 @@
 import { memo, useMemo } from 'react';
 import { axisStyle, CHART_FONT } from '../plot/chartTheme';
-import { LazyPlot } from '../plot/LazyPlot';
+import { LazyPlot } from '../../plot/LazyPlot';
 import { chartTraces, fitAnnotations, type ChartInput } from './chartTraces';
 
 export interface TravelTimeChartProps extends ChartInput {

@@ -1,6 +1,6 @@
 import type { Station } from '../../../api/types';
 import { axisStyle, CHART_FONT } from '../plot/chartTheme';
-import { LazyPlot } from '../plot/LazyPlot';
+import { LazyPlot } from '../../plot/LazyPlot';
 
 /** The ground surface the stations describe: elevation against chainage, one marker per station. */
 export function ElevationProfile({ stations }: { stations: Station[] }) {

@@ -1,52 +1,15 @@
-import { Component, lazy, Suspense, type ComponentProps, type ReactNode } from 'react';
+import { LazyPlot, preloadCharts, type PlotProps } from '../../plot/LazyPlot';
 
-const loadChart = () => import('./RunPlotlyChart');
-const RunPlotlyChart = lazy(loadChart);
+/** The run pages load the chart library ahead, while the browser is idle. */
+export const preloadRunCharts = preloadCharts;
 
-/**
- * Fetch and evaluate the chart library while the browser is idle, so the first chart tab opens
- * without the multi-second wait for ~5 MB of script. Safe to call more than once.
- */
-export function preloadRunCharts(): void {
-  const start = () => void loadChart().catch(() => undefined); // a failure shows later, in ChartBoundary
-  if ('requestIdleCallback' in window) window.requestIdleCallback(start, { timeout: 5000 });
-  else setTimeout(start, 2000);
-}
+export type RunPlotProps = PlotProps;
 
-export type RunPlotProps = ComponentProps<typeof RunPlotlyChart>;
-
-/** If the chart library cannot load (offline, stale deployment), say so rather than leave a hole. */
-class ChartBoundary extends Component<{ children: ReactNode }, { failed: boolean }> {
-  state = { failed: false };
-  static getDerivedStateFromError() {
-    return { failed: true };
-  }
-  render() {
-    if (this.state.failed)
-      return (
-        <p role="alert" className="rounded-md border border-amber-300 bg-amber-50 px-4 py-3 text-amber-900">
-          The chart could not be drawn. Reload the page to try again; the residual table still holds every number.
-        </p>
-      );
-    return this.props.children;
-  }
-}
-
-/** A plotly chart loaded on first use, with a quiet placeholder of the same height meanwhile. */
+/** A lazily loaded plotly chart with an accessible name for the figure. */
 export function RunPlot({ height, label, ...props }: RunPlotProps & { height: number; label: string }) {
   return (
-    <ChartBoundary>
-      <Suspense
-        fallback={
-          <div role="status" style={{ height }} className="flex items-center justify-center rounded-lg border border-stone-200 bg-white text-stone-600">
-            Loading the chart…
-          </div>
-        }
-      >
-        <div role="img" aria-label={label}>
-          <RunPlotlyChart useResizeHandler style={{ width: '100%', height }} {...props} />
-        </div>
-      </Suspense>
-    </ChartBoundary>
+    <div role="img" aria-label={label}>
+      <LazyPlot height={height} {...props} />
+    </div>
   );
 }

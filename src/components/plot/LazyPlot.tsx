@@ -1,6 +1,17 @@
 import { Component, lazy, Suspense, type ComponentProps, type ReactNode } from 'react';
 
-const PlotlyChart = lazy(() => import('./PlotlyChart'));
+const loadChart = () => import('./PlotlyChart');
+const PlotlyChart = lazy(loadChart);
+
+/**
+ * Fetch and evaluate the chart library while the browser is idle, so the first chart opens
+ * without the multi-second wait for ~5 MB of script. Safe to call more than once.
+ */
+export function preloadCharts(): void {
+  const start = () => void loadChart().catch(() => undefined); // a failure shows later, in ChartBoundary
+  if ('requestIdleCallback' in window) window.requestIdleCallback(start, { timeout: 5000 });
+  else setTimeout(start, 2000);
+}
 
 export type PlotProps = ComponentProps<typeof PlotlyChart>;
 
@@ -14,7 +25,7 @@ class ChartBoundary extends Component<{ children: ReactNode }, { failed: boolean
     if (this.state.failed)
       return (
         <p role="alert" className="rounded-md border border-amber-300 bg-amber-50 px-4 py-3 text-amber-900">
-          The chart could not be drawn. Reload the page to try again; the tables below still hold every number.
+          The chart could not be drawn. Reload the page to try again; the tables still hold every number.
         </p>
       );
     return this.props.children;
