@@ -3,8 +3,11 @@
  * object per case per line (FORMATS.md §3). Options: --quick (two smallest sizes, fewer
  * repeats), --case <text> (only cases whose name contains it), --repeats <n>.
  * Single thread; speed is the median wall time of repeated solves after one warm-up solve.
+ * The table ends with a calibration: the engine timed alternately with a plain fast-marching
+ * solver, a cost ratio that stays put while the machine's speed drifts.
  */
 import { dippingCase, gradientCase, homogeneousCase, SIZES, twoLayerCase, type BenchCase } from './bench/cases';
+import { calibrate } from './bench/calibrate';
 import { runCase, type BenchResult } from './bench/measure';
 
 interface Args {
@@ -39,7 +42,7 @@ function repeatsFor(c: BenchCase, args: Args): number {
   if (args.repeats) return args.repeats;
   const n = c.grid.nx * c.grid.nz;
   if (args.quick) return 3;
-  return n <= 100_000 ? 9 : n <= 300_000 ? 5 : 3;
+  return n <= 100_000 ? 15 : n <= 300_000 ? 9 : 5;
 }
 
 function* cases(args: Args): Generator<BenchCase> {
@@ -86,6 +89,20 @@ function main(): void {
         printRow(r);
       }
     }
+  }
+  if (!args.json && !args.filter) printCalibration(args.quick);
+}
+
+function printCalibration(quick: boolean): void {
+  const c = gradientCase(...(quick ? SIZES[1] : SIZES[2]));
+  console.log(`\nCalibration on ${c.name}: engine and a plain first-order fast marcher (binary heap), timed alternately`);
+  for (const order of [1, 2] as const) {
+    const k = calibrate(c, order, quick ? 5 : 15);
+    const plainRate = (c.grid.nx * c.grid.nz) / k.plainSeconds / 1e6;
+    console.log(
+      `  order ${order}: engine ${(k.engineSeconds * 1000).toFixed(1)} ms, plain ${(k.plainSeconds * 1000).toFixed(1)} ms ` +
+        `(${plainRate.toFixed(2)} Mnodes/s); engine costs ${k.costRatio.toFixed(2)}× the plain solve`,
+    );
   }
 }
 

@@ -49,6 +49,15 @@ export function cellSlowness(
   const count = ncx * (nz - 1);
   const value = out && out.value.length === count ? out.value : new Float64Array(count);
   const contrast = out && out.contrast.length === count ? out.contrast : new Uint8Array(count);
+  fillCells(grid, slowness, active, rule, ratio, value, contrast);
+  if (rule === 'staircase') refineStaircase(grid, slowness, active, value, contrast, ratio);
+  return { value, contrast };
+}
+
+/** One pass over the cells (its own function so it is compiled whole, not on the fly per call). */
+function fillCells(grid: Grid, slowness: Float64Array, active: Uint8Array, rule: InterfaceRule, ratio: number, value: Float64Array, contrast: Uint8Array): void {
+  const { nx, nz } = grid;
+  const ncx = nx - 1;
   for (let cz = 0; cz < nz - 1; cz++) {
     for (let cx = 0; cx < ncx; cx++) {
       const c = cz * ncx + cx;
@@ -102,7 +111,4 @@ export function cellSlowness(
       else value[c] = mean;
     }
   }
-  if (rule === 'staircase') refineStaircase(grid, slowness, active, value, contrast, ratio);
-  return { value, contrast };
 }
-

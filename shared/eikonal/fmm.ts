@@ -65,13 +65,7 @@ export class TravelTimeSolver {
     const S = this.slow;
     const F = this.packed;
     const state = this.state;
-    for (let i = 0; i < n; i++) {
-      const si = active[i] ? 1 / velocity[i] : Infinity;
-      S[i] = si;
-      F[3 * i] = Infinity;
-      F[3 * i + 2] = si;
-      state[i] = active[i] ? FAR : AIR;
-    }
+    resetNodes(velocity, active, S, F, state);
 
     this.cells = cellSlowness(grid, S, active, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, this.cells);
     const cellS = this.cells.value;
@@ -88,8 +82,6 @@ export class TravelTimeSolver {
       heap.pushOrDecrease(i, start.times[k]);
       state[i] = TRIAL;
     }
-    let anyContrast = false;
-    for (let c = 0; c < cellC.length && !anyContrast; c++) anyContrast = cellC[c] !== 0;
     march({
       nx, nz, dx, dz, x0, z0, xs, zs,
       s0: start.slowness,
@@ -99,13 +91,32 @@ export class TravelTimeSolver {
       factored,
       second: order === 2,
       ratio,
-      anyContrast,
+      anyContrast: cellC.indexOf(1) >= 0,
       F, state, cellS, cellC, heap,
       safe: this.safe,
     });
-    for (let i = 0; i < n; i++) T[i] = F[3 * i];
+    copyTimes(F, T);
     return T;
   }
+}
+
+// The per-node passes live in their own small functions: a loop inside solve() itself is compiled
+// on the fly (on-stack replacement) and that code is thrown away again on every call, leaving the
+// rest of the solve to the interpreter (seen with node --trace-deopt).
+
+/** Slowness per node and the march's start state: every ground node far, air inactive. */
+function resetNodes(velocity: VelocityField, active: Uint8Array, S: Float64Array, F: Float64Array, state: Uint8Array): void {
+  for (let i = 0; i < S.length; i++) {
+    const si = active[i] ? 1 / velocity[i] : Infinity;
+    S[i] = si;
+    F[3 * i] = Infinity;
+    F[3 * i + 2] = si;
+    state[i] = active[i] ? FAR : AIR;
+  }
+}
+
+function copyTimes(F: Float64Array, T: Float64Array): void {
+  for (let i = 0; i < T.length; i++) T[i] = F[3 * i];
 }
 
 /** Travel times (s) from `source` on `grid`; Infinity at air nodes. Throws EikonalInputError on bad input. */
