@@ -79,6 +79,7 @@ export class TravelTimeSolver {
     for (let k = 0; k < start.nodes.length; k++) {
       const i = start.nodes[k];
       F[3 * i] = start.times[k];
+      F[3 * i + 1] = Math.hypot(x0 + (i % nx) * dx - xs, z0 - Math.floor(i / nx) * dz - zs); // r, as march keeps it
       heap.pushOrDecrease(i, start.times[k]);
       state[i] = TRIAL;
     }

@@ -34,7 +34,8 @@ export interface MarchState {
   anyContrast: boolean;
   /**
    * Per node, interleaved so one cache line serves a node's three reads: F[3i] = T (travel time,
-   * the heap key), F[3i+1] = U (T/r factored, or T plain; set on acceptance), F[3i+2] = slowness.
+   * the heap key), F[3i+1] = U (T/r factored, or T plain; set on acceptance; before that, in the
+   * factored scheme, the node's distance r to the source), F[3i+2] = slowness.
    */
   F: Float64Array;
   state: Uint8Array;
@@ -71,9 +72,7 @@ export function march(m: MarchState): void {
     const pix = p - piz * nx;
     const Tp = F[3 * p];
     if (factored) {
-      const ox = x0 + pix * dx - xs;
-      const oz = z0 - piz * dz - zs;
-      const r = Math.sqrt(ox * ox + oz * oz);
+      const r = F[3 * p + 1]; // a trial node keeps its distance to the source in the U slot
       F[3 * p + 1] = r > 0 ? Tp / r : s0;
     } else {
       F[3 * p + 1] = Tp;
@@ -90,7 +89,8 @@ export function march(m: MarchState): void {
       if (qix < 0 || qix >= nx || qiz < 0 || qiz >= nz) continue;
       const step = alongX ? sgn : sgn * nx; // index offset p → q
       const q = p + step;
-      if ((state[q] & KIND) >= DONE) continue;
+      const kindQ = state[q] & KIND;
+      if (kindQ >= DONE) continue;
 
       const xq = x0 + qix * dx;
       const zq = z0 - qiz * dz;
@@ -101,7 +101,13 @@ export function march(m: MarchState): void {
         const ox = xq - xs;
         const oz = zq - zs;
         const r2 = ox * ox + oz * oz;
-        rq = Math.sqrt(r2);
+        // The distance is worked out on a node's first visit and kept in its U slot until acceptance.
+        if (kindQ === FAR) {
+          rq = Math.sqrt(r2);
+          F[3 * q + 1] = rq;
+        } else {
+          rq = F[3 * q + 1];
+        }
         const inv2 = 1 / r2;
         ex = ox * inv2;
         ez = oz * inv2;
