@@ -24,7 +24,7 @@ const model = {
 const raster = rasteriseModel(model);
 const { grid, velocity, active } = raster;
 const source = { x: 20, z: raster.surfaceZ(20) };
-const times = solveTravelTimes(grid, velocity, active, source, { order: 2 });
+const times = solveTravelTimes(grid, velocity, active, source, { order: 2, cellSlowness: raster.cellSlowness });
 
 const xs = Array.from({ length: grid.nx }, (_, i) => grid.x0 + i * grid.dx);
 const zs = Array.from({ length: grid.nz }, (_, i) => grid.z0 - i * grid.dz);

@@ -115,7 +115,7 @@ async function main(argv: string[]): Promise<void> {
   let solved;
   try {
     await pool.warmUp();
-    solved = await pool.solveAll(raster.grid, raster.velocity, raster.active, shots, opts.order);
+    solved = await pool.solveAll(raster.grid, raster, shots, opts.order);
   } catch (err) {
     if (err instanceof ShotSolveError) throw new InputError(`shot ${shots[err.jobIndex].shotId}: ${err.message}`);
     throw err;

@@ -5,6 +5,7 @@
  * layer below.
  */
 import type { Grid } from '../../shared/grid';
+import { parseModelFile, rasteriseModel } from '../../shared/model';
 import type { Point } from '../../shared/eikonal';
 import { dippingSurfaceTime, gradientRayMaxDepth, gradientTime, homogeneousTime, twoLayerSurfaceTime } from './exact';
 
@@ -16,6 +17,8 @@ export interface BenchCase {
   source: Point;
   /** Exact first-arrival time at node (ix, iz), or NaN when the node is not measured. */
   exact: (ix: number, iz: number) => number;
+  /** Cases built by the layered rasteriser: its cell slownesses, passed to the solver as the product does. */
+  cellSlowness?: Float64Array;
 }
 
 /** Width of the homogeneous and gradient models (m); spacing = WIDTH / (nx − 1), square cells. */
@@ -98,6 +101,37 @@ export function twoLayerCase(depth: number = TWO_LAYER.depth, sourceX = 0): Benc
     source,
     exact: (ix, iz) =>
       iz === 0 && farFromSource(grid, source, ix, iz) ? twoLayerSurfaceTime(v1, v2, depth, ix * h - source.x) : NaN,
+  };
+}
+
+/**
+ * The flat refractor drawn between two node rows (10.2 m on 0.5 m rows), built as a layered model
+ * file through the rasteriser: point samples alone would put it on the 10.5 m row.
+ */
+export function twoLayerBetweenRowsCase(depth = 10.2): BenchCase {
+  const { v1, v2, spacing: h, width, bottom } = TWO_LAYER;
+  const nx = Math.round(width / h) + 1;
+  const nz = Math.round(bottom / h) + 1;
+  const parsed = parseModelFile({
+    format: 'timefield-model/1',
+    grid: { x0: 0, dx: h, nx, z0: 0, dz: h, nz },
+    layers: [
+      { name: 'slow', base: [[0, -depth], [width, -depth]], v_top: v1, v_base: v1 },
+      { name: 'fast', v_top: v2, v_base: v2 },
+    ],
+  });
+  if (!parsed.ok) throw new Error(`bench model is invalid: ${JSON.stringify(parsed.issues)}`);
+  const raster = rasteriseModel(parsed.model);
+  const source = { x: 0, z: 0 };
+  return {
+    name: `two-layer-${depth}m-${nx}x${nz}`,
+    grid: raster.grid,
+    velocity: raster.velocity,
+    active: raster.active,
+    cellSlowness: raster.cellSlowness,
+    source,
+    exact: (ix, iz) =>
+      iz === 0 && farFromSource(raster.grid, source, ix, iz) ? twoLayerSurfaceTime(v1, v2, depth, ix * h - source.x) : NaN,
   };
 }
 

@@ -35,7 +35,8 @@ export function errors(c: BenchCase, times: Float64Array): { max: number; mean: 
   return { max, mean: count ? sum / count : NaN, count };
 }
 
-export function runCase(c: BenchCase, options: MarchOptions & { order: 1 | 2 }, repeats: number): BenchResult {
+export function runCase(c: BenchCase, caseOptions: MarchOptions & { order: 1 | 2 }, repeats: number): BenchResult {
+  const options = { ...caseOptions, cellSlowness: c.cellSlowness };
   const solver = new TravelTimeSolver(c.grid);
   const out = new Float64Array(c.grid.nx * c.grid.nz);
   // Warm-up until the optimising compiler has settled: at least 3 solves and 0.2 s.

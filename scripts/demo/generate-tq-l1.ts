@@ -55,7 +55,7 @@ const raster = rasteriseModel(parsed.model);
 const rows = ['shot_id,source_x,source_z,receiver_x,receiver_z,time_ms,sigma_ms'];
 for (const [shotId, sx] of SHOTS) {
   const source = { x: sx, z: raster.surfaceZ(sx) };
-  const times = solveTravelTimes(raster.grid, raster.velocity, raster.active, source, { order: 2 });
+  const times = solveTravelTimes(raster.grid, raster.velocity, raster.active, source, { order: 2, cellSlowness: raster.cellSlowness });
   for (const s of stations) {
     const atSource = Math.abs(s.x - sx) < 1e-9;
     const t = atSource ? 0 : sampleTime(raster.grid, times, raster.active, { x: s.x, z: raster.surfaceZ(s.x) }) * 1000;

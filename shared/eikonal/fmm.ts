@@ -11,12 +11,12 @@
  * nodes; otherwise first order (Rickett & Fomel 1999, SEP Report 100).
  */
 import type { Grid } from '../grid';
-import { cellSlowness, type CellSlowness, CONTRAST_RATIO, DEFAULT_INTERFACE_RULE, type InterfaceRule } from './cells';
+import { applyKnownCells, cellSlowness, type CellSlowness, CONTRAST_RATIO, DEFAULT_INTERFACE_RULE, type InterfaceRule } from './cells';
 import { IndexedMinHeap } from './heap';
 import { startTimes } from './source';
 import { AIR, FAR, march, TRIAL } from './march';
 import type { Point, SolveOptions, VelocityField } from './types';
-import { validateGrid, validateSolveInput } from './validate';
+import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
 
 /** Knobs beyond the public options, for the benchmark's measurements. Defaults are the chosen ones. */
 export interface MarchOptions extends SolveOptions {
@@ -56,6 +56,7 @@ export class TravelTimeSolver {
   solve(velocity: VelocityField, active: Uint8Array, source: Point, options: MarchOptions = {}, out?: Float64Array): Float64Array {
     const grid = this.grid;
     validateSolveInput(grid, velocity, active, source);
+    if (options.cellSlowness) validateCellSlowness(grid, options.cellSlowness);
     const { nx, nz, dx, dz, x0, z0 } = grid;
     const n = nx * nz;
     const order = options.order ?? 2;
@@ -68,6 +69,7 @@ export class TravelTimeSolver {
     resetNodes(velocity, active, S, F, state);
 
     this.cells = cellSlowness(grid, S, active, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, this.cells);
+    if (options.cellSlowness) applyKnownCells(this.cells, options.cellSlowness);
     const cellS = this.cells.value;
     const cellC = this.cells.contrast;
     const heap = this.heap;

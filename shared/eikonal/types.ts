@@ -7,6 +7,13 @@ export interface Point {
 /** Options of the public solve. order 2 (default) is the mixed second-order scheme, 1 the first-order upwind one. */
 export interface SolveOptions {
   order?: 1 | 2;
+  /**
+   * Mean slowness (s/m) of cells an interface crosses, index cz·(nx−1)+cx, NaN where unknown
+   * (the layered rasteriser's RasterModel.cellSlowness). Used on the cells the solver finds a
+   * contrast in, in place of its own rule, which can only guess where between two node rows an
+   * interface lies.
+   */
+  cellSlowness?: Float64Array;
 }
 
 /** Node velocities as either precision; solves always run in Float64. */

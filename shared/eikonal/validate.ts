@@ -50,3 +50,16 @@ export function validateSolveInput(grid: Grid, velocity: VelocityField, active: 
   // locateSourceCell throws the "outside the grid" and "in the air" messages.
   locateSourceCell(grid, active, source);
 }
+
+/** Known cell slownesses: one per cell, each positive and finite or NaN (unknown). */
+export function validateCellSlowness(grid: Grid, cells: Float64Array): void {
+  const count = (grid.nx - 1) * (grid.nz - 1);
+  if (cells.length !== count) {
+    throw new EikonalInputError(`cell slowness has ${fmt(cells.length)} values; the grid has (nx − 1) × (nz − 1) = ${fmt(count)} cells`);
+  }
+  for (let c = 0; c < count; c++) {
+    const s = cells[c];
+    if (Number.isNaN(s) || (s > 0 && s < Infinity)) continue;
+    throw new EikonalInputError(`cell slowness ${c} is ${s} s/m; it must be positive and finite, or NaN for unknown`);
+  }
+}

@@ -16,11 +16,14 @@
  * - Air (z > surface): active = 0; velocity copied from the topmost ground node of the
  *   column, so interpolation across the surface stays finite. Solvers ignore those values.
  * - Edits ({ix, iz, v}) are painted after the layers (or raw grid), on ground nodes only.
- * Consequence: an interface is resolved to the row spacing dz. With the current solver an
- * interface between two node rows acts as if it lay on the lower row (tests/references/model).
+ * - Cells an interface crosses also get their mean slowness from samples inside the cell
+ *   (cellSlowness), which the solver uses at contrasts: the node values alone place an interface
+ *   between two rows only to within dz.
  */
 import { nodeX, nodeZ, type Grid } from '../grid';
 import type { ModelFile, ModelLayer } from '../schemas/model';
+import { interfaceCellSlowness } from './cell-slowness';
+import { layerColumnAt, layerIndexAt, layerVelocityAt, newLayerColumn } from './layer-column';
 import { evalPolyline } from './polyline';
 
 export interface RasterModel {
@@ -31,6 +34,12 @@ export interface RasterModel {
   active: Uint8Array;
   /** Ground elevation (m) at x: the surface polyline, or z0 when the file has none. */
   surfaceZ(x: number): number;
+  /**
+   * Layered models only: mean slowness (s/m) of each cell a layer interface crosses, sampled
+   * inside the cell (cell-slowness.ts); NaN for other cells. Index cz·(nx−1)+cx. The solver uses
+   * it where it sees a velocity contrast, so an interface between node rows acts where it is drawn.
+   */
+  cellSlowness?: Float64Array;
 }
 
 export function rasteriseModel(model: ModelFile): RasterModel {
@@ -42,45 +51,40 @@ export function rasteriseModel(model: ModelFile): RasterModel {
   const active = new Uint8Array(nx * nz);
   const eps = 1e-6 * dz;
 
+  const layerOf = new Int32Array(model.layers ? nx * nz : 0);
+
   if (model.velocity) velocity.set(model.velocity);
   for (let ix = 0; ix < nx; ix++) {
     const x = nodeX(grid, ix);
     const zSurf = surfaceZ(x);
-    if (model.layers) fillLayerColumn(grid, model.layers, ix, zSurf, eps, velocity);
+    if (model.layers) fillLayerColumn(grid, model.layers, ix, zSurf, eps, velocity, layerOf);
     for (let iz = 0; iz < nz; iz++) active[iz * nx + ix] = nodeZ(grid, iz) <= zSurf + eps ? 1 : 0;
   }
   for (const edit of model.edits ?? []) {
     const i = edit.iz * nx + edit.ix;
-    if (active[i]) velocity[i] = edit.v;
+    if (!active[i]) continue;
+    velocity[i] = edit.v;
+    if (model.layers) layerOf[i] = -1; // painted: no longer the layered model's value
   }
   fillAirFromBelow(grid, active, velocity);
-  return { grid, velocity, active, surfaceZ };
+  const cellSlowness = model.layers ? interfaceCellSlowness(grid, model.layers, surfaceZ, layerOf, active) : undefined;
+  return { grid, velocity, active, surfaceZ, cellSlowness };
 }
 
-/** Velocities of one column ix from the layer list; nodes above the surface get extrapolated values, overwritten later. */
-function fillLayerColumn(grid: Grid, layers: ModelLayer[], ix: number, zSurf: number, eps: number, velocity: Float32Array): void {
-  const x = nodeX(grid, ix);
-  const zBottom = nodeZ(grid, grid.nz - 1);
-  const last = layers.length - 1;
-  // tops[k], bases[k]: clipped interfaces of layer k at this x.
-  const tops = new Float64Array(layers.length);
-  const bases = new Float64Array(layers.length);
-  let top = zSurf;
-  for (let k = 0; k <= last; k++) {
-    const base = layers[k].base;
-    const b = k < last && base ? Math.min(evalPolyline(base, x), top) : zBottom;
-    tops[k] = top;
-    bases[k] = b;
-    top = b;
-  }
+/**
+ * Velocities of one column ix from the layer list, and each node's layer index; nodes above the
+ * surface get extrapolated values, overwritten later.
+ */
+function fillLayerColumn(grid: Grid, layers: ModelLayer[], ix: number, zSurf: number, eps: number, velocity: Float32Array, layerOf: Int32Array): void {
+  const col = newLayerColumn(layers.length);
+  layerColumnAt(layers, nodeX(grid, ix), zSurf, nodeZ(grid, grid.nz - 1), col);
   let k = 0;
   for (let iz = 0; iz < grid.nz; iz++) {
     const z = nodeZ(grid, iz);
-    while (k < last && z <= bases[k] + eps) k++; // on an interface → layer below
-    const thickness = tops[k] - bases[k];
-    const frac = thickness > eps ? Math.min(1, Math.max(0, (tops[k] - z) / thickness)) : 0;
-    const { v_top, v_base } = layers[k];
-    velocity[iz * grid.nx + ix] = v_top + (v_base - v_top) * frac;
+    k = layerIndexAt(col, z, eps, k);
+    const i = iz * grid.nx + ix;
+    velocity[i] = layerVelocityAt(layers[k], col, k, z, eps);
+    layerOf[i] = k;
   }
 }
 

@@ -2,7 +2,7 @@
  * One shot's preview, without any browser API so tests run it as is: the travel-time field by
  * the shared fast-marching solver, the times at the receivers sampled exactly as the solve
  * command's thread task does (worker/threads/solve-shot.ts: TravelTimeSolver.solve with the
- * order, then sampleTime at each receiver), wavefront contours, and on request the rays.
+ * order and the model's cell slownesses, then sampleTime at each receiver), wavefront contours, and on request the rays.
  */
 import type { Grid } from '../../shared/grid';
 import { sampleTime, TravelTimeSolver, type Point } from '../../shared/eikonal';
@@ -13,6 +13,8 @@ export interface ShotInput {
   grid: Grid;
   velocity: Float32Array;
   active: Uint8Array;
+  /** Layered models: slowness of the cells an interface crosses (RasterModel.cellSlowness). */
+  cellSlowness?: Float64Array;
   source: Point;
   receivers: Float64Array;
   order: 1 | 2;
@@ -40,7 +42,7 @@ export class PreviewEngine {
     const { grid, velocity, active } = input;
     if (!this.solver || !sameGrid(this.solver.grid, grid)) this.solver = new TravelTimeSolver(grid);
     const t0 = performance.now();
-    const times = this.solver.solve(velocity, active, input.source, { order: input.order });
+    const times = this.solver.solve(velocity, active, input.source, { order: input.order, cellSlowness: input.cellSlowness });
     const receiverTimes = receiverTimesOf(grid, times, active, input.receivers);
     const t1 = performance.now();
     let tMax = 0;

@@ -7,6 +7,8 @@ export interface PreviewRequest {
   grid: Grid;
   velocity: Float32Array;
   active: Uint8Array;
+  /** Layered models: slowness of the cells an interface crosses (RasterModel.cellSlowness). */
+  cellSlowness?: Float64Array;
   source: Point;
   /** Receiver positions, interleaved x, z. */
   receivers: Float64Array;

@@ -16,6 +16,7 @@ import { pickIndexOf, prepareRunInputs } from '../../server/services/runInputs';
 import { HttpError } from '../../server/http/errors';
 import { workerExecArgv } from '../threads/exec-argv';
 import type { RunShotResult, RunShotTask } from '../threads/run-shot';
+import { shareModel } from '../threads/shared-model';
 import { saveRunResults, type ShotOutput } from './solveResults';
 
 export class RunCancelled extends Error {}
@@ -72,10 +73,7 @@ async function solveShots(runId: string, run: RunRow, job: Job) {
   if (!revision) throw new Error(`pick-set revision ${run.pick_set_revision} is missing`);
   const { raster, shots, excluded } = prepareRunInputs(model.model, picks, revision.exclusions.map((e) => e.index));
   const { grid } = raster;
-  const velocity = new SharedArrayBuffer(raster.velocity.byteLength);
-  new Float32Array(velocity).set(raster.velocity);
-  const active = new SharedArrayBuffer(raster.active.byteLength);
-  new Uint8Array(active).set(raster.active);
+  const shared = shareModel(raster);
   let activeNodes = 0;
   for (let i = 0; i < raster.active.length; i++) activeNodes += raster.active[i];
 
@@ -84,7 +82,7 @@ async function solveShots(runId: string, run: RunRow, job: Job) {
   let cancelled = false;
   const results = await Promise.all(
     shots.map(async (shot): Promise<ShotOutput> => {
-      const r = await threads().run({ grid, velocity, active, source: shot.source, receivers: shot.receivers, order: run.scheme_order, modelKey: run.model_id });
+      const r = await threads().run({ grid, ...shared, source: shot.source, receivers: shot.receivers, order: run.scheme_order, modelKey: run.model_id });
       if (!r.ok) throw new Error(`shot ${shot.shotId}: ${r.message}`);
       solveSeconds += r.solveSeconds;
       done++;

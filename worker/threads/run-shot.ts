@@ -7,11 +7,10 @@ import { deflateRawSync } from 'node:zlib';
 import type { Grid } from '../../shared/grid';
 import { RayTracer, sampleTime, TravelTimeSolver, type Point } from '../../shared/eikonal';
 import { simplifyPolyline } from '../../shared/geometry/simplify';
+import { viewModel, type SharedModel } from './shared-model';
 
-export interface RunShotTask {
+export interface RunShotTask extends SharedModel {
   grid: Grid;
-  velocity: SharedArrayBuffer;
-  active: SharedArrayBuffer;
   source: Point;
   /** Receiver positions, interleaved x, z (m). */
   receivers: Float64Array;
@@ -31,15 +30,14 @@ let tracer: { key: string; tracer: RayTracer } | null = null;
 export default function runShot(task: RunShotTask): RunShotResult {
   const { grid } = task;
   const n = grid.nx * grid.nz;
-  const velocity = new Float32Array(task.velocity, 0, n);
-  const active = new Uint8Array(task.active, 0, n);
+  const { velocity, active, cellSlowness } = viewModel(grid, task);
   if (!solver || solver.grid.nx !== grid.nx || solver.grid.nz !== grid.nz || solver.grid.dx !== grid.dx || solver.grid.dz !== grid.dz || solver.grid.x0 !== grid.x0 || solver.grid.z0 !== grid.z0) {
     solver = new TravelTimeSolver(grid);
     buffer = new Float64Array(n);
   }
   try {
     const t0 = performance.now();
-    const T = solver.solve(velocity, active, task.source, { order: task.order }, buffer!);
+    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness }, buffer!);
     const solveSeconds = (performance.now() - t0) / 1000;
 
     if (tracer?.key !== task.modelKey) tracer = { key: task.modelKey, tracer: new RayTracer(grid, velocity, active) };

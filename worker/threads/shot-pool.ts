@@ -12,6 +12,7 @@ import Piscina from 'piscina';
 import type { Grid } from '../../shared/grid';
 import type { Point } from '../../shared/eikonal';
 import { workerExecArgv } from './exec-argv';
+import { shareModel, type ModelArrays } from './shared-model';
 import type { SolveShotResult, SolveShotTask, WarmupTask } from './solve-shot';
 
 export interface ShotJob {
@@ -61,16 +62,13 @@ export class ShotPool {
     await Promise.all(Array.from({ length: n }, () => this.pool.run({ warmup, n })));
   }
 
-  async solveAll(grid: Grid, velocity: Float32Array, active: Uint8Array, jobs: readonly ShotJob[], order: 1 | 2): Promise<PoolSolveResult> {
-    const sharedVelocity = new SharedArrayBuffer(velocity.byteLength);
-    new Float32Array(sharedVelocity).set(velocity);
-    const sharedActive = new SharedArrayBuffer(active.byteLength);
-    new Uint8Array(sharedActive).set(active);
+  async solveAll(grid: Grid, model: ModelArrays, jobs: readonly ShotJob[], order: 1 | 2): Promise<PoolSolveResult> {
+    const shared = shareModel(model);
 
     const t0 = performance.now();
     const results = await Promise.all(
       jobs.map((job) =>
-        this.pool.run({ grid, velocity: sharedVelocity, active: sharedActive, source: job.source, receivers: job.receivers, order }),
+        this.pool.run({ grid, ...shared, source: job.source, receivers: job.receivers, order }),
       ),
     );
     const wallSeconds = (performance.now() - t0) / 1000;

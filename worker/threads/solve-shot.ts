@@ -7,13 +7,11 @@
  */
 import type { Grid } from '../../shared/grid';
 import { EikonalInputError, sampleTime, TravelTimeSolver, type Point } from '../../shared/eikonal';
+import { viewModel, type SharedModel } from './shared-model';
 
-export interface SolveShotTask {
+/** velocity (Float32 m/s per node), active (Uint8 1 ground / 0 air) and cellSlowness over shared memory. */
+export interface SolveShotTask extends SharedModel {
   grid: Grid;
-  /** Float32 m/s per node, over shared memory. */
-  velocity: SharedArrayBuffer;
-  /** Uint8 1 ground / 0 air per node, over shared memory. */
-  active: SharedArrayBuffer;
   source: Point;
   /** Receiver positions, interleaved x, z (m). */
   receivers: Float64Array;
@@ -37,15 +35,14 @@ let field: Float64Array | null = null;
 export function solveShot(task: SolveShotTask): SolveShotResult {
   const { grid } = task;
   const n = grid.nx * grid.nz;
-  const velocity = new Float32Array(task.velocity, 0, n);
-  const active = new Uint8Array(task.active, 0, n);
+  const { velocity, active, cellSlowness } = viewModel(grid, task);
   if (!solver || !sameGrid(solver.grid, grid)) {
     solver = new TravelTimeSolver(grid);
     field = new Float64Array(n);
   }
   try {
     const t0 = performance.now();
-    const T = solver.solve(velocity, active, task.source, { order: task.order }, field!);
+    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness }, field!);
     const solveSeconds = (performance.now() - t0) / 1000;
     const times = new Float64Array(task.receivers.length / 2);
     const p = { x: 0, z: 0 };

@@ -59,6 +59,7 @@ class PreviewLink {
       grid: job.raster.grid,
       velocity: job.raster.velocity.slice(),
       active: job.raster.active.slice(),
+      cellSlowness: job.raster.cellSlowness?.slice(),
       source: job.shot.source,
       receivers: job.shot.receivers.slice(),
       order: 2,
@@ -95,7 +96,9 @@ class PreviewLink {
     this.pending = null;
     this.inFlight = { id: request.id, since: performance.now() };
     this.sentAt.set(request.id, this.inFlight.since);
-    this.ensureWorker().postMessage(request, [request.velocity.buffer, request.active.buffer, request.receivers.buffer]);
+    const transfer = [request.velocity.buffer, request.active.buffer, request.receivers.buffer];
+    if (request.cellSlowness) transfer.push(request.cellSlowness.buffer);
+    this.ensureWorker().postMessage(request, transfer);
   }
 
   private cancelStale(): void {

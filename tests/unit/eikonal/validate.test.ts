@@ -90,3 +90,24 @@ describe('other entry points', () => {
     expectInputError(() => traceRay(grid, T, uniform().subarray(2), ground(), { x: 4, z: 0 }, { x: 1, z: -1 }), /velocity \(22\)/);
   });
 });
+
+describe('cell slownesses given to the solver', () => {
+  const cells = (values: number[]) => Float64Array.from(values);
+  const count = (grid.nx - 1) * (grid.nz - 1);
+
+  it('rejects the wrong number of cells', () => {
+    expectInputError(() => solveTravelTimes(grid, uniform(), ground(), { x: 1, z: -1 }, { cellSlowness: cells([NaN]) }), /cell slowness has 1 values.*15 cells/);
+  });
+  it('rejects a value that is not positive and finite, names the cell', () => {
+    const bad = new Float64Array(count).fill(NaN);
+    bad[7] = -0.001;
+    expectInputError(() => solveTravelTimes(grid, uniform(), ground(), { x: 1, z: -1 }, { cellSlowness: bad }), /cell slowness 7 is -0.001/);
+    bad[7] = Infinity;
+    expectInputError(() => solveTravelTimes(grid, uniform(), ground(), { x: 1, z: -1 }, { cellSlowness: bad }), /cell slowness 7 is Infinity/);
+  });
+  it('all NaN (nothing known) changes nothing', () => {
+    const plain = solveTravelTimes(grid, uniform(), ground(), { x: 1, z: -1 });
+    const withUnknown = solveTravelTimes(grid, uniform(), ground(), { x: 1, z: -1 }, { cellSlowness: new Float64Array(count).fill(NaN) });
+    expect(Array.from(withUnknown)).toEqual(Array.from(plain));
+  });
+});

@@ -43,7 +43,7 @@ describe('ShotPool (worker threads, loaded from the test runner)', () => {
 
   it('gives the in-process numbers, in job order', async () => {
     await pool.warmUp();
-    const res = await pool.solveAll(model.grid, model.velocity, model.active, jobs, 2);
+    const res = await pool.solveAll(model.grid, model, jobs, 2);
     expect(res.times).toHaveLength(jobs.length);
     jobs.forEach((job, k) => {
       const local = solveShot({ grid: model.grid, velocity: shared(model.velocity), active: shared(model.active), source: job.source, receivers, order: 2 });
@@ -55,7 +55,7 @@ describe('ShotPool (worker threads, loaded from the test runner)', () => {
 
   it('names the failing job', async () => {
     const bad = [...jobs, { source: { x: 20, z: 5 }, receivers }];
-    const err = await pool.solveAll(model.grid, model.velocity, model.active, bad, 1).catch((e) => e);
+    const err = await pool.solveAll(model.grid, model, bad, 1).catch((e) => e);
     expect(err).toBeInstanceOf(ShotSolveError);
     expect(err.jobIndex).toBe(4);
     expect(err.message).toMatch(/outside the model grid/);
