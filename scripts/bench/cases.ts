@@ -18,7 +18,7 @@ export interface BenchCase {
   /** Exact first-arrival time at node (ix, iz), or NaN when the node is not measured. */
   exact: (ix: number, iz: number) => number;
   /** Cases built by the layered rasteriser: its cell slownesses, passed to the solver as the product does. */
-  cellSlowness?: Float64Array;
+  cellSlowness?: Float32Array;
 }
 
 /** Width of the homogeneous and gradient models (m); spacing = WIDTH / (nx − 1), square cells. */

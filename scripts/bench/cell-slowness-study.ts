@@ -31,7 +31,7 @@ function study(depthAtX0: number, dipDeg: number): [string, string] {
   const m = rasteriseModel(parsed.model);
   const source = { x: dipDeg ? WIDTH / 2 : 0, z: 0 };
   const solver = new TravelTimeSolver(m.grid);
-  const run = (cellSlowness?: Float64Array): string => {
+  const run = (cellSlowness?: Float32Array): string => {
     const T = solver.solve(m.velocity, m.active, source, { order: 2, cellSlowness });
     let max = 0;
     let sum = 0;

@@ -13,7 +13,7 @@ export interface SolveOptions {
    * contrast in, in place of its own rule, which can only guess where between two node rows an
    * interface lies.
    */
-  cellSlowness?: Float64Array;
+  cellSlowness?: Float32Array | Float64Array;
 }
 
 /** Node velocities as either precision; solves always run in Float64. */

@@ -52,7 +52,7 @@ export function validateSolveInput(grid: Grid, velocity: VelocityField, active: 
 }
 
 /** Known cell slownesses: one per cell, each positive and finite or NaN (unknown). */
-export function validateCellSlowness(grid: Grid, cells: Float64Array): void {
+export function validateCellSlowness(grid: Grid, cells: Float32Array | Float64Array): void {
   const count = (grid.nx - 1) * (grid.nz - 1);
   if (cells.length !== count) {
     throw new EikonalInputError(`cell slowness has ${fmt(cells.length)} values; the grid has (nx − 1) × (nz − 1) = ${fmt(count)} cells`);

@@ -38,10 +38,10 @@ export function interfaceCellSlowness(
   surfaceZ: (x: number) => number,
   layerOf: Int32Array,
   active: Uint8Array,
-): Float64Array {
+): Float32Array {
   const { nx, nz, dx, dz } = grid;
   const ncx = nx - 1;
-  const out = new Float64Array(ncx * (nz - 1)).fill(NaN);
+  const out = new Float32Array(ncx * (nz - 1)).fill(NaN);
   const eps = 1e-6 * dz;
   const zBottom = nodeZ(grid, nz - 1);
   const columns: LayerColumn[] = Array.from({ length: SAMPLES_X }, () => newLayerColumn(layers.length));

@@ -39,7 +39,7 @@ export interface RasterModel {
    * inside the cell (cell-slowness.ts); NaN for other cells. Index cz·(nx−1)+cx. The solver uses
    * it where it sees a velocity contrast, so an interface between node rows acts where it is drawn.
    */
-  cellSlowness?: Float64Array;
+  cellSlowness?: Float32Array;
 }
 
 export function rasteriseModel(model: ModelFile): RasterModel {

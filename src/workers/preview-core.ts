@@ -14,7 +14,7 @@ export interface ShotInput {
   velocity: Float32Array;
   active: Uint8Array;
   /** Layered models: slowness of the cells an interface crosses (RasterModel.cellSlowness). */
-  cellSlowness?: Float64Array;
+  cellSlowness?: Float32Array;
   source: Point;
   receivers: Float64Array;
   order: 1 | 2;

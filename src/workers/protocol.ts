@@ -8,7 +8,7 @@ export interface PreviewRequest {
   velocity: Float32Array;
   active: Uint8Array;
   /** Layered models: slowness of the cells an interface crosses (RasterModel.cellSlowness). */
-  cellSlowness?: Float64Array;
+  cellSlowness?: Float32Array;
   source: Point;
   /** Receiver positions, interleaved x, z. */
   receivers: Float64Array;

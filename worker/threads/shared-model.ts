@@ -8,7 +8,7 @@ export interface ModelArrays {
   velocity: Float32Array;
   active: Uint8Array;
   /** Layered models: slowness of the cells an interface crosses (RasterModel.cellSlowness). */
-  cellSlowness?: Float64Array;
+  cellSlowness?: Float32Array;
 }
 
 export interface SharedModel {
@@ -35,6 +35,6 @@ export function viewModel(grid: Grid, shared: SharedModel): ModelArrays {
   return {
     velocity: new Float32Array(shared.velocity, 0, n),
     active: new Uint8Array(shared.active, 0, n),
-    cellSlowness: shared.cellSlowness ? new Float64Array(shared.cellSlowness, 0, (grid.nx - 1) * (grid.nz - 1)) : undefined,
+    cellSlowness: shared.cellSlowness ? new Float32Array(shared.cellSlowness, 0, (grid.nx - 1) * (grid.nz - 1)) : undefined,
   };
 }
