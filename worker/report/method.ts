@@ -41,7 +41,7 @@ export function drawMethod(ctx: ReportContext): void {
     ['Grid spacing and size', gridText(ctx)],
     ['Ground nodes', `${count(run.stats.active_nodes)} (nodes above the ground surface are air and carry no time)`],
     ['Source treatment', 'sources anywhere in the ground, not only on nodes: the corners of the source cell start with straight-ray times, and the march solves for the time factored by the distance from the source, which removes the point-source singularity'],
-    ['Interfaces', `velocities are sampled at the nodes, so an interface is resolved to the row spacing (${plain(ctx.model.grid.dz, 3)} m); a cell across a strong velocity contrast lets the wave travel along its edge at the faster velocity, the path of a head wave`],
+    ['Interfaces', interfacesText(ctx)],
     ['Receiver times', 'interpolated from the node times at each geophone: cubic convolution inside the ground, bilinear next to air, first-order Taylor extrapolation from the ground nodes for geophones on the surface'],
     ['Rays', 'traced back from each geophone to the shot down the gradient of the travel-time field'],
     ['Pick uncertainty σ', `${sigmaText(input.residuals.map((r) => r.sigmaMs))}; used for χ² per datum`],
@@ -49,4 +49,13 @@ export function drawMethod(ctx: ReportContext): void {
     ['Pick set', `${run.pickSetFile}, revision ${run.pickSetRevision}`],
     ['Run', `${run.id}, ${isoDate(run.createdAt)}; ${count(run.stats.shots)} shots solved in ${plain(run.stats.solve_seconds, 2)} s`],
   ], { labelWidth: 125 });
+}
+
+/** How the solver saw the model's interfaces: layered models carry sub-cell positions, raw grids only node values. */
+function interfacesText(ctx: ReportContext): string {
+  const headWave = 'a cell across a strong velocity contrast lets the wave travel along its edge at the faster velocity, the path of a head wave';
+  if (ctx.model.cellSlowness) {
+    return `velocities are sampled at the nodes (rows ${plain(ctx.model.grid.dz, 3)} m apart); each cell a layer interface crosses takes a slowness sampled inside the cell, so the interface acts where it is drawn, also between node rows; ${headWave}`;
+  }
+  return `velocities are sampled at the nodes, so an interface is resolved to the row spacing (${plain(ctx.model.grid.dz, 3)} m); ${headWave}`;
 }
