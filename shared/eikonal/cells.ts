@@ -112,11 +112,3 @@ function fillCells(grid: Grid, slowness: Float64Array, active: Uint8Array, rule:
     }
   }
 }
-
-/** Known mean slownesses (finite values of `known`) replace the rule's value on contrast cells. */
-export function applyKnownCells(cells: CellSlowness, known: Float32Array | Float64Array): void {
-  const { value, contrast } = cells;
-  for (let c = 0; c < value.length; c++) {
-    if (contrast[c] !== 0 && Number.isFinite(known[c])) value[c] = known[c];
-  }
-}

@@ -11,8 +11,9 @@
  * nodes; otherwise first order (Rickett & Fomel 1999, SEP Report 100).
  */
 import type { Grid } from '../grid';
-import { applyKnownCells, cellSlowness, type CellSlowness, CONTRAST_RATIO, DEFAULT_INTERFACE_RULE, type InterfaceRule } from './cells';
+import { CONTRAST_RATIO, DEFAULT_INTERFACE_RULE, type InterfaceRule } from './cells';
 import { IndexedMinHeap } from './heap';
+import { ModelCells } from './model-cells';
 import { startTimes } from './source';
 import { AIR, FAR, march, TRIAL } from './march';
 import type { Point, SolveOptions, VelocityField } from './types';
@@ -39,7 +40,7 @@ export class TravelTimeSolver {
   private safe: Float64Array;
 
   private heap: IndexedMinHeap;
-  private cells: CellSlowness | undefined;
+  private cells = new ModelCells();
 
   constructor(grid: Grid) {
     validateGrid(grid); // before allocating: an oversized grid is an input error, not a crash
@@ -66,12 +67,11 @@ export class TravelTimeSolver {
     const S = this.slow;
     const F = this.packed;
     const state = this.state;
-    resetNodes(velocity, active, S, F, state);
+    const sameSlowness = resetNodes(velocity, active, S, F, state);
 
-    this.cells = cellSlowness(grid, S, active, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, this.cells);
-    if (options.cellSlowness) applyKnownCells(this.cells, options.cellSlowness);
-    const cellS = this.cells.value;
-    const cellC = this.cells.contrast;
+    const cells = this.cells.update(grid, S, active, sameSlowness, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, options.cellSlowness);
+    const cellS = cells.value;
+    const cellC = cells.contrast;
     const heap = this.heap;
     heap.clear();
 
@@ -94,7 +94,7 @@ export class TravelTimeSolver {
       factored,
       second: order === 2,
       ratio,
-      anyContrast: cellC.indexOf(1) >= 0,
+      anyContrast: this.cells.anyContrast,
       F, state, cellS, cellC, heap,
       safe: this.safe,
     });
@@ -107,15 +107,23 @@ export class TravelTimeSolver {
 // on the fly (on-stack replacement) and that code is thrown away again on every call, leaving the
 // rest of the solve to the interpreter (seen with node --trace-deopt).
 
-/** Slowness per node and the march's start state: every ground node far, air inactive. */
-function resetNodes(velocity: VelocityField, active: Uint8Array, S: Float64Array, F: Float64Array, state: Uint8Array): void {
+/**
+ * Slowness per node and the march's start state: every ground node far, air inactive. Returns
+ * whether every slowness is what `S` already held (the same model as the last solve).
+ */
+function resetNodes(velocity: VelocityField, active: Uint8Array, S: Float64Array, F: Float64Array, state: Uint8Array): boolean {
+  let same = true;
   for (let i = 0; i < S.length; i++) {
     const si = active[i] ? 1 / velocity[i] : Infinity;
-    S[i] = si;
+    if (S[i] !== si) {
+      S[i] = si;
+      same = false;
+    }
     F[3 * i] = Infinity;
     F[3 * i + 2] = si;
     state[i] = active[i] ? FAR : AIR;
   }
+  return same;
 }
 
 function copyTimes(F: Float64Array, T: Float64Array): void {
