@@ -5,11 +5,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { sampleTime, solveTravelTimes } from '../../../shared/eikonal';
+import { parseModelFile, rasteriseModel } from '../../../shared/model';
 import { makeGrid, sampleModel, twoLayers, type TestModel } from './models';
 
-function reciprocalGap(m: TestModel, a: { x: number; z: number }, b: { x: number; z: number }): number {
-  const ta = solveTravelTimes(m.grid, m.velocity, m.active, a);
-  const tb = solveTravelTimes(m.grid, m.velocity, m.active, b);
+function reciprocalGap(m: TestModel & { cellSlowness?: Float32Array }, a: { x: number; z: number }, b: { x: number; z: number }): number {
+  const ta = solveTravelTimes(m.grid, m.velocity, m.active, a, { cellSlowness: m.cellSlowness });
+  const tb = solveTravelTimes(m.grid, m.velocity, m.active, b, { cellSlowness: m.cellSlowness });
   const ab = sampleTime(m.grid, ta, m.active, b);
   const ba = sampleTime(m.grid, tb, m.active, a);
   return Math.abs(ab - ba) / Math.max(ab, ba);
@@ -54,4 +55,32 @@ describe('reciprocity across a refractor within 0.5 %', () => {
   it('flat refractor, both ends in the top layer: within 0.1 %', () => {
     expect(reciprocalGap(layered[0][1], { x: 4.4, z: 0 }, { x: 30.3, z: -5.2 })).toBeLessThan(1e-3);
   });
+});
+
+describe('layered model files between node rows (the product path, with cell slownesses), across a refractor within 0.5 %', () => {
+  const fromFile = (depthAt0: number, slope: number) => {
+    const r = parseModelFile({
+      format: 'timefield-model/1',
+      grid: { x0: 0, dx: 0.5, nx: 161, z0: 0, dz: 0.5, nz: 49 },
+      layers: [
+        { name: 'till', base: [[0, -depthAt0], [80, -depthAt0 - 80 * slope]], v_top: 600, v_base: 600 },
+        { name: 'rock', v_top: 2400, v_base: 2400 },
+      ],
+    });
+    if (!r.ok) throw new Error(JSON.stringify(r.issues));
+    return rasteriseModel(r.model);
+  };
+  // Measured 2026-12-02: at most 0.35 % (surface to depth, flat at 7.2 m); each direction is
+  // within 0.4 % of the exact head-wave time there, against 3.7 % from node values alone.
+  const files: [string, ReturnType<typeof fromFile>][] = [
+    ['flat refractor at 7.2 m', fromFile(7.2, 0)],
+    ['dipping refractor', fromFile(6.1, 0.08)],
+  ];
+  for (const [name, m] of files) {
+    for (const [label, a, b] of [...pairs, ['both ends above the refractor', { x: 4.4, z: 0 }, { x: 30.3, z: -5.2 }]] as typeof pairs) {
+      it(`${name}, ${label}`, () => {
+        expect(reciprocalGap(m, a, b)).toBeLessThan(5e-3);
+      });
+    }
+  }
 });
