@@ -34,7 +34,7 @@ export interface MarchOptions extends SolveOptions {
 export class TravelTimeSolver {
   readonly grid: Grid;
   private slow: Float64Array;
-  /** Interleaved T, U, slowness per node for the march (see MarchState.F). */
+  /** Interleaved T, U, slowness per node for the march (see MarchState.F), on the bordered grid (MarchState.stride). */
   private packed: Float64Array;
   private state: Uint8Array;
   private safe: Float64Array;
@@ -46,11 +46,12 @@ export class TravelTimeSolver {
     validateGrid(grid); // before allocating: an oversized grid is an input error, not a crash
     this.grid = { ...grid };
     const n = grid.nx * grid.nz;
+    const bordered = (grid.nx + 2) * (grid.nz + 2);
     this.slow = new Float64Array(n);
-    this.packed = new Float64Array(3 * n);
-    this.state = new Uint8Array(n);
-    this.safe = new Float64Array(n);
-    this.heap = new IndexedMinHeap(n);
+    this.packed = new Float64Array(3 * bordered);
+    this.state = new Uint8Array(bordered).fill(AIR); // the border stays AIR for good
+    this.safe = new Float64Array(bordered);
+    this.heap = new IndexedMinHeap(bordered);
   }
 
   /** Travel times (s) from `source`; Infinity at air nodes and ground not connected to the source. */
@@ -67,7 +68,7 @@ export class TravelTimeSolver {
     const S = this.slow;
     const F = this.packed;
     const state = this.state;
-    const sameSlowness = resetNodes(velocity, active, S, F, state);
+    const sameSlowness = resetNodes(velocity, active, nx, S, F, state);
 
     const cells = this.cells.update(grid, S, active, sameSlowness, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, options.cellSlowness);
     const cellS = cells.value;
@@ -80,13 +81,16 @@ export class TravelTimeSolver {
     const start = startTimes(grid, S, active, source, ratio);
     for (let k = 0; k < start.nodes.length; k++) {
       const i = start.nodes[k];
-      F[3 * i] = start.times[k];
-      F[3 * i + 1] = Math.hypot(x0 + (i % nx) * dx - xs, z0 - Math.floor(i / nx) * dz - zs); // r, as march keeps it
-      heap.pushOrDecrease(i, start.times[k]);
-      state[i] = TRIAL;
+      const ix = i % nx;
+      const iz = (i - ix) / nx;
+      const b = (iz + 1) * (nx + 2) + ix + 1; // on the bordered grid
+      F[3 * b] = start.times[k];
+      F[3 * b + 1] = Math.hypot(x0 + ix * dx - xs, z0 - iz * dz - zs); // r, as march keeps it
+      heap.pushOrDecrease(b, start.times[k]);
+      state[b] = TRIAL;
     }
     march({
-      nx, nz, dx, dz, x0, z0, xs, zs,
+      nx, nz, stride: nx + 2, dx, dz, x0, z0, xs, zs,
       s0: start.slowness,
       vs: 1 / start.slowness,
       gx: start.gradX,
@@ -98,7 +102,7 @@ export class TravelTimeSolver {
       F, state, cellS, cellC, heap,
       safe: this.safe,
     });
-    copyTimes(F, T);
+    copyTimes(F, T, nx);
     return T;
   }
 }
@@ -111,7 +115,7 @@ export class TravelTimeSolver {
  * Slowness per node and the march's start state: every ground node far, air inactive. Returns
  * whether every slowness is what `S` already held (the same model as the last solve).
  */
-function resetNodes(velocity: VelocityField, active: Uint8Array, S: Float64Array, F: Float64Array, state: Uint8Array): boolean {
+function resetNodes(velocity: VelocityField, active: Uint8Array, nx: number, S: Float64Array, F: Float64Array, state: Uint8Array): boolean {
   let same = true;
   for (let i = 0; i < S.length; i++) {
     const si = active[i] ? 1 / velocity[i] : Infinity;
@@ -119,15 +123,21 @@ function resetNodes(velocity: VelocityField, active: Uint8Array, S: Float64Array
       S[i] = si;
       same = false;
     }
-    F[3 * i] = Infinity;
-    F[3 * i + 2] = si;
-    state[i] = active[i] ? FAR : AIR;
+    const ix = i % nx;
+    const b = i + 2 * ((i - ix) / nx) + nx + 3; // (iz + 1)·(nx + 2) + ix + 1
+    F[3 * b] = Infinity;
+    F[3 * b + 2] = si;
+    state[b] = active[i] ? FAR : AIR;
   }
   return same;
 }
 
-function copyTimes(F: Float64Array, T: Float64Array): void {
-  for (let i = 0; i < T.length; i++) T[i] = F[3 * i];
+/** Times of the grid's nodes out of the bordered march arrays. */
+function copyTimes(F: Float64Array, T: Float64Array, nx: number): void {
+  for (let i = 0, row = 0; i < T.length; i += nx, row++) {
+    const b = i + 2 * row + nx + 3;
+    for (let ix = 0; ix < nx; ix++) T[i + ix] = F[3 * (b + ix)];
+  }
 }
 
 /** Travel times (s) from `source` on `grid`; Infinity at air nodes. Throws EikonalInputError on bad input. */

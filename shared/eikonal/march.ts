@@ -1,6 +1,6 @@
 /**
  * The fast-marching loop itself, written flat for speed (no closures, no allocation, index maths
- * inline). fmm.ts prepares the arrays; the stencil algebra is that of stencil.ts, repeated here
+ * inline, no bounds tests: the node arrays have an AIR border, see MarchState.stride). fmm.ts prepares the arrays; the stencil algebra is that of stencil.ts, repeated here
  * inline because a call per candidate costs more than the arithmetic.
  *
  * Each accepted node p updates its four neighbours q with the candidates that involve p:
@@ -11,8 +11,15 @@ import type { IndexedMinHeap } from './heap';
 import { referenceLogSlope } from './reference';
 
 export interface MarchState {
+  /** Grid size in nodes (for positions and cell indices). */
   nx: number;
   nz: number;
+  /**
+   * Row length of the node arrays (F, state, safe, heap ids): the grid with a border one node wide
+   * all round, kept AIR, so a neighbour one step off the grid is simply never usable and the loop
+   * needs no bounds tests. Node (ix, iz) sits at (iz + 1)·stride + ix + 1.
+   */
+  stride: number;
   dx: number;
   dz: number;
   x0: number;
@@ -58,18 +65,19 @@ const PROVISIONAL = 4;
 const HAS_TWO = 8;
 
 export function march(m: MarchState): void {
-  const { nx, nz, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, F, state, cellS, cellC, heap, safe, vs, gx, gz } = m;
+  const { nx, nz, stride, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, F, state, cellS, cellC, heap, safe, vs, gx, gz } = m;
   const nearAxisOn = factored;
   const ncx = nx - 1;
-  const invNx = 1 / nx;
+  const invStride = 1 / stride;
   const invDx = 1 / dx;
   const invDz = 1 / dz;
 
   while (heap.size > 0) {
     const p = heap.pop();
     state[p] = DONE;
-    const piz = Math.floor((p + 0.5) * invNx); // exact: the +½ keeps float rounding off row ends
-    const pix = p - piz * nx;
+    const row = Math.floor((p + 0.5) * invStride); // exact: the +½ keeps float rounding off row ends
+    const piz = row - 1;
+    const pix = p - row * stride - 1;
     const Tp = F[3 * p];
     if (factored) {
       const r = F[3 * p + 1]; // a trial node keeps its distance to the source in the U slot
@@ -86,8 +94,7 @@ export function march(m: MarchState): void {
       let qiz = piz;
       if (alongX) qix += sgn;
       else qiz += sgn;
-      if (qix < 0 || qix >= nx || qiz < 0 || qiz >= nz) continue;
-      const step = alongX ? sgn : sgn * nx; // index offset p → q
+      const step = alongX ? sgn : sgn * stride; // index offset p → q (off the grid: a border node, AIR)
       const q = p + step;
       const kindQ = state[q] & KIND;
       if (kindQ >= DONE) continue;
@@ -120,21 +127,17 @@ export function march(m: MarchState): void {
       let aP = eP + iP;
       let bP = rq * Up * iP;
       if (second) {
-        const b2ix = alongX ? pix - sgn : pix;
-        const b2iz = alongX ? piz : piz - sgn;
-        if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
-          const p2 = p - step;
-          if ((state[p2] & KIND) === DONE && F[3 * p2] <= Tp) {
-            const s1 = F[3 * p + 2];
-            const s2 = F[3 * p2 + 2];
-            let lo = sq < s1 ? sq : s1;
-            let hi = sq < s1 ? s1 : sq;
-            if (s2 < lo) lo = s2;
-            if (s2 > hi) hi = s2;
-            if (hi <= lo * ratio) {
-              aP = eP + 1.5 * iP;
-              bP = rq * (2 * Up - 0.5 * F[3 * p2 + 1]) * iP;
-            }
+        const p2 = p - step;
+        if ((state[p2] & KIND) === DONE && F[3 * p2] <= Tp) {
+          const s1 = F[3 * p + 2];
+          const s2 = F[3 * p2 + 2];
+          let lo = sq < s1 ? sq : s1;
+          let hi = sq < s1 ? s1 : sq;
+          if (s2 < lo) lo = s2;
+          if (s2 > hi) hi = s2;
+          if (hi <= lo * ratio) {
+            aP = eP + 1.5 * iP;
+            bP = rq * (2 * Up - 0.5 * F[3 * p2 + 1]) * iP;
           }
         }
       }
@@ -174,8 +177,7 @@ export function march(m: MarchState): void {
         let biz = qiz;
         if (alongX) biz += side;
         else bix += side;
-        if (bix < 0 || bix >= nx || biz < 0 || biz >= nz) continue;
-        const bStep = alongX ? side * nx : side;
+        const bStep = alongX ? side * stride : side;
         const b = q + bStep;
         if ((state[b] & KIND) !== DONE) continue;
         const Tb = F[3 * b];
@@ -185,21 +187,17 @@ export function march(m: MarchState): void {
         let aB = eB + iB;
         let bB = rq * Ub * iB;
         if (second) {
-          const b2ix = alongX ? bix : bix + side;
-          const b2iz = alongX ? biz + side : biz;
-          if (b2ix >= 0 && b2ix < nx && b2iz >= 0 && b2iz < nz) {
-            const b2 = b + bStep;
-            if ((state[b2] & KIND) === DONE && F[3 * b2] <= Tb) {
-              const s1 = F[3 * b + 2];
-              const s2 = F[3 * b2 + 2];
-              let lo = sq < s1 ? sq : s1;
-              let hi = sq < s1 ? s1 : sq;
-              if (s2 < lo) lo = s2;
-              if (s2 > hi) hi = s2;
-              if (hi <= lo * ratio) {
-                aB = eB + 1.5 * iB;
-                bB = rq * (2 * Ub - 0.5 * F[3 * b2 + 1]) * iB;
-              }
+          const b2 = b + bStep;
+          if ((state[b2] & KIND) === DONE && F[3 * b2] <= Tb) {
+            const s1 = F[3 * b + 2];
+            const s2 = F[3 * b2 + 2];
+            let lo = sq < s1 ? sq : s1;
+            let hi = sq < s1 ? s1 : sq;
+            if (s2 < lo) lo = s2;
+            if (s2 > hi) hi = s2;
+            if (hi <= lo * ratio) {
+              aB = eB + 1.5 * iB;
+              bB = rq * (2 * Ub - 0.5 * F[3 * b2 + 1]) * iB;
             }
           }
         }
