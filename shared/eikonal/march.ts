@@ -1,7 +1,8 @@
 /**
  * The fast-marching loop itself, written flat for speed (no closures, no allocation, index maths
- * inline, no bounds tests: the node arrays have an AIR border, see MarchState.stride). fmm.ts prepares the arrays; the stencil algebra is that of stencil.ts, repeated here
- * inline because a call per candidate costs more than the arithmetic.
+ * inline, no bounds tests: the node arrays have an AIR border, see MarchState.stride). fmm.ts
+ * prepares the arrays; the stencil algebra is that of stencil.ts, repeated here inline because a
+ * call per candidate costs more than the arithmetic.
  *
  * Each accepted node p updates its four neighbours q with the candidates that involve p:
  * the one-axis update towards p, and the two-axis updates with each accepted neighbour b of q
