@@ -8,8 +8,8 @@ export interface Point {
 export interface SolveOptions {
   order?: 1 | 2;
   /**
-   * Mean slowness (s/m) of cells an interface crosses, index cz·(nx−1)+cx, NaN where unknown
-   * (the layered rasteriser's RasterModel.cellSlowness). Used on the cells the solver finds a
+   * Slowness (s/m) of cells an interface crosses, index cz·(nx−1)+cx, NaN where unknown
+   * (the layered rasteriser's RasterModel.cellSlowness, shared/model/cell-slowness.ts). Used on the cells the solver finds a
    * contrast in, in place of its own rule, which can only guess where between two node rows an
    * interface lies.
    */

@@ -16,8 +16,8 @@
  * - Air (z > surface): active = 0; velocity copied from the topmost ground node of the
  *   column, so interpolation across the surface stays finite. Solvers ignore those values.
  * - Edits ({ix, iz, v}) are painted after the layers (or raw grid), on ground nodes only.
- * - Cells an interface crosses also get their mean slowness from samples inside the cell
- *   (cellSlowness), which the solver uses at contrasts: the node values alone place an interface
+ * - Cells an interface crosses also get a slowness from samples inside the cell (cellSlowness,
+ *   cell-slowness.ts), which the solver uses at contrasts: the node values alone place an interface
  *   between two rows only to within dz.
  */
 import { nodeX, nodeZ, type Grid } from '../grid';
@@ -35,7 +35,7 @@ export interface RasterModel {
   /** Ground elevation (m) at x: the surface polyline, or z0 when the file has none. */
   surfaceZ(x: number): number;
   /**
-   * Layered models only: mean slowness (s/m) of each cell a layer interface crosses, sampled
+   * Layered models only: slowness (s/m) of each cell a layer interface crosses, from samples
    * inside the cell (cell-slowness.ts); NaN for other cells. Index cz·(nx−1)+cx. The solver uses
    * it where it sees a velocity contrast, so an interface between node rows acts where it is drawn.
    */
