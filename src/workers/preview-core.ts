@@ -2,7 +2,8 @@
  * One shot's preview, without any browser API so tests run it as is: the travel-time field by
  * the shared fast-marching solver, the times at the receivers sampled exactly as the solve
  * command's thread task does (worker/threads/solve-shot.ts: TravelTimeSolver.solve with the
- * order and the model's cell slownesses, then sampleTime at each receiver), wavefront contours, and on request the rays.
+ * order and the model's cell slownesses, then sampleTime at each receiver), wavefront contours,
+ * and on request the rays.
  */
 import type { Grid } from '../../shared/grid';
 import { sampleTime, TravelTimeSolver, type Point } from '../../shared/eikonal';
