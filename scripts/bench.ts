@@ -6,7 +6,7 @@
  * The table ends with a calibration: the engine timed alternately with a plain fast-marching
  * solver, a cost ratio that stays put while the machine's speed drifts.
  */
-import { dippingCase, gradientCase, homogeneousCase, SIZES, twoLayerBetweenRowsCase, twoLayerCase, type BenchCase } from './bench/cases';
+import { dippingCase, gradientCase, homogeneousCase, SIZES, twoLayerCase, twoLayerModelCase, type BenchCase } from './bench/cases';
 import { calibrate } from './bench/calibrate';
 import { runCase, type BenchResult } from './bench/measure';
 
@@ -50,7 +50,7 @@ function* cases(args: Args): Generator<BenchCase> {
   for (const [nx, nz] of sizes) yield homogeneousCase(nx, nz);
   for (const [nx, nz] of sizes) yield gradientCase(nx, nz);
   yield twoLayerCase();
-  yield twoLayerBetweenRowsCase();
+  yield twoLayerModelCase();
   yield dippingCase();
 }
 

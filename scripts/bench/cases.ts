@@ -105,33 +105,37 @@ export function twoLayerCase(depth: number = TWO_LAYER.depth, sourceX = 0): Benc
 }
 
 /**
- * The flat refractor drawn between two node rows (10.2 m on 0.5 m rows), built as a layered model
- * file through the rasteriser: point samples alone would put it on the 10.5 m row.
+ * Two layers (TWO_LAYER velocities, 0.5 m cells) built as a layered model file through the
+ * rasteriser, refractor depthAtX0 at x = 0 dipping dipDeg (deepening to +x), with its cell
+ * slownesses: point samples alone would put a refractor between rows (e.g. 10.2 m) on the next
+ * row down. Flat: source at x = 0, 30 m deep grid; dipping: source mid-line, 40 m deep.
  */
-export function twoLayerBetweenRowsCase(depth = 10.2): BenchCase {
-  const { v1, v2, spacing: h, width, bottom } = TWO_LAYER;
+export function twoLayerModelCase(depthAtX0 = 10.2, dipDeg = 0): BenchCase {
+  const { v1, v2, spacing: h, width } = TWO_LAYER;
+  const dip = (dipDeg * Math.PI) / 180;
   const nx = Math.round(width / h) + 1;
-  const nz = Math.round(bottom / h) + 1;
+  const nz = Math.round((dipDeg ? DIPPING.bottom : TWO_LAYER.bottom) / h) + 1;
   const parsed = parseModelFile({
     format: 'timefield-model/1',
     grid: { x0: 0, dx: h, nx, z0: 0, dz: h, nz },
     layers: [
-      { name: 'slow', base: [[0, -depth], [width, -depth]], v_top: v1, v_base: v1 },
+      { name: 'slow', base: [[0, -depthAtX0], [width, -depthAtX0 - width * Math.tan(dip)]], v_top: v1, v_base: v1 },
       { name: 'fast', v_top: v2, v_base: v2 },
     ],
   });
   if (!parsed.ok) throw new Error(`bench model is invalid: ${JSON.stringify(parsed.issues)}`);
   const raster = rasteriseModel(parsed.model);
-  const source = { x: 0, z: 0 };
+  const source = { x: dipDeg ? width / 2 : 0, z: 0 };
+  const surfaceTime = (x: number): number =>
+    dipDeg ? dippingSurfaceTime(v1, v2, depthAtX0, dip, source.x, x) : twoLayerSurfaceTime(v1, v2, depthAtX0, x - source.x);
   return {
-    name: `two-layer-${depth}m-${nx}x${nz}`,
+    name: dipDeg ? `dipping-${dipDeg}deg-${depthAtX0}m-${nx}x${nz}` : `two-layer-${depthAtX0}m-${nx}x${nz}`,
     grid: raster.grid,
     velocity: raster.velocity,
     active: raster.active,
     cellSlowness: raster.cellSlowness,
     source,
-    exact: (ix, iz) =>
-      iz === 0 && farFromSource(raster.grid, source, ix, iz) ? twoLayerSurfaceTime(v1, v2, depth, ix * h - source.x) : NaN,
+    exact: (ix, iz) => (iz === 0 && farFromSource(raster.grid, source, ix, iz) ? surfaceTime(ix * h) : NaN),
   };
 }
 
