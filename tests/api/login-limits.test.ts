@@ -7,7 +7,6 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
-import { config } from '../../server/config';
 import { clearLoginLimits, LOGIN_LIMITS } from '../../server/auth/loginLimits';
 import { createRedis } from '../../server/queue/connection';
 import { anonymousAgent, startTestApp, type Agent, type TestApp } from './support/app';
@@ -22,8 +21,8 @@ const login = (agent: Agent, from: string, email: string, password: string) =>
 describe('sign-in limits per address and per account, shared through Redis', () => {
   let t: TestApp;
   beforeAll(async () => {
-    config.trustProxy = 1; // one proxy hop: X-Forwarded-For gives each caller its address
     t = await startTestApp();
+    t.app.set('trust proxy', 1); // as TRUST_PROXY=1 does: X-Forwarded-For gives each caller its address
     await resetWorld();
   });
   afterAll(async () => {
@@ -66,6 +65,7 @@ describe('sign-in limits per address and per account, shared through Redis', () 
     if (redis2.status !== 'ready') await new Promise((resolve) => redis2.once('ready', resolve));
     try {
       const second = createApp({ redis: redis2, pgPool: t.pgPool, queue: t.queue, mailer: t.mailer, clientDir: '/nonexistent' });
+      second.set('trust proxy', 1);
       const agent = await anonymousAgent(second);
       const res = await login(agent, SPRAYER, 'someone-new@spray.test', 'another-guess-1');
       expect(res.status).toBe(429);
