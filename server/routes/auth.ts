@@ -67,8 +67,7 @@ export function authRouter(redis: Redis): Router {
   r.post('/auth/password', authorize('auth.password.change'), async (req, res) => {
     const body = parse(changePasswordBody, req.body);
     const user = req.user!;
-    await admitAttempt(limits, req, res, user.email);
-    await changeOwnPassword(user.id, req.sessionID, body);
+    await changeOwnPassword(user, req.sessionID, body, () => admitAttempt(limits, req, res, user.email));
     await limits.succeeded(req.ip ?? '', user.email);
     res.status(204).end();
   });

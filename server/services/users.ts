@@ -44,21 +44,31 @@ export async function updateUser(actorId: string, userId: string, body: UpdateUs
   });
 }
 
-/** A user's own change: the current password must be right; their other sessions end, this one stays. */
-export async function changeOwnPassword(userId: string, currentSid: string, body: ChangePasswordBody): Promise<void> {
-  const user = await dataSource.getRepository(User).findOneBy({ id: userId });
-  if (!user || !(await verifyPassword(body.currentPassword, user.passwordHash))) {
-    throw new HttpError(400, 'wrong_current_password', 'The current password is not right.', [{ path: 'currentPassword', message: 'is not right' }]);
-  }
+/**
+ * A user's own change: the new password is checked first (no hashing), then `beforeVerify` runs
+ * (the route's sign-in limit, so only real guesses at the current password count), then the
+ * current password must be right. Their other sessions end; this one stays.
+ */
+export async function changeOwnPassword(
+  user: Express.User,
+  currentSid: string,
+  body: ChangePasswordBody,
+  beforeVerify: () => Promise<void> = async () => {},
+): Promise<void> {
   if (body.newPassword === body.currentPassword) {
     throw new HttpError(400, 'validation_failed', 'The new password must differ from the current one.', [{ path: 'newPassword', message: 'must differ from the current password' }]);
   }
   assertStrongPassword(body.newPassword, user, 'newPassword');
+  await beforeVerify();
+  const stored = await dataSource.getRepository(User).findOneBy({ id: user.id });
+  if (!stored || !(await verifyPassword(body.currentPassword, stored.passwordHash))) {
+    throw new HttpError(400, 'wrong_current_password', 'The current password is not right.', [{ path: 'currentPassword', message: 'is not right' }]);
+  }
   const passwordHash = await hashPassword(body.newPassword);
   await dataSource.transaction(async (em) => {
-    await em.update(User, { id: userId }, { passwordHash });
-    const sessionsEnded = await endSessionsOf(em, userId, currentSid);
-    await audit(em, { actorId: userId, action: 'user.password_change', objectType: 'user', objectId: userId, detail: { sessionsEnded } });
+    await em.update(User, { id: user.id }, { passwordHash });
+    const sessionsEnded = await endSessionsOf(em, user.id, currentSid);
+    await audit(em, { actorId: user.id, action: 'user.password_change', objectType: 'user', objectId: user.id, detail: { sessionsEnded } });
   });
 }
 

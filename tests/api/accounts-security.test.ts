@@ -85,6 +85,15 @@ describe('passwords, sessions and the account directory', () => {
     await signedInAgent(t.app, emailOf('field_tech'), STRONG);
   });
 
+  it('counts only real guesses at the current password against the sign-in limit, not weak new ones', async () => {
+    const agent = await signedInAgent(t.app, emailOf('client'), PASSWORD);
+    for (let i = 0; i < 12; i++) {
+      const res = await agent.post('/api/auth/password').set('X-CSRF-Token', agent.csrf).send({ currentPassword: PASSWORD, newPassword: '1234567890' });
+      expect(res.status).toBe(400);
+    }
+    await signedInAgent(t.app, emailOf('client'), PASSWORD); // not locked out (limit: 10 per account)
+  });
+
   it('shows a lead the people of their projects and staff, never another project’s client; the admin sees all', async () => {
     const users = dataSource.getRepository(User);
     const clientB = await users.save(users.create({ email: 'client-b@world.test', name: 'Client of B', passwordHash: await hashPassword(PASSWORD), globalRole: null }));
