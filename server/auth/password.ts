@@ -17,6 +17,8 @@ const scryptSlots = pLimit(2);
 /** More waiting than this and a sign-in is answered 503 at once instead of queueing (about 2 s of work). */
 export const MAX_WAITING_HASHES = 32;
 export const hashingBacklogFull = (): boolean => scryptSlots.pendingCount >= MAX_WAITING_HASHES;
+/** Hashes running and waiting now (for tests and logs). */
+export const hashingLoad = () => ({ running: scryptSlots.activeCount, waiting: scryptSlots.pendingCount });
 const scrypt = (pw: string, salt: Buffer, len: number, opts: object) => scryptSlots(() => scryptRaw(pw, salt, len, opts));
 
 /** Format: scrypt$N$r$p$salt(base64)$hash(base64), so parameters can change later. */
