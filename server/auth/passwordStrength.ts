@@ -33,5 +33,6 @@ export function passwordWeakness(password: string, person: { email?: string; nam
 /** 400 with the field's path, in the API's error shape, when the password is weak. */
 export function assertStrongPassword(password: string, person: { email?: string; name?: string }, path = 'password'): void {
   const why = passwordWeakness(password, person);
-  if (why) throw new HttpError(400, 'weak_password', `The password ${why}`, [{ path, message: why }]);
+  // The summary stays short; the reason is given once, beside the field.
+  if (why) throw new HttpError(400, 'weak_password', 'The password is too easy to guess.', [{ path, message: why }]);
 }
