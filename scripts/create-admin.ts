@@ -26,6 +26,7 @@ try {
 } catch (err) {
   if (!(err instanceof HttpError)) throw err;
   console.error(`[create-admin] ${err.message}`);
+  for (const i of err.issues ?? []) console.error(`[create-admin] ${i.path}: ${i.message}`);
   process.exitCode = 2;
 } finally {
   await ds.destroy();
