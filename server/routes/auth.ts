@@ -19,12 +19,13 @@ const invalidCredentials = () => new HttpError(401, 'invalid_credentials', 'The 
 
 /** Refused before any password is hashed: used-up limits (429) or a full hashing queue (503). */
 async function admitAttempt(limits: LoginLimits, req: Request, res: Response, email: string): Promise<void> {
+  // A full queue first, so a 503 costs the caller none of their attempts.
+  if (hashingBacklogFull()) throw new HttpError(503, 'busy', 'Sign-in is busy right now. Try again in a few seconds.');
   const waitSeconds = await limits.reserve(req.ip ?? '', email);
   if (waitSeconds !== null) {
     res.set('Retry-After', String(waitSeconds));
     throw new HttpError(429, 'too_many_attempts', `Too many failed sign-ins. Wait ${Math.ceil(waitSeconds / 60)} minutes and try again.`);
   }
-  if (hashingBacklogFull()) throw new HttpError(503, 'busy', 'Sign-in is busy right now. Try again in a few seconds.');
 }
 
 export function authRouter(redis: Redis): Router {
