@@ -4,6 +4,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/setup.sh
+source scripts/lib/supervise.sh
 
 TF_DATA=${TF_DATA:-.data/dev}
 TF_PG_PORT=${TF_PG_PORT:-55432}
@@ -42,8 +43,10 @@ shutdown() {
 }
 trap shutdown INT TERM EXIT
 
-node --import tsx worker/index.ts & pids+=($!)
-node --import tsx server/index.ts & pids+=($!)
+# The worker is started again whenever it stops (crash, out of memory, killed); /api/health shows
+# "worker" not ok until it is back. The API keeps answering meanwhile.
+( supervise worker node --import tsx worker/index.ts ) & pids+=($!)
+node --import tsx server/index.ts & api=$! pids+=($!)
 
 for _ in $(seq 1 100); do
   curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break
@@ -63,5 +66,5 @@ cat <<MSG
   Press Ctrl-C to stop.
 
 MSG
-# Stop everything if either process exits on its own.
-wait -n "${pids[@]}" || true
+# Stop everything if the API exits on its own.
+wait "$api" || true

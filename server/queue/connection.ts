@@ -1,13 +1,19 @@
 import { Redis } from 'ioredis';
 import { config } from '../config';
+import { logOutages } from './outage-log';
 
-/** BullMQ needs maxRetriesPerRequest: null on connections that block; other clients keep the default. */
-export function createRedis(options: { forBullmq?: boolean } = {}): Redis {
-  return new Redis(config.redisUrl, {
+/**
+ * BullMQ needs maxRetriesPerRequest: null on connections that block (the worker). Other clients
+ * fail fast while Redis is away (no offline queue), so a request answers 503 instead of hanging.
+ */
+export function createRedis(options: { forBullmq?: boolean; name?: string } = {}): Redis {
+  const redis = new Redis(config.redisUrl, {
     maxRetriesPerRequest: options.forBullmq ? null : 1,
     enableOfflineQueue: options.forBullmq ?? false,
     lazyConnect: false,
   });
+  logOutages(redis, options.name ?? 'redis');
+  return redis;
 }
 
 /** Key the worker refreshes; the API reads it for /api/health. */

@@ -5,6 +5,7 @@ import { checkStationTable, parseStationCsv, type StationIssue } from '../../sha
 import { dataSource } from '../db/dataSource';
 import { SurveyLine } from '../entities';
 import { HttpError } from '../http/errors';
+import { idempotent } from '../http/idempotency';
 import { isMultipart, singleFile } from '../http/upload';
 import { authorize } from '../policies/authorize';
 import { projectOfLine } from '../policies/scopes';
@@ -66,7 +67,7 @@ export function linesRouter(): Router {
     res.json({ stations: await listStations(req.params.lineId as string) });
   });
 
-  r.post('/lines/:lineId/picksets', authorize('line.picksets.create', projectOfLine), singleFile(MAX_PICK_FILE_BYTES), async (req, res) => {
+  r.post('/lines/:lineId/picksets', authorize('line.picksets.create', projectOfLine), idempotent(), singleFile(MAX_PICK_FILE_BYTES), async (req, res) => {
     if (!req.file) throw new HttpError(400, 'file_missing', 'Choose a pick file to upload (form field "file").');
     const name = req.file.originalname?.slice(0, 200) || 'picks.csv';
     const created = await importPicks(req.user!.id, req.access!.projectId, req.params.lineId as string, name, req.file.buffer);

@@ -3,6 +3,7 @@ import type { Queue } from 'bullmq';
 import { reportStepBody, startReportBody } from '../../shared/schemas/reports';
 import { HttpError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
+import { idempotent } from '../http/idempotency';
 import { parse } from '../http/parse';
 import { allows, authorize } from '../policies/authorize';
 import type { Action } from '../policies/table';
@@ -25,7 +26,7 @@ const STEP_ACTIONS: Record<ReportStep, Action> = { submit: 'report.submit', appr
 export function reportsRouter(queue: Queue, mailer: Mailer): Router {
   const r = Router();
 
-  r.post('/runs/:runId/reports', authorize('reports.create', projectOfRun), async (req, res) => {
+  r.post('/runs/:runId/reports', authorize('reports.create', projectOfRun), idempotent(), async (req, res) => {
     const report = await startReport(req.user!.id, req.access!.projectId, req.params.runId as string, parse(startReportBody, req.body), queue);
     res.status(202).json({ id: report.id });
   });

@@ -5,6 +5,7 @@ import { startRunBody } from '../../shared/schemas/runs';
 import { dataSource } from '../db/dataSource';
 import { Run } from '../entities';
 import { HttpError } from '../http/errors';
+import { idempotent } from '../http/idempotency';
 import { parse } from '../http/parse';
 import { authorize } from '../policies/authorize';
 import { projectOfBodyModel, projectOfRun } from '../policies/scopes';
@@ -16,7 +17,7 @@ export function runsRouter(queue: Queue): Router {
   const r = Router();
   const runOf = (id: string) => dataSource.getRepository(Run).findOneByOrFail({ id });
 
-  r.post('/runs', authorize('runs.create', projectOfBodyModel), async (req, res) => {
+  r.post('/runs', authorize('runs.create', projectOfBodyModel), idempotent(), async (req, res) => {
     const run = await startRun(req.user!.id, req.access!.projectId, parse(startRunBody, req.body), queue);
     res.status(202).json({ id: run.id, status: run.status });
   });

@@ -3,6 +3,7 @@ import { dataSource } from '../db/dataSource';
 import { Report } from '../entities';
 import type { ReportStatus } from '../entities/Report';
 import { HttpError } from '../http/errors';
+import { addJob } from '../queue/queue';
 import type { Mailer } from '../mail/mailer';
 import type { StartReportBody } from '../../shared/schemas/reports';
 import { audit } from './audit';
@@ -32,13 +33,23 @@ export async function startReport(actorId: string, projectId: string, runId: str
     await audit(em, { actorId, action: 'report.create', objectType: 'report', objectId: saved.id, projectId, detail: { runId } });
     return saved;
   });
-  await queueRender(queue, report.id);
+  try {
+    await queueRender(queue, report.id);
+  } catch (err) {
+    await dataSource.getRepository(Report).delete({ id: report.id }); // nothing was started
+    throw err;
+  }
   return report;
 }
 
 /** Renders (again) the report's PDF; a render already waiting for the same report is not duplicated. */
 async function queueRender(queue: Queue, reportId: string): Promise<void> {
-  await queue.add('report', { reportId }, { jobId: `report-${reportId}-${Date.now()}` });
+  try {
+    await addJob(queue, 'report', { reportId }, `report-${reportId}-${Date.now()}`);
+  } catch (err) {
+    await dataSource.query(`UPDATE reports SET render_state = 'failed', render_error = $2 WHERE id = $1`, [reportId, 'The PDF could not be queued: the job queue was unreachable.']);
+    throw err;
+  }
 }
 
 /** One workflow step: checks the status, records it in the audit trail, e-mails the people concerned. */

@@ -1,6 +1,6 @@
 import { groupPicksByShot, placeShots, type PlacedShot } from '../../shared/picks';
 import { rasteriseModel, type ModelFile, type RasterModel } from '../../shared/model';
-import { MAX_GRID_NODES } from '../../shared/limits';
+import { MAX_GRID_NODES, MAX_SHOTS_PER_RUN } from '../../shared/limits';
 import { HttpError } from '../http/errors';
 import type { StoredPick } from './pickSets';
 
@@ -34,6 +34,9 @@ export function prepareRunInputs(model: ModelFile, picks: readonly StoredPick[],
       `This model version does not cover the pick set: line ${first.line} of the pick file, ${first.message}.`,
       placed.errors.map((e) => ({ line: e.line ?? undefined, column: e.column ?? undefined, message: e.message })),
     );
+  }
+  if (placed.shots.length > MAX_SHOTS_PER_RUN) {
+    throw new HttpError(422, 'too_many_shots', `The pick set has ${placed.shots.length} shots; one run solves at most ${MAX_SHOTS_PER_RUN}. Split the picks into several pick sets (one per spread) and run each.`);
   }
   return { raster, shots: placed.shots, excluded: new Set(excludedIndices) };
 }

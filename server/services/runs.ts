@@ -2,6 +2,7 @@ import type { Queue } from 'bullmq';
 import { dataSource } from '../db/dataSource';
 import { Run } from '../entities';
 import { HttpError } from '../http/errors';
+import { addJob } from '../queue/queue';
 import type { StartRunBody } from '../../shared/schemas/runs';
 import { audit } from './audit';
 import { loadModelVersion } from './models';
@@ -36,7 +37,16 @@ export async function startRun(actorId: string, projectId: string, body: StartRu
     await audit(em, { actorId, action: 'run.start', objectType: 'run', objectId: saved.id, projectId, detail: { modelId: model.id, pickSetId: body.pickSetId, order: body.order } });
     return saved;
   });
-  await queue.add('solve', { runId: run.id }, { jobId: run.id });
+  try {
+    await addJob(queue, 'solve', { runId: run.id }, run.id);
+  } catch (err) {
+    // No row may wait for a job that was never queued.
+    await dataSource.transaction(async (em) => {
+      await em.delete(Run, { id: run.id });
+      await audit(em, { actorId, action: 'run.not_queued', objectType: 'run', objectId: run.id, projectId, detail: { reason: 'queue unreachable' } });
+    });
+    throw err;
+  }
   return run;
 }
 

@@ -36,11 +36,14 @@ export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   body?: unknown;
   signal?: AbortSignal;
+  /** Sent as Idempotency-Key: a repeat of the same submission gets the first answer (server/http/idempotency.ts). */
+  idempotencyKey?: string;
 }
 
-async function send(path: string, method: string, body: unknown, signal?: AbortSignal): Promise<Response> {
+async function send(path: string, method: string, body: unknown, signal?: AbortSignal, idempotencyKey?: string): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (idempotencyKey) headers['Idempotency-Key'] = idempotencyKey;
   if (UNSAFE.has(method)) headers['X-CSRF-Token'] = await getCsrfToken();
   return fetch(path, {
     method,
@@ -54,13 +57,13 @@ async function send(path: string, method: string, body: unknown, signal?: AbortS
 /** Call the API; resolves with the parsed JSON (undefined for 204) or throws ApiError. */
 export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
   const method = options.method ?? 'GET';
-  let res = await send(path, method, options.body, options.signal);
+  let res = await send(path, method, options.body, options.signal, options.idempotencyKey);
   // A stale token (session expired or renewed elsewhere) earns one retry with a fresh token.
   if (res.status === 403 && UNSAFE.has(method)) {
     const err = await toApiError(res.clone());
     if (err.code.toLowerCase().includes('csrf')) {
       resetCsrfToken();
-      res = await send(path, method, options.body, options.signal);
+      res = await send(path, method, options.body, options.signal, options.idempotencyKey);
     }
   }
   if (!res.ok) throw await toApiError(res);
@@ -74,6 +77,7 @@ export interface UploadOptions {
   /** Called with the fraction of the body sent so far (0…1). */
   onProgress?: (fraction: number) => void;
   signal?: AbortSignal;
+  idempotencyKey?: string;
 }
 
 /** Parse an XMLHttpRequest's answer into the same ApiError that fetch callers get. */
@@ -89,6 +93,7 @@ function sendForm(path: string, form: FormData, token: string, options: UploadOp
     xhr.withCredentials = true;
     xhr.setRequestHeader('Accept', 'application/json');
     xhr.setRequestHeader('X-CSRF-Token', token);
+    if (options.idempotencyKey) xhr.setRequestHeader('Idempotency-Key', options.idempotencyKey);
     xhr.upload.onprogress = (e) => {
       if (e.lengthComputable && e.total > 0) options.onProgress?.(e.loaded / e.total);
     };

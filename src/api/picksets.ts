@@ -1,3 +1,4 @@
+import { useSubmissionKey } from './submissionKey';
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiRequest, apiUpload } from './client';
 import { queryKeys } from './keys';
@@ -23,12 +24,14 @@ export function usePickSet(pickSetId: string | null, revision: number | null) {
 
 export function useUploadPickSet(lineId: string) {
   const queryClient = useQueryClient();
+  const submission = useSubmissionKey();
   return useMutation({
     mutationFn: ({ file, onProgress, signal }: { file: File; onProgress: (fraction: number) => void; signal?: AbortSignal }) => {
       const form = new FormData();
       form.append('file', file, file.name);
-      return apiUpload<PickSetCreated>(`/api/lines/${encodeURIComponent(lineId)}/picksets`, form, { onProgress, signal });
+      return apiUpload<PickSetCreated>(`/api/lines/${encodeURIComponent(lineId)}/picksets`, form, { onProgress, signal, idempotencyKey: submission.current() });
     },
+    onSettled: submission.renew,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.line(lineId) }),
   });
 }

@@ -1,3 +1,4 @@
+import { useSubmissionKey } from './submissionKey';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from './client';
 import { adminKeys, reportKeys } from './keys';
@@ -54,9 +55,11 @@ export function useReportStep(reportId: string) {
 /** Start a report of a finished run (geophysicist, lead); the worker renders its PDF. */
 export function useStartReport(runId: string) {
   const queryClient = useQueryClient();
+  const submission = useSubmissionKey();
   return useMutation({
     mutationFn: (body: StartReportBody) =>
-      apiRequest<{ id: string }>(`/api/runs/${encodeURIComponent(runId)}/reports`, { method: 'POST', body }),
+      apiRequest<{ id: string }>(`/api/runs/${encodeURIComponent(runId)}/reports`, { method: 'POST', body, idempotencyKey: submission.current() }),
+    onSettled: submission.renew,
     // The new draft belongs to some project's list; refresh every list rather than guess which.
     onSuccess: () => queryClient.invalidateQueries({ predicate: (q) => q.queryKey[0] === 'projects' && q.queryKey[2] === 'reports' }),
   });

@@ -1,3 +1,4 @@
+import { useSubmissionKey } from './submissionKey';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef } from 'react';
 import type { Grid } from '../../shared/grid';
@@ -46,9 +47,11 @@ export function useRun(runId: string) {
 
 export function useStartRun(lineId: string) {
   const queryClient = useQueryClient();
+  const submission = useSubmissionKey();
   return useMutation({
-    mutationFn: (body: StartRunBody) => apiRequest<RunStarted>('/api/runs', { method: 'POST', body }),
+    mutationFn: (body: StartRunBody) => apiRequest<RunStarted>('/api/runs', { method: 'POST', body, idempotencyKey: submission.current() }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.line(lineId) }),
+    onSettled: submission.renew,
   });
 }
 

@@ -1,8 +1,8 @@
 /**
  * The "solve" job: one forward run. Loads the model version and the pick-set revision the run
- * recorded, solves every shot on worker threads, and writes fields, residuals, rays and statistics
- * in one transaction. The job id is the run id: a job picked up again after a crash starts over
- * and replaces whatever an earlier attempt wrote, so a run never has two sets of residuals.
+ * recorded, solves the shots on worker threads and stores each shot (field, residuals, rays) as it
+ * finishes, then the statistics. The job id is the run id: a job picked up again after a crash
+ * starts over, first removing what an earlier attempt stored, so a run never has two sets of residuals.
  */
 import { availableParallelism } from 'node:os';
 import type { Job } from 'bullmq';
@@ -14,18 +14,20 @@ import { loadModelVersion } from '../../server/services/models';
 import { listRevisions, loadPicks } from '../../server/services/pickSets';
 import { pickIndexOf, prepareRunInputs } from '../../server/services/runInputs';
 import { HttpError } from '../../server/http/errors';
+import type { PlacedShot } from '../../shared/picks';
 import { workerExecArgv } from '../threads/exec-argv';
 import type { RunShotResult, RunShotTask } from '../threads/run-shot';
 import { shareModel } from '../threads/shared-model';
-import { saveRunResults, type ShotOutput } from './solveResults';
+import { clearRunResults, finishRun, saveShotResults, type StoredShot } from './solveResults';
 
 export class RunCancelled extends Error {}
 
+const THREADS = Math.max(1, availableParallelism());
 let pool: Piscina<RunShotTask, RunShotResult> | null = null;
 function threads(): Piscina<RunShotTask, RunShotResult> {
   pool ??= new Piscina({
     filename: new URL('../threads/run-shot.ts', import.meta.url).href,
-    maxThreads: Math.max(1, availableParallelism()),
+    maxThreads: THREADS,
     idleTimeout: 5 * 60_000,
     execArgv: workerExecArgv(),
   });
@@ -44,15 +46,17 @@ export async function solveJob(job: Job<{ runId: string }>): Promise<{ runId: st
   const { runId } = job.data;
   const [run] = await updateReturning<RunRow>(
     `UPDATE runs SET status = 'running', started_at = now(), shots_done = 0, attempts = attempts + 1, error = NULL
-     WHERE id = $1 AND status IN ('queued', 'running') RETURNING model_id, pick_set_id, pick_set_revision, scheme_order`,
+     WHERE id = $1 AND status IN ('queued', 'running') RETURNING model_id, pick_set_id, pick_set_revision, scheme_order, attempts`,
     [runId],
   );
   if (!run) return { runId, status: (await statusOf(runId)) ?? 'missing' }; // cancelled before it started
+  await clearRunResults(runId);
   try {
-    const outputs = await solveShots(runId, run, job);
-    const done = await saveRunResults(runId, outputs.shots, outputs.solveSeconds, outputs.activeNodes);
+    const done = await solveShots(runId, run, job);
     return { runId, status: done ? 'done' : ((await statusOf(runId)) ?? 'missing') };
   } catch (err) {
+    // A cancelled or failed run keeps no half set of shots.
+    await clearRunResults(runId).catch(() => undefined);
     if (err instanceof RunCancelled) return { runId, status: 'cancelled' };
     const message = err instanceof HttpError ? err.message : `The solve stopped with an error: ${(err as Error).message}`;
     await dataSource.query(`UPDATE runs SET status = 'failed', error = $2, finished_at = now() WHERE id = $1 AND status = 'running'`, [runId, message]);
@@ -65,40 +69,70 @@ interface RunRow {
   pick_set_id: string;
   pick_set_revision: number;
   scheme_order: 1 | 2;
+  attempts: number;
 }
 
-async function solveShots(runId: string, run: RunRow, job: Job) {
+async function solveShots(runId: string, run: RunRow, job: Job): Promise<boolean> {
   const [model, picks, revisions] = await Promise.all([loadModelVersion(run.model_id), loadPicks(run.pick_set_id), listRevisions(run.pick_set_id)]);
   const revision = revisions.find((r) => r.number === run.pick_set_revision);
   if (!revision) throw new Error(`pick-set revision ${run.pick_set_revision} is missing`);
   const { raster, shots, excluded } = prepareRunInputs(model.model, picks, revision.exclusions.map((e) => e.index));
-  const { grid } = raster;
   const shared = shareModel(raster);
   let activeNodes = 0;
   for (let i = 0; i < raster.active.length; i++) activeNodes += raster.active[i];
 
-  let done = 0;
+  const stored: StoredShot[] = [];
   let solveSeconds = 0;
-  let cancelled = false;
-  const results = await Promise.all(
-    shots.map(async (shot): Promise<ShotOutput> => {
-      const r = await threads().run({ grid, ...shared, source: shot.source, receivers: shot.receivers, order: run.scheme_order, modelKey: run.model_id });
-      if (!r.ok) throw new Error(`shot ${shot.shotId}: ${r.message}`);
-      solveSeconds += r.solveSeconds;
-      done++;
-      // Progress for the page, and a look at whether someone cancelled in the meantime.
-      const [row] = await updateReturning<{ status: string }>('UPDATE runs SET shots_done = $2 WHERE id = $1 RETURNING status', [runId, done]);
-      if (row?.status !== 'running') cancelled = true;
-      await job.updateProgress({ done, total: shots.length });
-      const residuals: ResidualInput[] = shot.picks.map((p, i) => ({
-        shotId: shot.shotId, receiverX: p.receiverX, receiverZ: shot.receivers[2 * i + 1], observed: p.time, computed: r.times[i], sigma: p.sigma,
-      }));
-      return {
-        shotId: shot.shotId, source: shot.source, field: r.field,
-        picks: computeResiduals(residuals).map((res, i) => ({ ...res, pickIndex: pickIndexOf(shot.picks[i]), excluded: excluded.has(pickIndexOf(shot.picks[i])), ray: r.rays[i] })),
-      };
-    }),
-  );
-  if (cancelled || (await statusOf(runId)) !== 'running') throw new RunCancelled();
-  return { shots: results, solveSeconds, activeNodes };
+  // The first shot that fails (or finds the run cancelled) stops the others: queued shots are
+  // withdrawn from the thread pool, shots in flight finish but are not stored.
+  const stop = new AbortController();
+  const solveOne = async (shot: PlacedShot): Promise<void> => {
+    const r = await threads().run(
+      { grid: raster.grid, ...shared, source: shot.source, receivers: shot.receivers, order: run.scheme_order, modelKey: run.model_id },
+      { signal: stop.signal },
+    );
+    if (!r.ok) throw new Error(`shot ${shot.shotId}: ${r.message}`);
+    if (stop.signal.aborted) return;
+    solveSeconds += r.solveSeconds;
+    const residuals = residualsOf(shot, r.times, excluded);
+    const saved = await saveShotResults(runId, run.attempts, {
+      shotId: shot.shotId, source: shot.source, field: r.field, picks: residuals.map((p, i) => ({ ...p, ray: r.rays[i] })),
+    });
+    if (!saved) throw new RunCancelled();
+    stored.push({ shotId: shot.shotId, picks: residuals });
+    await job.updateProgress({ done: stored.length, total: shots.length });
+  };
+  await runAll(shots, THREADS, solveOne, stop);
+  return finishRun(runId, run.attempts, stored, solveSeconds, activeNodes);
+}
+
+function residualsOf(shot: PlacedShot, times: Float64Array, excluded: Set<number>) {
+  const inputs: ResidualInput[] = shot.picks.map((p, i) => ({
+    shotId: shot.shotId, receiverX: p.receiverX, receiverZ: shot.receivers[2 * i + 1], observed: p.time, computed: times[i], sigma: p.sigma,
+  }));
+  return computeResiduals(inputs).map((res, i) => ({ ...res, pickIndex: pickIndexOf(shot.picks[i]), excluded: excluded.has(pickIndexOf(shot.picks[i])) }));
+}
+
+/**
+ * Runs `task` over `items` with at most `limit` in flight (so at most that many fields wait in
+ * memory to be stored). The first error aborts `stop` and is thrown once the tasks in flight settle.
+ */
+export async function runAll<T>(items: readonly T[], limit: number, task: (item: T) => Promise<void>, stop: AbortController): Promise<void> {
+  let next = 0;
+  let failure: unknown = null;
+  const lane = async () => {
+    while (next < items.length && !stop.signal.aborted) {
+      const item = items[next++];
+      try {
+        await task(item);
+      } catch (err) {
+        if (!stop.signal.aborted) {
+          failure = err;
+          stop.abort();
+        }
+      }
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(limit, items.length) }, lane));
+  if (failure) throw failure;
 }
