@@ -27,7 +27,7 @@ export PORT NODE_ENV=production
 export SESSION_SECRET=${SESSION_SECRET:-$(cat "$TF_DATA/session-secret")}
 
 node --import tsx scripts/migrate.ts
-node --import tsx scripts/seed.ts
+node --import tsx scripts/seed.ts --only-in-demo-mode
 log "building the client"
 npx vite build --logLevel error
 

@@ -7,6 +7,7 @@ import type { Queue } from 'bullmq';
 import type { Redis } from 'ioredis';
 import type pg from 'pg';
 import { requireCsrfToken } from './auth/csrf';
+import { config } from './config';
 import { passport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import { errorHandler, notFoundApi } from './http/errors';
@@ -27,6 +28,8 @@ export interface AppDeps {
 export function createApp({ redis, pgPool, queue, mailer, clientDir = path.resolve('dist') }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
+  // Behind a TLS-terminating proxy: req.secure (Secure session cookie) and req.ip (sign-in limits) come from X-Forwarded-*.
+  app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -38,7 +41,8 @@ export function createApp({ redis, pgPool, queue, mailer, clientDir = path.resol
           'upgrade-insecure-requests': null,
         },
       },
-      strictTransportSecurity: false,
+      // HSTS only where the site is served over HTTPS; not for subdomains, which Timefield does not own.
+      strictTransportSecurity: config.cookieSecure ? { maxAge: 365 * 24 * 60 * 60, includeSubDomains: false } : false,
     }),
   );
   // Model files with a raw velocity grid can be tens of MB; everything else is small.

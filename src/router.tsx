@@ -3,6 +3,7 @@ import { AppShell } from './components/AppShell';
 import { Loading } from './components/LoadState';
 import { AccountsPage } from './routes/AccountsPage';
 import { LinePage } from './routes/LinePage';
+import { MyAccountPage } from './routes/MyAccountPage';
 import { NotFoundPage } from './routes/NotFoundPage';
 import { ProjectPage } from './routes/ProjectPage';
 import { ProjectsPage } from './routes/ProjectsPage';
@@ -37,6 +38,7 @@ export const router = createBrowserRouter([
           { path: 'runs/:runId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunPage')).RunPage }) },
           { path: 'runs/:runId/compare/:otherRunId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunComparePage')).RunComparePage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },
+          { path: 'account', element: <MyAccountPage /> },
           // Reports, the mail outbox and the audit trail (issue 7), each in its own small chunk.
           { path: 'reports/:reportId', hydrateFallbackElement: <Loading what="report" />, lazy: async () => ({ Component: (await import('./routes/ReportPage')).ReportPage }) },
           { path: 'projects/:projectId/audit', hydrateFallbackElement: <Loading what="audit trail" />, lazy: async () => ({ Component: (await import('./routes/AuditPage')).AuditPage }) },

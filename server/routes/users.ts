@@ -7,7 +7,7 @@ import { authorize } from '../policies/authorize';
 import { isUuid } from '../policies/scopes';
 import { HttpError } from '../http/errors';
 import { presentUser } from '../presenters/user';
-import { createUser, updateUser } from '../services/users';
+import { createUser, directoryFor, updateUser } from '../services/users';
 
 export function usersRouter(): Router {
   const r = Router();
@@ -22,10 +22,10 @@ export function usersRouter(): Router {
     res.status(201).json(presentUser(user));
   });
 
-  // Names and e-mails of active accounts, for choosing project members.
-  r.get('/users/directory', authorize('users.directory'), async (_req, res) => {
-    const users = await dataSource.getRepository(User).find({ where: { active: true }, order: { name: 'ASC' } });
-    res.json(users.map((u) => ({ id: u.id, name: u.name, email: u.email })));
+  // Names and e-mails for choosing project members: never another project's clients (see directoryFor).
+  r.get('/users/directory', authorize('users.directory'), async (req, res) => {
+    const entries = await directoryFor(req.user!);
+    res.json(entries.map((u) => ({ id: u.id, name: u.name, email: u.email })));
   });
 
   r.patch('/users/:userId', authorize('users.update'), async (req, res) => {

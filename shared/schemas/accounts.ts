@@ -7,6 +7,7 @@ export const loginBody = z.strictObject({
   password: z.string().min(1, 'is required').max(200),
 });
 
+/** Length only; the server also refuses easily guessed passwords (server/auth/passwordStrength.ts). */
 export const password = z.string().min(10, 'must be at least 10 characters').max(200);
 export const globalRole = z.enum(['admin']).nullable();
 
@@ -26,6 +27,13 @@ export const updateUserBody = z
   })
   .refine((b) => Object.keys(b).length > 0, 'give at least one field to change');
 
+/** A signed-in user's own change; strength is checked on the server (it needs the word lists). */
+export const changePasswordBody = z.strictObject({
+  currentPassword: z.string().min(1, 'is required').max(200),
+  newPassword: password,
+});
+
 export type LoginBody = z.infer<typeof loginBody>;
 export type CreateUserBody = z.infer<typeof createUserBody>;
 export type UpdateUserBody = z.infer<typeof updateUserBody>;
+export type ChangePasswordBody = z.infer<typeof changePasswordBody>;

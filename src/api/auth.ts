@@ -60,3 +60,10 @@ export function useSignOut(leave?: () => void) {
     },
   });
 }
+
+/** Change one's own password; the server ends the user's other sessions, this one stays. */
+export function useChangePassword() {
+  return useMutation({
+    mutationFn: (body: { currentPassword: string; newPassword: string }) => apiRequest<void>('/api/auth/password', { method: 'POST', body }),
+  });
+}

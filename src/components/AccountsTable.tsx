@@ -1,8 +1,10 @@
+import { Fragment, useState } from 'react';
 import { errorMessage } from '../api/errors';
 import { useUpdateUser } from '../api/users';
 import type { User, UserPatch } from '../api/types';
 import { formatDate } from '../lib/format';
 import { Button } from './Button';
+import { ResetPasswordForm } from './forms/ResetPasswordForm';
 import { DataTable, Td, Th, Tr } from './Table';
 
 /** All accounts, with the two changes an administrator makes most: role and active/inactive. */
@@ -11,9 +13,16 @@ export function AccountsTable({ users, myId }: { users: User[]; myId: string }) 
   const sorted = [...users].sort((a, b) => Number(b.active) - Number(a.active) || a.name.localeCompare(b.name));
   const busyFor = (userId: string) => update.isPending && update.variables?.userId === userId;
   const change = (userId: string, patch: UserPatch) => update.mutate({ userId, patch });
+  const [resetting, setResetting] = useState<string | null>(null);
+  const [resetDone, setResetDone] = useState<string | null>(null);
 
   return (
     <>
+      {resetDone && (
+        <p role="status" className="mb-3 rounded-md bg-accent-50 px-4 py-2 text-accent-900">
+          New password set for {resetDone}; they have been signed out everywhere.
+        </p>
+      )}
       {update.isError && (
         <p role="alert" className="mb-3 rounded-md border border-red-300 bg-red-50 px-4 py-2 text-red-900">
           {errorMessage(update.error)}
@@ -37,7 +46,8 @@ export function AccountsTable({ users, myId }: { users: User[]; myId: string }) 
             const self = u.id === myId;
             const busy = busyFor(u.id);
             return (
-              <Tr key={u.id} testId={`account-${u.email}`}>
+              <Fragment key={u.id}>
+              <Tr testId={`account-${u.email}`}>
                 <Td className="font-semibold">
                   {u.name}
                   {self && <span className="ml-2 text-sm font-normal text-stone-500">(you)</span>}
@@ -53,6 +63,17 @@ export function AccountsTable({ users, myId }: { users: User[]; myId: string }) 
                     <span className="text-sm text-stone-500">Your own account</span>
                   ) : (
                     <span className="inline-flex justify-end gap-2">
+                      <Button
+                        variant="secondary"
+                        size="sm"
+                        aria-expanded={resetting === u.id}
+                        onClick={() => {
+                          setResetDone(null);
+                          setResetting(resetting === u.id ? null : u.id);
+                        }}
+                      >
+                        New password
+                      </Button>
                       <Button
                         variant="secondary"
                         size="sm"
@@ -75,6 +96,21 @@ export function AccountsTable({ users, myId }: { users: User[]; myId: string }) 
                   )}
                 </Td>
               </Tr>
+              {resetting === u.id && (
+                <tr>
+                  <td colSpan={6} className="bg-stone-50 px-4 py-3">
+                    <ResetPasswordForm
+                      user={u}
+                      onSaved={() => {
+                        setResetting(null);
+                        setResetDone(u.name);
+                      }}
+                      onCancel={() => setResetting(null)}
+                    />
+                  </td>
+                </tr>
+              )}
+              </Fragment>
             );
           })}
         </tbody>

@@ -43,7 +43,9 @@ function TopBar({ me }: { me: Me }) {
         <div data-testid="user-menu" className="ml-auto flex items-center gap-4">
           <div className="text-right leading-tight">
             <p data-testid="user-name" className="font-semibold text-stone-900">
-              {me.name}
+              <NavLink to="/account" title="Your account and password" className="text-stone-900 no-underline hover:text-accent-800 hover:underline">
+                {me.name}
+              </NavLink>
             </p>
             <p data-testid="user-roles" className="text-sm text-stone-600">
               {roleSummary(me)}

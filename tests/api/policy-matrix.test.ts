@@ -21,6 +21,8 @@ const EXPECTED: Record<string, Caller[]> = {
   'POST /api/auth/login': CALLERS,
   'POST /api/auth/logout': SIGNED_IN,
   'GET /api/auth/me': SIGNED_IN,
+  // Issue 16: a signed-in user changes their own password.
+  'POST /api/auth/password': SIGNED_IN,
   'GET /api/users': ['admin'],
   'POST /api/users': ['admin'],
   'GET /api/users/directory': ['admin', 'lead'],

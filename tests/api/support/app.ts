@@ -3,6 +3,7 @@ import type { Express } from 'express';
 import type { Redis } from 'ioredis';
 import type pg from 'pg';
 import { createApp } from '../../../server/app';
+import { clearLoginLimits } from '../../../server/auth/loginLimits';
 import { createPgPool } from '../../../server/auth/session';
 import { initDataSource, dataSource } from '../../../server/db/dataSource';
 import { createRedis } from '../../../server/queue/connection';
@@ -25,6 +26,7 @@ export async function startTestApp(): Promise<TestApp> {
   await initDataSource();
   const redis = createRedis();
   if (redis.status !== 'ready') await new Promise((resolve) => redis.once('ready', resolve));
+  await clearLoginLimits(redis); // sign-in counters live in Redis, which outlives one test file's world
   const pgPool = createPgPool();
   const queue = createJobQueue();
   // A mail sink of this test's own, on a free port, writing to the test database.

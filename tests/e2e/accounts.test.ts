@@ -1,0 +1,72 @@
+/**
+ * Issue 16 item 12 in the browser: one's own password change (weak one refused with the server's
+ * reason, a good one accepted) and an administrator's new-password form. Screenshots in
+ * tests/e2e/screenshots/ for a person to look at.
+ */
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD } from '../../fixtures/demo/scenario';
+import { launchBrowser, SCREENSHOT_DIR, startDemoServer, type E2eServer } from './support/server';
+
+async function signIn(page: Page, baseUrl: string, email: string, password = DEMO_PASSWORD) {
+  await page.goto(`${baseUrl}/signin`);
+  await page.getByLabel('E-mail address').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByLabel('Password').press('Enter');
+  await page.getByTestId('user-name').waitFor();
+}
+
+describe('passwords in the browser', () => {
+  let server: E2eServer;
+  let browser: Browser;
+  beforeAll(async () => {
+    mkdirSync(SCREENSHOT_DIR, { recursive: true });
+    server = await startDemoServer();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+  const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
+
+  it('changes one’s own password from the page under one’s name, refusing a weak one with the reason', async () => {
+    const page = await browser.newPage();
+    await signIn(page, server.baseUrl, 'tech@timefield.test');
+    await page.getByTestId('user-name').getByRole('link').click();
+    await page.getByRole('heading', { name: 'Your account' }).waitFor();
+    const form = page.getByTestId('change-password-form');
+    await form.getByLabel('Current password').fill(DEMO_PASSWORD);
+    await form.getByLabel('New password', { exact: true }).fill('1234567890');
+    await form.getByLabel('New password again').fill('1234567890');
+    await form.getByRole('button', { name: 'Change password' }).click();
+    await expect.poll(() => form.textContent()).toMatch(/too easy to guess/);
+    await shot(page, 'account-weak-password');
+
+    await form.getByLabel('New password', { exact: true }).fill('copper kettle wanders north');
+    await form.getByLabel('New password again').fill('copper kettle wanders north');
+    await form.getByRole('button', { name: 'Change password' }).click();
+    await page.getByTestId('password-changed').waitFor();
+    await shot(page, 'account-password-changed');
+    await page.close();
+  });
+
+  it('lets the administrator set a new password for an account', async () => {
+    const page = await browser.newPage();
+    await signIn(page, server.baseUrl, 'admin@timefield.test');
+    await page.goto(`${server.baseUrl}/admin/accounts`);
+    await page.getByTestId('account-geo@timefield.test').getByRole('button', { name: 'New password' }).click();
+    const form = page.getByTestId('reset-password-geo@timefield.test');
+    await form.getByRole('textbox').or(form.locator('input[type=password]')).first().fill('geo@timefield.test');
+    await form.getByRole('button', { name: 'Set password' }).click();
+    await expect.poll(() => form.textContent()).toMatch(/too easy to guess/);
+    await shot(page, 'accounts-reset-weak');
+    await form.locator('input[type=password]').fill('gravel kestrel lantern seven');
+    await form.getByRole('button', { name: 'Set password' }).click();
+    await expect.poll(() => page.getByRole('status').first().textContent()).toMatch(/New password set for/);
+    await shot(page, 'accounts-reset-done');
+    await page.close();
+  });
+});
