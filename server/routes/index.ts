@@ -15,5 +15,5 @@ import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
 export function apiRouters(redis: Redis, queue: Queue, mailer: Mailer): Router[] {
-  return [healthRouter(redis), authRouter(redis), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter(), runsRouter(queue), reportsRouter(queue, mailer), adminRouter()];
+  return [healthRouter(redis, queue), authRouter(redis), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter(), runsRouter(queue), reportsRouter(queue, mailer), adminRouter()];
 }

@@ -32,4 +32,17 @@ describe('GET /api/health', () => {
     }
     expect(body).toEqual({ db: 'ok', redis: 'ok', worker: 'ok' });
   });
+
+  // Issue 16 item 4: health shows the worker not ok as soon as it is gone, not when its beat goes stale (15 s).
+  it('reports a killed worker absent within a few seconds', async () => {
+    const exited = new Promise((r) => worker!.once('exit', r));
+    worker!.kill('SIGKILL');
+    await exited;
+    let body: { worker?: string } = {};
+    for (let i = 0; i < 25 && body.worker !== 'absent'; i++) {
+      await new Promise((r) => setTimeout(r, 200));
+      body = (await request(t.app).get('/api/health')).body;
+    }
+    expect(body.worker).toBe('absent');
+  });
 });
