@@ -10,7 +10,9 @@ import { requireCsrfToken } from './auth/csrf';
 import { config } from './config';
 import { passport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
+import { checkBodyShape } from './http/body-shape';
 import { errorHandler, notFoundApi } from './http/errors';
+import { smallJsonBody } from './http/json-body';
 import type { Mailer } from './mail/mailer';
 import { apiRouters } from './routes';
 
@@ -45,14 +47,13 @@ export function createApp({ redis, pgPool, queue, mailer, clientDir = path.resol
       strictTransportSecurity: config.cookieSecure ? { maxAge: 365 * 24 * 60 * 60, includeSubDomains: false } : false,
     }),
   );
-  // Model files with a raw velocity grid can be tens of MB; everything else is small.
-  app.use('/api/lines/:lineId/models', express.json({ limit: '64mb' }));
-  app.use(express.json({ limit: '1mb' }));
+  app.use(smallJsonBody);
   app.use(sessionMiddleware(pgPool));
   app.use(passport.session());
 
   const api = express.Router();
   api.use(requireCsrfToken);
+  api.use(checkBodyShape);
   api.use(...apiRouters(redis, queue, mailer));
   api.use(notFoundApi);
   app.use('/api', api);

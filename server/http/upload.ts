@@ -15,7 +15,8 @@ export function singleFile(maxBytes: number): RequestHandler {
         return next(new HttpError(413, 'too_large', `The file is larger than the limit of ${Math.round(maxBytes / 1048576)} MB. Split it into several pick files.`));
       }
       if (err instanceof multer.MulterError) return next(new HttpError(400, 'bad_upload', `The upload could not be read: ${err.message}. Send one file in the form field "file".`));
-      next(err);
+      // The multipart parser fails only on the request itself (e.g. control characters in a file name).
+      next(new HttpError(400, 'bad_upload', `The upload could not be read (${(err as Error).message}). Check the file name for unusual characters and send one file in the form field "file".`));
     });
 }
 

@@ -2,7 +2,7 @@ import { Router, type Request, type Response } from 'express';
 import type { Redis } from 'ioredis';
 import { changePasswordBody, loginBody } from '../../shared/schemas/accounts';
 import { config } from '../config';
-import { csrfTokenFor } from '../auth/csrf';
+import { csrfTokenFor, startSessionToken } from '../auth/csrf';
 import { createLoginLimits, type LoginLimits } from '../auth/loginLimits';
 import { checkCredentials } from '../auth/passport';
 import { hashingBacklogFull } from '../auth/password';
@@ -33,7 +33,7 @@ export function authRouter(redis: Redis): Router {
   const limits = createLoginLimits(redis);
 
   r.get('/auth/csrf', authorize('auth.csrf'), (req, res) => {
-    res.json({ token: csrfTokenFor(req.session) });
+    res.json({ token: csrfTokenFor(req, res) });
   });
 
   r.post('/auth/login', authorize('auth.login'), async (req, res) => {
@@ -49,6 +49,7 @@ export function authRouter(redis: Redis): Router {
     await limits.succeeded(req.ip ?? '', body.email);
     // passport 0.7 regenerates the session here, so the CSRF token must be fetched again.
     await new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
+    startSessionToken(req);
     await audit(dataSource.manager, { actorId: user.id, action: 'auth.login', objectType: 'user', objectId: user.id });
     res.json(await presentMe(user));
   });

@@ -69,6 +69,9 @@ export function linesRouter(): Router {
 
   r.post('/lines/:lineId/picksets', authorize('line.picksets.create', projectOfLine), idempotent(), singleFile(MAX_PICK_FILE_BYTES), async (req, res) => {
     if (!req.file) throw new HttpError(400, 'file_missing', 'Choose a pick file to upload (form field "file").');
+    if (/[\u0000-\u001f\u007f]/.test(req.file.originalname ?? '')) {
+      throw new HttpError(400, 'bad_file_name', 'The file name contains control characters. Rename the file and upload it again.');
+    }
     const name = req.file.originalname?.slice(0, 200) || 'picks.csv';
     const created = await importPicks(req.user!.id, req.access!.projectId, req.params.lineId as string, name, req.file.buffer);
     res.status(201).json(created);

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { rasteriseModel } from '../../shared/model';
 import { summariseRaster } from '../../shared/model/summary';
 import { HttpError } from '../http/errors';
+import { largeJsonBody } from '../http/json-body';
 import { parse } from '../http/parse';
 import { authorize } from '../policies/authorize';
 import { projectOfLine, projectOfModel } from '../policies/scopes';
@@ -18,7 +19,7 @@ export function modelsRouter(): Router {
   const r = Router();
 
   // Body: a model file (FORMATS.md §1). Query: name (default "main"), comment, basedOn.
-  r.post('/lines/:lineId/models', authorize('line.models.create', projectOfLine), async (req, res) => {
+  r.post('/lines/:lineId/models', authorize('line.models.create', projectOfLine), ...largeJsonBody, async (req, res) => {
     const q = parse(saveQuery, req.query);
     const saved = await saveModelVersion(req.user!.id, req.access!.projectId, req.params.lineId as string, req.body, {
       name: q.name, comment: q.comment, basedOn: q.basedOn ?? null,
