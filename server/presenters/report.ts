@@ -16,9 +16,13 @@ export function presentReport(r: Report, history: ReportEvent[], forClient: bool
   if (forClient) {
     return {
       id: r.id,
+      runId: r.runId,
       projectId: r.projectId,
       status: r.status,
+      // Only the approved render exists for a client; a failed render is the staff's business.
+      render: { state: approvedReady ? 'ready' : 'queued', renderedAt: r.approvedPdfRenderedAt },
       pdfReady: approvedReady,
+      options: r.options,
       createdAt: r.createdAt,
       history: history.map(({ at, action }) => ({ at, action })),
     };

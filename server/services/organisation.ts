@@ -52,8 +52,9 @@ export async function saveLogo(actorId: string, data: Buffer): Promise<'image/pn
     throw new HttpError(422, 'invalid_logo', `The logo image could not be read: ${(err as Error).message}`, [{ path: 'file', message: 'unreadable image' }]);
   }
   await dataSource.transaction(async (em) => {
-    const [row] = await em.query('UPDATE organisation SET logo = $1, logo_type = $2, updated_at = now() WHERE id = 1 RETURNING id', [data, type]);
-    if (!row) throw new HttpError(409, 'organisation_not_set', 'Save the consultancy name first, then its logo.');
+    // TypeORM answers UPDATE … RETURNING with [rows, count] (server/db/returning.ts).
+    const [rows] = await em.query('UPDATE organisation SET logo = $1, logo_type = $2, updated_at = now() WHERE id = 1 RETURNING id', [data, type]);
+    if (!rows.length) throw new HttpError(409, 'organisation_not_set', 'Save the consultancy name first, then its logo.');
     await audit(em, { actorId, action: 'organisation.logo', objectType: 'organisation', detail: { type, bytes: data.length } });
   });
   return type;

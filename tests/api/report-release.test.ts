@@ -131,6 +131,7 @@ describe('reports: release to the client and frozen inputs', () => {
     expect(seen.status).toBe('shared');
     expect(seen.history.map((h: { action: string }) => h.action)).toEqual(['create', 'submit', 'return', 'submit', 'approve', 'share']);
     for (const h of seen.history) expect(Object.keys(h).sort()).toEqual(['action', 'at']);
+    expect(seen.render).toEqual({ state: 'ready', renderedAt: expect.any(String) });
     const raw = JSON.stringify(seen);
     for (const secret of ['Internal: redo', 'Test lead', 'Test geophysicist']) expect(raw).not.toContain(secret);
 

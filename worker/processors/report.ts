@@ -8,6 +8,7 @@ import { dataSource } from '../../server/db/dataSource';
 import { loadModelVersion } from '../../server/services/models';
 import { loadRays, loadResidualRows, loadFieldRow } from '../../server/services/runResults';
 import { takeReportSnapshot } from '../../server/services/reportSnapshot';
+import { loadLogo } from '../../server/services/organisation';
 import type { ReportOptions, ReportSnapshot } from '../../server/entities/Report';
 import { renderReportPdf } from '../report/render';
 import type { ReportInput, RunStatsJson } from '../report/types';
@@ -60,6 +61,8 @@ export async function gatherReportInput(reportId: string): Promise<ReportInput> 
     status: r.status,
     date: new Date(),
     consultancy: snap.consultancy.name,
+    consultancyAddress: snap.consultancy.address,
+    consultancyLogo: (await loadLogo())?.data ?? null,
     project: snap.project,
     line: { name: snap.line.name, notes: snap.line.notes },
     preparedBy: snap.preparedBy,

@@ -9,9 +9,16 @@ import { COLOUR, CONTENT, PAGE, SIZE } from './style';
 
 export const COVER_TITLE = 'Seismic refraction summary';
 
+/** Room for the consultancy's logo at the top right of the cover, pt (the image is fitted inside). */
+const LOGO = { width: 120, height: 50 };
+
 export function drawCover(ctx: ReportContext): void {
   const { doc, input } = ctx;
-  drawText(doc.fontSize(SIZE.subheading).fillColor(COLOUR.accent), input.consultancy, FONT.semibold, CONTENT.left, CONTENT.top, { width: CONTENT.width });
+  const logoBox = input.consultancyLogo ? LOGO : null;
+  const nameWidth = CONTENT.width - (logoBox ? logoBox.width + 16 : 0);
+  if (logoBox) doc.image(input.consultancyLogo!, CONTENT.right - logoBox.width, CONTENT.top, { fit: [logoBox.width, logoBox.height], align: 'right' });
+  drawText(doc.fontSize(SIZE.subheading).fillColor(COLOUR.accent), input.consultancy, FONT.semibold, CONTENT.left, CONTENT.top, { width: nameWidth });
+  if (input.consultancyAddress) drawText(doc.fontSize(SIZE.small).fillColor(COLOUR.muted), input.consultancyAddress, FONT.regular, CONTENT.left, doc.y + 2, { width: nameWidth });
   doc.save().lineWidth(1.2).strokeColor(COLOUR.accent).moveTo(CONTENT.left, doc.y + 6).lineTo(CONTENT.left + 60, doc.y + 6).stroke().restore();
 
   ctx.y = 190;
