@@ -20,6 +20,10 @@ export class OrganisationAndReportSnapshots1764690000000 implements MigrationInt
     await q.query(`ALTER TABLE reports ADD COLUMN snapshot jsonb NULL`);
     await q.query(`ALTER TABLE reports ADD COLUMN approved_pdf bytea NULL`);
     await q.query(`ALTER TABLE reports ADD COLUMN approved_pdf_rendered_at timestamptz NULL`);
+    // Reports approved before this change: their last finished render was the one approval queued.
+    await q.query(`
+      UPDATE reports SET approved_pdf = pdf, approved_pdf_rendered_at = pdf_rendered_at
+      WHERE status IN ('approved', 'shared') AND render_state = 'ready' AND pdf IS NOT NULL`);
   }
 
   async down(q: QueryRunner): Promise<void> {

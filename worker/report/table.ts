@@ -82,8 +82,8 @@ export function drawTable(ctx: ReportContext, o: TableOptions): void {
 const LINE = 1.2;
 
 /**
- * Splits a cell into lines no wider than `width`: at spaces where it can, otherwise between any two
- * characters (identifiers such as shot ids have no spaces).
+ * Splits a cell into lines no wider than `width`: at a space (dropped) or after a hyphen, underscore
+ * or slash (kept) where it can, otherwise between any two characters (ids may have none of these).
  */
 export function wrapCell(doc: PDFKit.PDFDocument, text: string, width: number, size: number): string[] {
   if (textWidth(doc, text, size) <= width) return [text];
@@ -91,13 +91,17 @@ export function wrapCell(doc: PDFKit.PDFDocument, text: string, width: number, s
   let line = '';
   for (const ch of text) {
     if (line && textWidth(doc, line + ch, size) > width) {
-      const space = line.lastIndexOf(' ');
-      if (space > 0 && ch !== ' ') {
-        lines.push(line.slice(0, space));
-        line = line.slice(space + 1) + ch;
+      const at = Math.max(line.lastIndexOf(' '), line.lastIndexOf('-'), line.lastIndexOf('_'), line.lastIndexOf('/'));
+      if (ch === ' ') {
+        lines.push(line);
+        line = '';
+      } else if (at > 0) {
+        const keep = line[at] === ' ' ? at : at + 1;
+        lines.push(line.slice(0, keep));
+        line = line.slice(at + 1) + ch;
       } else {
-        lines.push(line.trimEnd());
-        line = ch === ' ' ? '' : ch;
+        lines.push(line);
+        line = ch;
       }
     } else line += ch;
   }
