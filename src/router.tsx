@@ -42,6 +42,7 @@ export const router = createBrowserRouter([
           // Reports, the mail outbox and the audit trail (issue 7), each in its own small chunk.
           { path: 'reports/:reportId', hydrateFallbackElement: <Loading what="report" />, lazy: async () => ({ Component: (await import('./routes/ReportPage')).ReportPage }) },
           { path: 'projects/:projectId/audit', hydrateFallbackElement: <Loading what="audit trail" />, lazy: async () => ({ Component: (await import('./routes/AuditPage')).AuditPage }) },
+          { path: 'admin/organisation', hydrateFallbackElement: <Loading what="organisation" />, lazy: async () => ({ Component: (await import('./routes/OrganisationPage')).OrganisationPage }) },
           { path: 'admin/outbox', hydrateFallbackElement: <Loading what="outbox" />, lazy: async () => ({ Component: (await import('./routes/OutboxPage')).OutboxPage }) },
           { path: '*', element: <NotFoundPage /> },
         ],

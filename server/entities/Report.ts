@@ -12,6 +12,23 @@ export interface ReportOptions {
   acquisitionNotes: string;
 }
 
+/**
+ * The report's inputs that can still change after it is made. Stations and names are edited in
+ * place, so they are copied; the run (its fields, residuals, rays and stats) is immutable once done
+ * and a model version never changes, so those are referred to by id.
+ */
+export interface ReportSnapshot {
+  takenAt: string;
+  project: { name: string; site: string; clientOrganisation: string };
+  line: { id: string; name: string; notes: string };
+  stations: { station: number; x: number; z: number }[];
+  runId: string;
+  modelVersionId: string;
+  pickSet: { file: string; revision: number };
+  preparedBy: string;
+  consultancy: { name: string; address: string };
+}
+
 /** A PDF summary of one run and its review. Every step is in the audit log (object_type 'report'). */
 @Entity('reports')
 export class Report {
@@ -41,6 +58,17 @@ export class Report {
 
   @Column({ type: 'timestamptz', name: 'pdf_rendered_at', nullable: true })
   pdfRenderedAt: Date | null;
+
+  /** What the report was made from, frozen at creation and again at submission (server/services/reportSnapshot.ts). */
+  @Column({ type: 'jsonb', nullable: true })
+  snapshot: ReportSnapshot | null;
+
+  /** The approved render, kept apart so that a client can never be given the draft. */
+  @Column({ type: 'bytea', name: 'approved_pdf', nullable: true, select: false })
+  approvedPdf: Buffer | null;
+
+  @Column({ type: 'timestamptz', name: 'approved_pdf_rendered_at', nullable: true })
+  approvedPdfRenderedAt: Date | null;
 
   @Column({ type: 'uuid', name: 'reviewed_by', nullable: true })
   reviewedBy: string | null;

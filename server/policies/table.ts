@@ -56,6 +56,9 @@ export const policyTable = {
   'project.reports.list': { roles: MEMBERS },
   'project.audit.read': { admin: true, roles: ['lead'] },
   'outbox.read': { admin: true },
+  // Name, address and logo print on every report a client receives: nothing in them is secret.
+  'organisation.read': 'signed_in',
+  'organisation.update': { admin: true },
 
   'pickset.read': { roles: STAFF },
   'pickset.revise': { roles: ['geophysicist'] },

@@ -7,15 +7,33 @@ export interface ReportEvent {
   comment: string;
 }
 
-/** GET /api/reports/:reportId — state and history (never the PDF bytes). */
-export function presentReport(r: Report, history: ReportEvent[]) {
+/**
+ * GET /api/reports/:reportId — state and history (never the PDF bytes). A client sees the state
+ * and the dates of each step only: review comments and staff names stay internal.
+ */
+export function presentReport(r: Report, history: ReportEvent[], forClient: boolean) {
+  const approvedReady = r.approvedPdfRenderedAt !== null;
+  if (forClient) {
+    return {
+      id: r.id,
+      runId: r.runId,
+      projectId: r.projectId,
+      status: r.status,
+      // Only the approved render exists for a client; a failed render is the staff's business.
+      render: { state: approvedReady ? 'ready' : 'queued', renderedAt: r.approvedPdfRenderedAt },
+      pdfReady: approvedReady,
+      options: r.options,
+      createdAt: r.createdAt,
+      history: history.map(({ at, action }) => ({ at, action })),
+    };
+  }
   return {
     id: r.id,
     runId: r.runId,
     projectId: r.projectId,
     status: r.status,
-    render: { state: r.renderState, error: r.renderError ?? undefined, renderedAt: r.pdfRenderedAt },
-    pdfReady: r.renderState === 'ready' || r.pdfRenderedAt !== null,
+    render: { state: r.renderState, error: r.renderError ?? undefined, renderedAt: r.pdfRenderedAt, approvedRenderedAt: r.approvedPdfRenderedAt },
+    pdfReady: r.renderState === 'ready' || r.pdfRenderedAt !== null || approvedReady,
     options: r.options,
     createdAt: r.createdAt,
     history,

@@ -9,11 +9,12 @@ import { pickSetsRouter } from './pickSets';
 import { runsRouter } from './runs';
 import { reportsRouter } from './reports';
 import { adminRouter } from './admin';
+import { organisationRouter } from './organisation';
 import type { Mailer } from '../mail/mailer';
 import { projectsRouter } from './projects';
 import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
 export function apiRouters(redis: Redis, queue: Queue, mailer: Mailer): Router[] {
-  return [healthRouter(redis, queue), authRouter(redis), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter(), runsRouter(queue), reportsRouter(queue, mailer), adminRouter()];
+  return [healthRouter(redis, queue), authRouter(redis), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), modelsRouter(), runsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter()];
 }

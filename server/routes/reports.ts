@@ -12,10 +12,13 @@ import { presentReport } from '../presenters/report';
 import { getReport, listProjectReports, loadPdf, reportHistory } from '../services/reportQueries';
 import { startReport, stepReport, type ReportStep } from '../services/reports';
 
+/** Clients (members without report.read_unshared) see only approved renders and a redacted history. */
+const isClientView = (req: Request) => !allows('report.read_unshared', req.access!.role, req.user!.globalRole === 'admin');
+
 /** A report that is not yet shared exists, for a client, only as "not for you yet". */
 async function readableReport(req: Request) {
   const report = await getReport(req.params.reportId as string);
-  if (report.status !== 'shared' && !allows('report.read_unshared', req.access!.role, req.user!.globalRole === 'admin')) {
+  if (report.status !== 'shared' && isClientView(req)) {
     throw new HttpError(403, 'forbidden', 'This report has not been shared with you yet.');
   }
   return report;
@@ -33,12 +36,12 @@ export function reportsRouter(queue: Queue, mailer: Mailer): Router {
 
   r.get('/reports/:reportId', authorize('report.read', projectOfReport), async (req, res) => {
     const report = await readableReport(req);
-    res.json(presentReport(report, await reportHistory(report.id)));
+    res.json(presentReport(report, await reportHistory(report.id), isClientView(req)));
   });
 
   r.get('/reports/:reportId/pdf', authorize('report.read', projectOfReport), async (req, res) => {
     const report = await readableReport(req);
-    const pdf = await loadPdf(report.id);
+    const pdf = await loadPdf(report.id, isClientView(req));
     if (!pdf) throw new HttpError(409, 'pdf_not_ready', 'The PDF is still being prepared. Try again in a few seconds.');
     res.type('application/pdf').attachment(`timefield-report-${report.id.slice(0, 8)}.pdf`).send(pdf);
   });
@@ -47,7 +50,7 @@ export function reportsRouter(queue: Queue, mailer: Mailer): Router {
     r.post(`/reports/:reportId/${step}`, authorize(STEP_ACTIONS[step], projectOfReport), async (req, res) => {
       const { comment } = parse(reportStepBody, req.body);
       const result = await stepReport(req.user!, req.access!.projectId, req.params.reportId as string, step, comment, queue, mailer);
-      res.json({ ...presentReport(result.report, await reportHistory(result.report.id)), mailed: result.mailed, mailError: result.mailError });
+      res.json({ ...presentReport(result.report, await reportHistory(result.report.id), false), mailed: result.mailed, mailError: result.mailError });
     });
   }
 

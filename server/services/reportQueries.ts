@@ -19,9 +19,11 @@ export async function reportHistory(id: string): Promise<ReportEvent[]> {
   return rows.map((r: ReportEvent) => ({ at: r.at, action: r.action.replace(/^report\./, ''), actor: r.actor, comment: r.comment }));
 }
 
-export async function loadPdf(id: string): Promise<Buffer | null> {
-  const [row] = await dataSource.query('SELECT pdf FROM reports WHERE id = $1', [id]);
-  return row?.pdf ?? null;
+/** The PDF to hand out: the approved render once it exists; the draft only to staff (`approvedOnly` false). */
+export async function loadPdf(id: string, approvedOnly: boolean): Promise<Buffer | null> {
+  const [row] = await dataSource.query('SELECT pdf, approved_pdf FROM reports WHERE id = $1', [id]);
+  if (!row) return null;
+  return row.approved_pdf ?? (approvedOnly ? null : row.pdf);
 }
 
 /** Reports of a project, newest first; `sharedOnly` for clients. */

@@ -8,6 +8,7 @@ import type { Mailer } from '../mail/mailer';
 import type { StartReportBody } from '../../shared/schemas/reports';
 import { audit } from './audit';
 import { mailForStep } from './reportMail';
+import { takeReportSnapshot } from './reportSnapshot';
 
 export type ReportStep = 'submit' | 'approve' | 'return' | 'share';
 
@@ -29,7 +30,8 @@ export async function startReport(actorId: string, projectId: string, runId: str
     throw new HttpError(422, 'validation_failed', `shotId: this run has shots ${shots.map((s) => s.shot_id).join(', ')}`, [{ path: 'shotId', message: 'not a shot of this run' }]);
   }
   const report = await dataSource.transaction(async (em) => {
-    const saved = await em.save(em.create(Report, { runId, projectId, status: 'draft', renderState: 'queued', options: { shotId, isoVelocity: body.isoVelocity, acquisitionNotes: body.acquisitionNotes }, createdBy: actorId }));
+    const snapshot = await takeReportSnapshot(em, runId, actorId);
+    const saved = await em.save(em.create(Report, { runId, projectId, status: 'draft', renderState: 'queued', options: { shotId, isoVelocity: body.isoVelocity, acquisitionNotes: body.acquisitionNotes }, snapshot, createdBy: actorId }));
     await audit(em, { actorId, action: 'report.create', objectType: 'report', objectId: saved.id, projectId, detail: { runId } });
     return saved;
   });
@@ -64,15 +66,22 @@ export async function stepReport(actor: Express.User, projectId: string, reportI
     if (!from.includes(found.status)) {
       throw new HttpError(409, 'invalid_step', `A ${found.status} report cannot be ${PAST[step]}; it must be ${from.join(' or ')} first.`);
     }
+    // A client may only ever receive the approved render; it must exist before sharing.
+    if (step === 'share') {
+      const [{ ready }] = await em.query('SELECT approved_pdf IS NOT NULL AS ready FROM reports WHERE id = $1', [reportId]);
+      if (!ready) throw new HttpError(409, 'approved_pdf_not_ready', 'The approved PDF has not been made yet (or its render failed); share the report once it is ready.');
+    }
     found.status = to;
+    // What the reviewer approves is what was submitted: freeze the inputs now.
+    if (step === 'submit') found.snapshot = await takeReportSnapshot(em, found.runId, found.createdBy);
     if (step === 'approve') found.reviewedBy = actor.id;
-    if (step === 'approve') found.renderState = 'queued';
+    if (step === 'submit' || step === 'approve') found.renderState = 'queued';
     await em.save(found);
     await audit(em, { actorId: actor.id, action: `report.${step}`, objectType: 'report', objectId: reportId, projectId, detail: { comment, status: to } });
     return found;
   });
-  // The approved PDF names its reviewer and its status on the cover.
-  if (step === 'approve') await queueRender(queue, reportId);
+  // The submitted draft shows the frozen inputs; the approved PDF names its reviewer and status.
+  if (step === 'submit' || step === 'approve') await queueRender(queue, reportId);
   const mail = await mailForStep(step, report, actor, comment);
   try {
     await mailer.send(mail);

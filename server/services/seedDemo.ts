@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import type { DataSource } from 'typeorm';
 import { parseStationCsv } from '../../shared/stations';
-import { demoLine, demoProject, demoUsers, DEMO_PASSWORD } from '../../fixtures/demo/scenario';
+import { demoConsultancy, demoLine, demoProject, demoUsers, DEMO_PASSWORD } from '../../fixtures/demo/scenario';
 import { hashPassword } from '../auth/password';
 import { PickSet, Project, ProjectMember, Station, SurveyLine, User, VelocityModel } from '../entities';
 import { importPicks } from './importPicks';
@@ -9,6 +9,9 @@ import { saveModelVersion } from './models';
 import { replaceStations } from './stations';
 
 const DEMO_FILES = 'fixtures/demo';
+
+/** An invented postal address for the invented consultancy (no real place). */
+const DEMO_CONSULTANCY_ADDRESS = '4 Quarry Lane, Cobbleford, Westmarch (fictional)';
 
 /** Creates the demo accounts, project, memberships and line when absent. Safe to run again. */
 export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
@@ -31,6 +34,12 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
         created++;
       }
     }
+    // The invented consultancy goes into the organisation setting, unless an administrator has set one.
+    const [org] = await em.query(
+      `INSERT INTO organisation (id, name, address) VALUES (1, $1, $2) ON CONFLICT (id) DO NOTHING RETURNING id`,
+      [demoConsultancy, DEMO_CONSULTANCY_ADDRESS],
+    );
+    if (org) created++;
     if (!(await em.existsBy(SurveyLine, { projectId: project.id, name: demoLine.name }))) {
       await em.save(em.create(SurveyLine, { projectId: project.id, ...demoLine }));
       created++;

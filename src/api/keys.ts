@@ -36,5 +36,6 @@ export const reportKeys = {
 /** Administration and oversight: the mail outbox and each project's audit trail. */
 export const adminKeys = {
   outbox: ['outbox'] as const,
+  organisation: ['organisation'] as const,
   audit: (projectId: string) => ['projects', projectId, 'audit'] as const,
 };

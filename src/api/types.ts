@@ -359,8 +359,9 @@ export interface ReportSummary {
 export interface ReportEvent {
   at: string;
   action: 'create' | ReportStep;
-  actor: string | null;
-  comment: string;
+  /** Staff only: a client sees when each step happened, not who took it or what they wrote. */
+  actor?: string | null;
+  comment?: string;
 }
 
 /** GET /api/reports/:reportId */
@@ -369,7 +370,7 @@ export interface ReportDetail {
   runId: string;
   projectId: string;
   status: ReportStatus;
-  render: { state: ReportRenderState; error?: string; renderedAt: string | null };
+  render: { state: ReportRenderState; error?: string; renderedAt: string | null; approvedRenderedAt?: string | null };
   pdfReady: boolean;
   options: { shotId: string; isoVelocity: number; acquisitionNotes: string };
   createdAt: string;
@@ -409,4 +410,12 @@ export interface AuditEntry {
   detail: Record<string, unknown> | null;
   actor: string | null;
   actorEmail: string | null;
+}
+
+/** GET /api/organisation: the consultancy printed on every report. */
+export interface Organisation {
+  name: string;
+  address: string;
+  hasLogo: boolean;
+  updatedAt: string | null;
 }

@@ -35,6 +35,11 @@ function TopBar({ me }: { me: Me }) {
             </NavLink>
           )}
           {isAdmin(me) && (
+            <NavLink to="/admin/organisation" className={navClass}>
+              Organisation
+            </NavLink>
+          )}
+          {isAdmin(me) && (
             <NavLink to="/admin/outbox" className={navClass}>
               Mail outbox
             </NavLink>

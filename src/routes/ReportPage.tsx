@@ -116,7 +116,7 @@ function TeamView({ report, role }: { report: ReportDetail; role: ProjectRole | 
   );
 }
 
-/** What a client sees: the PDF, the caution, and when it was shared (the team's review notes stay internal). */
+/** What a client sees: the PDF, the caution, and when it was shared (the team's names and review notes stay internal; the API leaves them out). */
 function ClientView({ report }: { report: ReportDetail }) {
   const shared = [...report.history].reverse().find((e) => e.action === 'share');
   return (
@@ -131,10 +131,9 @@ function ClientView({ report }: { report: ReportDetail }) {
           <p className="mt-1 max-w-prose text-stone-700">{NEXT_FOR_CLIENT}</p>
           {shared && (
             <p data-testid="shared-by" className="mt-3 text-stone-700">
-              Shared by <strong>{shared.actor ?? 'the project lead'}</strong> on {dateTime(shared.at)}.
+              Shared with you on {dateTime(shared.at)}.
             </p>
           )}
-          {shared?.comment && <blockquote className="mt-2 rounded-md border-l-4 border-stone-300 bg-stone-50 px-3 py-2 whitespace-pre-wrap">{shared.comment}</blockquote>}
         </div>
       </div>
     </>

@@ -57,6 +57,11 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/projects/:projectId/reports': MEMBERS_A,
   'GET /api/projects/:projectId/audit': ['admin', 'lead'],
   'GET /api/outbox': ['admin'],
+  // Issue 16: administrators write the organisation setting; it prints on every report, so any signed-in account may read it.
+  'GET /api/organisation': SIGNED_IN,
+  'PUT /api/organisation': ['admin'],
+  'GET /api/organisation/logo': SIGNED_IN,
+  'PUT /api/organisation/logo': ['admin'],
   'GET /api/picksets/:pickSetId': STAFF_A,
   'POST /api/picksets/:pickSetId/revisions': ['geophysicist'],
   'GET /api/picksets/:pickSetId/file': STAFF_A,

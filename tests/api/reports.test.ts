@@ -76,6 +76,8 @@ describe('reports: PDF, review workflow, client access and mail', () => {
     await step(geo, 'submit', 'Section shows shot F.').expect(200);
     const approved = await step(lead, 'approve', 'Fine.');
     expect(approved.body).toMatchObject({ status: 'approved', mailed: ['geophysicist@world.test'] });
+    // Sharing waits for the approved render (tests/api/report-release.test.ts).
+    await waitFor(async () => ((await geo.get(`/api/reports/${reportId}`)).body.render.approvedRenderedAt ? true : undefined), 60_000, 'the approved PDF');
     const shared = await step(lead, 'share');
     expect(shared.body).toMatchObject({ status: 'shared', mailed: ['client@world.test'] });
     expect((await step(lead, 'share')).status).toBe(409);

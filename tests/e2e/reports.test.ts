@@ -152,6 +152,8 @@ describe('reports: review workflow, client delivery, outbox and audit trail in t
     await status(lead).and(lead.locator('[data-status="submitted"]')).waitFor();
     expect(await takeStep(lead, 'approve', 'Checked against the run; fine.', 'approved')).toMatch(/Approved\. E-mail sent to geo@timefield\.test\./);
     expect(await lead.getByTestId('report-next').textContent()).toMatch(/shares it with the client/);
+    // Issue 16: sharing waits for the approved render, so the client can never be handed the draft.
+    await lead.locator('[data-testid="step-share"]:not([disabled])').waitFor({ timeout: 60_000 });
     expect(await takeStep(lead, 'share', 'The depth table is on page 4.', 'shared')).toMatch(/Shared with the client\. E-mail sent to client@timefield\.test\./);
     const actions = await lead.getByTestId('history-entry').evaluateAll((els) => els.map((e) => e.getAttribute('data-action')));
     expect(actions).toEqual(['create', 'submit', 'return', 'submit', 'approve', 'share']);
@@ -204,7 +206,9 @@ describe('reports: review workflow, client delivery, outbox and audit trail in t
 
     await table.getByRole('link', { name: /Report on line TQ-L1/ }).click();
     await page.getByTestId('pdf-panel').waitFor();
-    expect(await page.getByTestId('shared-by').textContent()).toMatch(/Shared by Helen Marsh/);
+    // Issue 16: a client sees when, not who (nor the team's comments).
+    expect(await page.getByTestId('shared-by').textContent()).toMatch(/Shared with you on/);
+    expect(await page.locator('main').textContent()).not.toMatch(/Helen Marsh|depth table is on page 4/);
     expect(await page.getByTestId('report-caution').textContent()).toMatch(/non-unique/);
     // The team's review notes and the run behind the report stay internal.
     expect(await page.getByTestId('report-history').count()).toBe(0);

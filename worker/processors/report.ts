@@ -5,11 +5,11 @@
 import { inflateRawSync } from 'node:zlib';
 import type { Job } from 'bullmq';
 import { dataSource } from '../../server/db/dataSource';
-import { demoConsultancy } from '../../fixtures/demo/scenario';
 import { loadModelVersion } from '../../server/services/models';
 import { loadRays, loadResidualRows, loadFieldRow } from '../../server/services/runResults';
-import { listStations } from '../../server/services/stations';
-import type { ReportOptions } from '../../server/entities/Report';
+import { takeReportSnapshot } from '../../server/services/reportSnapshot';
+import { loadLogo } from '../../server/services/organisation';
+import type { ReportOptions, ReportSnapshot } from '../../server/entities/Report';
 import { renderReportPdf } from '../report/render';
 import type { ReportInput, RunStatsJson } from '../report/types';
 
@@ -19,7 +19,12 @@ export async function reportJob(job: Job<{ reportId: string }>): Promise<{ repor
   try {
     const input = await gatherReportInput(reportId);
     const pdf = await renderReportPdf(input);
-    await dataSource.query(`UPDATE reports SET pdf = $2, render_state = 'ready', pdf_rendered_at = now() WHERE id = $1`, [reportId, pdf]);
+    // An approved render goes to its own column: the draft file is never what a client receives.
+    const approved = input.status === 'approved' || input.status === 'shared';
+    const column = approved ? 'approved_pdf' : 'pdf';
+    // A draft render that ends after approval must not mark the approved render, still to come, as ready.
+    const state = approved ? `'ready'` : `CASE WHEN status IN ('approved', 'shared') THEN render_state ELSE 'ready' END`;
+    await dataSource.query(`UPDATE reports SET ${column} = $2, ${column}_rendered_at = now(), render_state = ${state} WHERE id = $1`, [reportId, pdf]);
     return { reportId, bytes: pdf.length };
   } catch (err) {
     await dataSource.query(`UPDATE reports SET render_state = 'failed', render_error = $2 WHERE id = $1`, [reportId, `The PDF could not be made: ${(err as Error).message}`]);
@@ -27,22 +32,23 @@ export async function reportJob(job: Job<{ reportId: string }>): Promise<{ repor
   }
 }
 
+/**
+ * The report's frozen snapshot (stations, names, consultancy) plus the run's stored results, which
+ * never change once the run is done. A report made before snapshots existed gets one taken now.
+ */
 export async function gatherReportInput(reportId: string): Promise<ReportInput> {
   const [r] = await dataSource.query(
-    `SELECT rep.status, rep.options, rep.run_id, author.name AS prepared_by, reviewer.name AS reviewed_by,
-            p.name AS project, p.site, p.client_organisation, l.id AS line_id, l.name AS line, l.notes AS line_notes,
-            run.model_id, run.scheme_order, run.created_at AS run_created_at, run.stats, run.pick_set_revision, s.file_name
-     FROM reports rep JOIN runs run ON run.id = rep.run_id JOIN survey_lines l ON l.id = run.line_id JOIN projects p ON p.id = l.project_id
-     JOIN pick_sets s ON s.id = run.pick_set_id
-     LEFT JOIN users author ON author.id = rep.created_by LEFT JOIN users reviewer ON reviewer.id = rep.reviewed_by
+    `SELECT rep.status, rep.options, rep.snapshot, rep.run_id, rep.created_by, reviewer.name AS reviewed_by,
+            run.scheme_order, run.created_at AS run_created_at, run.stats
+     FROM reports rep JOIN runs run ON run.id = rep.run_id LEFT JOIN users reviewer ON reviewer.id = rep.reviewed_by
      WHERE rep.id = $1`,
     [reportId],
   );
   if (!r) throw new Error('the report no longer exists');
   const options = r.options as ReportOptions;
-  const [model, stations, residuals, field, rays, shots] = await Promise.all([
-    loadModelVersion(r.model_id),
-    listStations(r.line_id),
+  const snap: ReportSnapshot = r.snapshot ?? (await takeReportSnapshot(dataSource.manager, r.run_id, r.created_by));
+  const [model, residuals, field, rays, shots] = await Promise.all([
+    loadModelVersion(snap.modelVersionId),
     loadResidualRows(r.run_id),
     loadFieldRow(r.run_id, options.shotId),
     loadRays(r.run_id, options.shotId),
@@ -54,16 +60,18 @@ export async function gatherReportInput(reportId: string): Promise<ReportInput> 
     reportId,
     status: r.status,
     date: new Date(),
-    consultancy: demoConsultancy,
-    project: { name: r.project, site: r.site, clientOrganisation: r.client_organisation },
-    line: { name: r.line, notes: r.line_notes },
-    preparedBy: r.prepared_by ?? 'unknown',
+    consultancy: snap.consultancy.name,
+    consultancyAddress: snap.consultancy.address,
+    consultancyLogo: (await loadLogo())?.data ?? null,
+    project: snap.project,
+    line: { name: snap.line.name, notes: snap.line.notes },
+    preparedBy: snap.preparedBy,
     reviewedBy: r.reviewed_by ?? null,
-    acquisitionNotes: options.acquisitionNotes || r.line_notes,
-    stations,
+    acquisitionNotes: options.acquisitionNotes || snap.line.notes,
+    stations: snap.stations,
     shots: shots.map((s: { shot_id: string; source_x: number; source_z: number }) => ({ shotId: s.shot_id, sourceX: s.source_x, sourceZ: s.source_z })),
     model: { name: model.name, version: model.version, comment: model.comment, file: model.model },
-    run: { id: r.run_id, order: r.scheme_order, createdAt: r.run_created_at, pickSetFile: r.file_name, pickSetRevision: r.pick_set_revision, stats: r.stats as RunStatsJson },
+    run: { id: r.run_id, order: r.scheme_order, createdAt: r.run_created_at, pickSetFile: snap.pickSet.file, pickSetRevision: snap.pickSet.revision, stats: r.stats as RunStatsJson },
     residuals: residuals.map((x: { shotId: string; receiverX: number; observedMs: number; computedMs: number; residualMs: number; sigmaMs: number; excluded: boolean }) => ({
       shotId: x.shotId, receiverX: x.receiverX, observedMs: x.observedMs, computedMs: x.computedMs, residualMs: x.residualMs, sigmaMs: x.sigmaMs, excluded: x.excluded,
     })),

@@ -2,22 +2,29 @@
 import type { ReportContext } from './context';
 import { labelValues } from './flow';
 import { FONT } from './fonts';
+import { drawText } from './glyph-runs';
 import { isoDate } from './format';
 import { sectionNumber, sectionTitle } from './outline';
 import { COLOUR, CONTENT, PAGE, SIZE } from './style';
 
 export const COVER_TITLE = 'Seismic refraction summary';
 
+/** Room for the consultancy's logo at the top right of the cover, pt (the image is fitted inside). */
+const LOGO = { width: 120, height: 50 };
+
 export function drawCover(ctx: ReportContext): void {
   const { doc, input } = ctx;
-  doc.font(FONT.semibold).fontSize(SIZE.subheading).fillColor(COLOUR.accent).text(input.consultancy, CONTENT.left, CONTENT.top, { width: CONTENT.width });
+  const logoBox = input.consultancyLogo ? LOGO : null;
+  const nameWidth = CONTENT.width - (logoBox ? logoBox.width + 16 : 0);
+  if (logoBox) doc.image(input.consultancyLogo!, CONTENT.right - logoBox.width, CONTENT.top, { fit: [logoBox.width, logoBox.height], align: 'right' });
+  drawText(doc.fontSize(SIZE.subheading).fillColor(COLOUR.accent), input.consultancy, FONT.semibold, CONTENT.left, CONTENT.top, { width: nameWidth });
+  if (input.consultancyAddress) drawText(doc.fontSize(SIZE.small).fillColor(COLOUR.muted), input.consultancyAddress, FONT.regular, CONTENT.left, doc.y + 2, { width: nameWidth });
   doc.save().lineWidth(1.2).strokeColor(COLOUR.accent).moveTo(CONTENT.left, doc.y + 6).lineTo(CONTENT.left + 60, doc.y + 6).stroke().restore();
 
   ctx.y = 190;
   doc.font(FONT.semibold).fontSize(SIZE.title).fillColor(COLOUR.ink).text(COVER_TITLE, CONTENT.left, ctx.y, { width: CONTENT.width });
-  doc.font(FONT.regular).fontSize(SIZE.subtitle).fillColor(COLOUR.muted)
-    .text(`Forward travel-time model of line ${input.line.name}`, CONTENT.left, doc.y + 4, { width: CONTENT.width });
-  doc.font(FONT.semibold).fontSize(SIZE.subtitle + 2).fillColor(COLOUR.ink).text(input.project.name, CONTENT.left, doc.y + 26, { width: CONTENT.width });
+  drawText(doc.fontSize(SIZE.subtitle).fillColor(COLOUR.muted), `Forward travel-time model of line ${input.line.name}`, FONT.regular, CONTENT.left, doc.y + 4, { width: CONTENT.width });
+  drawText(doc.fontSize(SIZE.subtitle + 2).fillColor(COLOUR.ink), input.project.name, FONT.semibold, CONTENT.left, doc.y + 26, { width: CONTENT.width });
   ctx.y = doc.y + 22;
 
   labelValues(ctx, [
@@ -42,11 +49,11 @@ export function drawCover(ctx: ReportContext): void {
   doc.font(FONT.regular).fontSize(SIZE.body);
   const h = doc.heightOfString(note, { width: CONTENT.width - 24 }) + 18;
   doc.save().lineWidth(0.8).strokeColor(approved ? COLOUR.accent : COLOUR.shot).rect(CONTENT.left, boxTop, CONTENT.width, h).stroke().restore();
-  doc.fillColor(COLOUR.ink).text(note, CONTENT.left + 12, boxTop + 9, { width: CONTENT.width - 24 });
+  drawText(doc.fillColor(COLOUR.ink), note, FONT.regular, CONTENT.left + 12, boxTop + 9, { width: CONTENT.width - 24 });
   ctx.y = boxTop + h + 10;
 
-  doc.font(FONT.regular).fontSize(SIZE.small).fillColor(COLOUR.muted).text(
+  drawText(doc.fontSize(SIZE.small).fillColor(COLOUR.muted),
     `Produced with Timefield from run ${input.run.id} (${isoDate(input.run.createdAt)}), model "${input.model.name}" version ${input.model.version}, pick set ${input.run.pickSetFile} revision ${input.run.pickSetRevision}.`,
-    CONTENT.left, PAGE.height - 120, { width: CONTENT.width },
+    FONT.regular, CONTENT.left, PAGE.height - 120, { width: CONTENT.width },
   );
 }

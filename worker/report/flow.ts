@@ -1,6 +1,7 @@
 /** Flowing text blocks: section headings, paragraphs, bullet lists, captions and label–value lists. */
 import type { ReportContext } from './context';
 import { FONT } from './fonts';
+import { drawText } from './glyph-runs';
 import { sectionHeadingText, type SectionKey } from './outline';
 import { COLOUR, CONTENT, GAP, SIZE } from './style';
 
@@ -12,8 +13,7 @@ export function sectionHeading(ctx: ReportContext, key: SectionKey, o: { newPage
     ctx.ensureSpace(120);
   }
   const { doc } = ctx;
-  doc.font(FONT.semibold).fontSize(SIZE.heading).fillColor(COLOUR.accent);
-  doc.text(sectionHeadingText(key, ctx.input), CONTENT.left, ctx.y, { width: CONTENT.width });
+  drawText(doc.fontSize(SIZE.heading).fillColor(COLOUR.accent), sectionHeadingText(key, ctx.input), FONT.semibold, CONTENT.left, ctx.y, { width: CONTENT.width });
   ctx.y = doc.y + 3;
   doc.save().lineWidth(0.6).strokeColor(COLOUR.rule).moveTo(CONTENT.left, ctx.y).lineTo(CONTENT.right, ctx.y).stroke().restore();
   ctx.y += GAP.afterHeading + 2;
@@ -22,17 +22,17 @@ export function sectionHeading(ctx: ReportContext, key: SectionKey, o: { newPage
 export function subheading(ctx: ReportContext, title: string): void {
   ctx.ensureSpace(60);
   const { doc } = ctx;
-  doc.font(FONT.semibold).fontSize(SIZE.subheading).fillColor(COLOUR.ink);
-  doc.text(title, CONTENT.left, ctx.y, { width: CONTENT.width });
+  drawText(doc.fontSize(SIZE.subheading).fillColor(COLOUR.ink), title, FONT.semibold, CONTENT.left, ctx.y, { width: CONTENT.width });
   ctx.y = doc.y + 3;
 }
 
 export function paragraph(ctx: ReportContext, text: string, o: { size?: number; colour?: string; italic?: boolean; gap?: number } = {}): void {
   const { doc } = ctx;
   const size = o.size ?? SIZE.body;
-  doc.font(o.italic ? FONT.italic : FONT.regular).fontSize(size).fillColor(o.colour ?? COLOUR.ink);
+  const font = o.italic ? FONT.italic : FONT.regular;
+  doc.font(font).fontSize(size).fillColor(o.colour ?? COLOUR.ink);
   ctx.ensureSpace(Math.min(doc.heightOfString(text, { width: CONTENT.width, lineGap: 1.5 }), 3 * size * 1.4));
-  doc.text(text, CONTENT.left, ctx.y, { width: CONTENT.width, lineGap: 1.5 });
+  drawText(doc, text, font, CONTENT.left, ctx.y, { width: CONTENT.width, lineGap: 1.5 });
   ctx.y = doc.y + (o.gap ?? GAP.paragraph);
 }
 
@@ -55,10 +55,10 @@ export function bullets(ctx: ReportContext, items: { lead?: string; text: string
     doc.fillColor(COLOUR.accent).circle(CONTENT.left + 3.5, ctx.y + SIZE.body * 0.62, 1.4).fill();
     doc.fillColor(COLOUR.ink);
     if (item.lead) {
-      doc.font(FONT.semibold).text(`${item.lead} `, CONTENT.left + indent, ctx.y, { width, lineGap: 1.5, continued: true });
-      doc.font(FONT.regular).text(item.text, { lineGap: 1.5 });
+      drawText(doc, `${item.lead} `, FONT.semibold, CONTENT.left + indent, ctx.y, { width, lineGap: 1.5, continued: true });
+      drawText(doc, item.text, FONT.regular, undefined, undefined, { lineGap: 1.5 });
     } else {
-      doc.text(item.text, CONTENT.left + indent, ctx.y, { width, lineGap: 1.5 });
+      drawText(doc, item.text, FONT.regular, CONTENT.left + indent, ctx.y, { width, lineGap: 1.5 });
     }
     ctx.y = doc.y + 4;
   }
@@ -72,7 +72,7 @@ export function caption(ctx: ReportContext, kind: 'Figure' | 'Table', text: stri
   const h = doc.heightOfString(`${kind} ${n}. ${text}`, { width: CONTENT.width, lineGap: 1 });
   ctx.ensureSpace(h);
   doc.font(FONT.semibold).fillColor(COLOUR.ink).text(`${kind} ${n}. `, CONTENT.left, ctx.y, { width: CONTENT.width, lineGap: 1, continued: true });
-  doc.font(FONT.regular).fillColor(COLOUR.muted).text(text, { lineGap: 1 });
+  drawText(doc.fillColor(COLOUR.muted), text, FONT.regular, undefined, undefined, { lineGap: 1 });
   ctx.y = doc.y + GAP.block;
   return n;
 }
@@ -95,8 +95,8 @@ export function labelValues(ctx: ReportContext, rows: [string, string][], o: { l
     const h = Math.max(doc.heightOfString(v, { width: width - lw }), size * 1.3);
     ctx.ensureSpace(h);
     const y = ctx.y;
-    doc.fillColor(COLOUR.muted).text(k, left, y, { width: lw - 8 });
-    doc.fillColor(COLOUR.ink).text(v, left + lw, y, { width: width - lw });
+    drawText(doc.fillColor(COLOUR.muted), k, FONT.regular, left, y, { width: lw - 8 });
+    drawText(doc.fillColor(COLOUR.ink), v, FONT.regular, left + lw, y, { width: width - lw });
     ctx.y = Math.max(doc.y, y + size * 1.3) + 2.5;
   }
 }

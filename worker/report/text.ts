@@ -4,6 +4,7 @@
  * on its page.
  */
 import { FONT, type FontName } from './fonts';
+import { glyphRuns, mixedWidth } from './glyph-runs';
 import { COLOUR } from './style';
 
 export interface LabelOptions {
@@ -22,18 +23,26 @@ export interface LabelOptions {
 const CAP = 0.66;
 
 export function label(doc: PDFKit.PDFDocument, text: string, x: number, y: number, o: LabelOptions): { width: number; height: number } {
-  doc.font(o.font ?? FONT.regular).fontSize(o.size);
-  const width = doc.widthOfString(text);
+  const font = o.font ?? FONT.regular;
+  doc.font(font).fontSize(o.size);
+  const width = mixedWidth(doc, text, font);
   const dx = o.align === 'center' ? -width / 2 : o.align === 'right' ? -width : 0;
   const valign = o.valign ?? 'baseline';
   const dy = valign === 'top' ? CAP * o.size : valign === 'middle' ? (CAP * o.size) / 2 : 0;
   doc.save();
   if (o.rotate) doc.rotate(-o.rotate, { origin: [x, y] });
-  doc.fillColor(o.colour ?? COLOUR.ink).text(text, x + dx, y + dy, { lineBreak: false, baseline: 'alphabetic' });
+  doc.fillColor(o.colour ?? COLOUR.ink);
+  // Each run of glyphs from one face is placed after the previous one (see glyph-runs.ts).
+  let at = x + dx;
+  for (const run of glyphRuns(text, font)) {
+    doc.font(run.font).text(run.text, at, y + dy, { lineBreak: false, baseline: 'alphabetic' });
+    at += doc.widthOfString(run.text);
+  }
+  doc.font(font);
   doc.restore();
   return { width, height: CAP * o.size };
 }
 
 export function textWidth(doc: PDFKit.PDFDocument, text: string, size: number, font: FontName = FONT.regular): number {
-  return doc.font(font).fontSize(size).widthOfString(text);
+  return mixedWidth(doc.fontSize(size), text, font);
 }

@@ -11,7 +11,10 @@ export interface ReportInput {
   status: string;
   /** Date the PDF was produced. */
   date: Date;
+  /** The consultancy's name, from the organisation setting; its postal address and logo (PNG/JPEG) when set. */
   consultancy: string;
+  consultancyAddress?: string;
+  consultancyLogo?: Buffer | null;
   project: { name: string; site: string; clientOrganisation: string };
   line: { name: string; notes: string };
   preparedBy: string;

@@ -9,7 +9,7 @@ const DOT: Record<ReportEvent['action'], string> = {
   share: 'bg-emerald-800',
 };
 
-/** Who did what to the report and when, oldest first, with their comments in full. */
+/** Who did what to the report and when, oldest first, with their comments in full (for a client: what and when only). */
 export function HistoryTimeline({ events }: { events: ReportEvent[] }) {
   if (events.length === 0) return <p className="text-stone-600">No steps recorded yet.</p>;
   return (
@@ -18,7 +18,14 @@ export function HistoryTimeline({ events }: { events: ReportEvent[] }) {
         <li key={i} data-testid="history-entry" data-action={e.action} className="relative mb-5 pl-6 last:mb-0">
           <span aria-hidden="true" className={`absolute top-2 -left-[7px] h-3 w-3 rounded-full ring-2 ring-white ${DOT[e.action] ?? DOT.create}`} />
           <p>
-            <strong className="text-stone-900">{e.actor ?? 'A former member'}</strong> <span className="text-stone-800">{(EVENT_LABELS[e.action] ?? e.action).toLowerCase()}</span>
+            {/* A client's history has no actor at all (undefined); null is an account since removed. */}
+            {e.actor === undefined ? (
+              <span className="text-stone-800">{EVENT_LABELS[e.action] ?? e.action}</span>
+            ) : (
+              <>
+                <strong className="text-stone-900">{e.actor ?? 'A former member'}</strong> <span className="text-stone-800">{(EVENT_LABELS[e.action] ?? e.action).toLowerCase()}</span>
+              </>
+            )}
           </p>
           <p className="text-sm text-stone-600">
             <time dateTime={e.at}>{dateTime(e.at)}</time>

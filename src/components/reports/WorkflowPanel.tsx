@@ -64,6 +64,8 @@ export function WorkflowPanel({ report, role }: { report: ReportDetail; role: Pr
   const steps = stepsFor(role, report.status);
   // A step someone else has made impossible meanwhile (the report moved on) folds its form away.
   const shown = open && steps.includes(open) ? open : null;
+  // The API refuses to share until the approved render exists (409); say so before anyone tries.
+  const shareWaits = !report.render.approvedRenderedAt;
 
   function openStep(s: ReportStep) {
     step.reset();
@@ -114,13 +116,23 @@ export function WorkflowPanel({ report, role }: { report: ReportDetail; role: Pr
               aria-expanded={shown === s}
               className={shown === s ? 'ring-2 ring-accent-600/50 ring-offset-1' : ''}
               onClick={() => (shown === s ? cancel() : openStep(s))}
+              disabled={s === 'share' && shareWaits}
+              aria-describedby={s === 'share' && shareWaits ? 'share-waits' : undefined}
               data-testid={`step-${s}`}
             >
               {STEP_WORDING[s].button}
             </Button>
           ))}
         </div>
-      ) : (
+      ) : null}
+      {steps.includes('share') && shareWaits && (
+        <p id="share-waits" data-testid="share-waits" className="mt-2 text-sm text-stone-600">
+          {report.render.state === 'failed'
+            ? 'The approved PDF could not be made, so there is nothing to share yet. The client never receives the draft.'
+            : 'The approved PDF is being made; it can be shared once it is ready (the client never receives the draft).'}
+        </p>
+      )}
+      {steps.length === 0 && (
         <p data-testid="no-steps" className="mt-3 text-sm text-stone-600">
           {role === 'geophysicist' || role === 'lead' || role === 'field_tech'
             ? 'There is no step for you to take on this report right now.'

@@ -78,3 +78,12 @@ export function readPpm(path: string): { width: number; height: number; rgb: Uin
   const height = Number(header[2]);
   return { width, height, rgb: new Uint8Array(buf.buffer, buf.byteOffset + at, width * height * 3) };
 }
+
+/** Every word pdftotext finds on one page, with its box in PDF points (origin top left). */
+export function wordBoxes(pdf: string, page: number): { text: string; xMin: number; xMax: number; yMin: number; yMax: number }[] {
+  const html = run('pdftotext', ['-bbox', '-enc', 'UTF-8', '-f', String(page), '-l', String(page), pdf, '-']);
+  const decode = (s: string) => s.replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&amp;/g, '&');
+  return [...html.matchAll(/<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g)].map((m) => ({
+    xMin: Number(m[1]), yMin: Number(m[2]), xMax: Number(m[3]), yMax: Number(m[4]), text: decode(m[5]),
+  }));
+}
