@@ -36,8 +36,9 @@ describe('running behind a TLS-terminating proxy', () => {
 
   it('sets a Secure session cookie over forwarded https and the session works', async () => {
     const csrf = await request(t.app).get('/api/auth/csrf').set('X-Forwarded-Proto', 'https');
+    // An anonymous visitor gets the cookie of the signed double-submit token (no session yet).
     const setCookie = (csrf.headers['set-cookie'] as unknown as string[])[0];
-    expect(setCookie).toMatch(/^tf\.sid=/);
+    expect(setCookie).toMatch(/^tf\.csrf=/);
     expect(setCookie).toMatch(/;\s*Secure/i);
 
     const { login, https } = await signInThroughProxy(emailOf('lead'), PASSWORD);
