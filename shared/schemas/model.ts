@@ -5,11 +5,15 @@
  *
  * Structural checks (types, signs, sizes) live here; geometric rules (x increasing,
  * coverage, grid size, velocity count) run afterwards as one superRefine, so a file with
- * a structural error gets those errors first. Unknown keys are kept (looseObject) so an
- * editor's extras survive a round trip.
+ * a structural error gets those errors first. Every object is strict: the extras FORMATS.md
+ * and our tools write (`description`, `edits`, `coverage`, `doi`) are listed, and any other key is
+ * refused with its path, so megabytes of junk under an unknown key are never stored.
+ * Every number is checked against its plausible range (shared/limits.ts).
  */
 import { z } from 'zod';
+import { MAX_GRID_NODES, SPACING_RANGE, VELOCITY_RANGE, X_RANGE, Z_RANGE, outOfRange } from '../limits';
 import { checkModelRules } from '../model/rules';
+import { inRange } from './ranges';
 
 /** Missing keys say "is required"; present but wrong values say what was expected. */
 const expect = (what: string, text: string) => (issue: { input?: unknown }) =>
@@ -19,26 +23,29 @@ const positive = (what: string) => finite(what).positive({ error: `${what} must 
 const count = (what: string) =>
   z.number({ error: expect(what, 'must be a whole number') }).int({ error: `${what} must be a whole number` });
 
-export const gridSchema = z.looseObject({
-  x0: finite('x0'),
-  dx: positive('dx'),
+const velocity = (what: string) => inRange(positive(what), VELOCITY_RANGE, what);
+const spacing = (what: string) => inRange(positive(what), SPACING_RANGE, what);
+
+export const gridSchema = z.strictObject({
+  x0: inRange(finite('x0'), X_RANGE, 'x0'),
+  dx: spacing('dx'),
   nx: count('nx').min(2, { error: 'nx must be at least 2' }),
-  z0: finite('z0'),
-  dz: positive('dz'),
+  z0: inRange(finite('z0'), Z_RANGE, 'z0'),
+  dz: spacing('dz'),
   nz: count('nz').min(2, { error: 'nz must be at least 2' }),
 }, { error: expect('grid', 'must be an object {x0, dx, nx, z0, dz, nz}') });
 
 /** A polyline vertex [x, z] in metres (x along the line, z elevation). */
-export const pointSchema = z.tuple([finite('x'), finite('z')], { error: 'must be a point [x, z]' });
+export const pointSchema = z.tuple([inRange(finite('x'), X_RANGE, 'x'), inRange(finite('z'), Z_RANGE, 'z')], { error: 'must be a point [x, z]' });
 export const polylineSchema = z
   .array(pointSchema, { error: 'must be a list of points [[x, z], ...]' })
   .min(2, { error: 'needs at least two points' });
 
-export const layerSchema = z.looseObject({
+export const layerSchema = z.strictObject({
   name: z.string({ error: 'name must be text' }).optional(),
   base: polylineSchema.optional(),
-  v_top: positive('v_top'),
-  v_base: positive('v_base'),
+  v_top: velocity('v_top'),
+  v_base: velocity('v_base'),
 });
 
 /**
@@ -46,10 +53,10 @@ export const layerSchema = z.looseObject({
  * node (ix, iz) gets velocity v (m/s). Later edits of the same node win. Edits on air
  * nodes do not turn them into ground.
  */
-export const editSchema = z.looseObject({
+export const editSchema = z.strictObject({
   ix: count('ix').min(0, { error: 'ix must be ≥ 0' }),
   iz: count('iz').min(0, { error: 'iz must be ≥ 0' }),
-  v: positive('v'),
+  v: velocity('v'),
 });
 
 /** Up to this many per-value errors are reported for a raw velocity grid. */
@@ -68,20 +75,32 @@ export const velocityGridSchema = z
       if (typeof v !== 'number' || !Number.isFinite(v) || v <= 0) {
         reported++;
         ctx.addIssue({ code: 'custom', path: [i], message: `${JSON.stringify(v)} is not a velocity > 0 (m/s)` });
+      } else if (outOfRange(v, VELOCITY_RANGE)) {
+        reported++;
+        ctx.addIssue({ code: 'custom', path: [i], message: `velocity ${outOfRange(v, VELOCITY_RANGE)}` });
       }
     }
   });
 
+/** Optional per-node or per-column numbers written by the inversion tool (FORMATS.md §3: coverage, doi); null where undefined. */
+const numberListSchema = (what: string) =>
+  z
+    .array(z.number({ error: `${what} values must be finite numbers or null` }).nullable(), { error: `${what} must be a list of numbers` })
+    .max(MAX_GRID_NODES, { error: `${what} has more values than the largest grid` });
+
 export const MODEL_FORMAT = 'timefield-model/1';
 
 export const modelFileSchema = z
-  .looseObject({
+  .strictObject({
     format: z.literal(MODEL_FORMAT, { error: `format must be "${MODEL_FORMAT}"` }),
+    description: z.string({ error: 'description must be text' }).max(2000, { error: 'description must be at most 2 000 characters' }).optional(),
     grid: gridSchema,
     surface: polylineSchema.optional(),
     velocity: velocityGridSchema.optional(),
     layers: z.array(layerSchema, { error: 'layers must be a list' }).min(1, { error: 'needs at least one layer' }).optional(),
-    edits: z.array(editSchema, { error: 'edits must be a list' }).optional(),
+    edits: z.array(editSchema, { error: 'edits must be a list' }).max(MAX_GRID_NODES, { error: 'more edits than grid nodes' }).optional(),
+    coverage: numberListSchema('coverage').optional(),
+    doi: numberListSchema('doi').optional(),
   }, { error: 'a model file must be a JSON object' })
   .superRefine((model, ctx) => {
     for (const issue of checkModelRules(model)) ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
