@@ -18,7 +18,12 @@ export function parseModelFile(json: unknown): ParseModelResult {
   if (result.success) return { ok: true, model: result.data };
   return {
     ok: false,
-    issues: result.error.issues.map((issue) => ({ path: formatJsonPath(issue.path), message: issue.message })),
+    issues: result.error.issues.flatMap((issue) =>
+      // An unknown key is named by its own path (`layers[0].junk`), not its object's.
+      issue.code === 'unrecognized_keys'
+        ? issue.keys.map((key) => ({ path: formatJsonPath([...issue.path, key]), message: 'unknown key; not part of the model file format' }))
+        : [{ path: formatJsonPath(issue.path), message: issue.message }],
+    ),
   };
 }
 

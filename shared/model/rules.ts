@@ -3,7 +3,7 @@
  * (shared/schemas/model.ts). Each problem is reported with the JSON path of the value at
  * fault, e.g. `layers[1].base[3]` / "x must increase".
  */
-import { MAX_GRID_NODES } from '../limits';
+import { MAX_GRID_NODES, outOfRange, X_RANGE, Z_RANGE } from '../limits';
 
 export interface ModelIssue {
   /** JSON path segments, e.g. ['layers', 1, 'base', 3]. */
@@ -33,6 +33,14 @@ export function checkModelRules(model: CheckedModel): ModelIssue[] {
       message: `grid has ${fmt(nodes)} nodes (nx × nz = ${grid.nx} × ${grid.nz}); the limit is ${fmt(MAX_GRID_NODES)}`,
     });
   }
+
+  // Grid extent: the far corner is a position and an elevation too (x0 and z0 are checked by the schema).
+  const xEnd = grid.x0 + (grid.nx - 1) * grid.dx;
+  const zBottom = grid.z0 - (grid.nz - 1) * grid.dz;
+  const xProblem = outOfRange(xEnd, X_RANGE);
+  if (xProblem) issues.push({ path: ['grid'], message: `the grid's right edge x0 + (nx − 1)·dx ${xProblem}` });
+  const zProblem = outOfRange(zBottom, Z_RANGE);
+  if (zProblem) issues.push({ path: ['grid'], message: `the grid's bottom z0 − (nz − 1)·dz ${zProblem}` });
 
   const hasVelocity = model.velocity !== undefined;
   const hasLayers = model.layers !== undefined;

@@ -3,7 +3,7 @@
  * A file with any error yields no picks; up to `maxErrors` errors are collected, then parsing
  * stops. Binary or non-UTF-8 content, an oversized file or too many rows stop at once.
  */
-import { MAX_PICK_FILE_BYTES, MAX_PICK_ROWS } from '../limits';
+import { MAX_PICK_FILE_BYTES, MAX_PICK_ROWS, outOfRange, SIGMA_MS_RANGE, TIME_MS_RANGE, X_RANGE, Z_RANGE, type NumberRange } from '../limits';
 import { msToS } from '../units';
 import { clip, readHeader, type ColumnIndex, type PickColumn } from './columns';
 import { parseDecimal, splitCsvLine } from './fields';
@@ -98,6 +98,13 @@ export function createPickParser(options: PickParserOptions = {}): PickParser {
     const sigmaMs = readNumber(fields, ix, 'sigma_ms', true, lineNo, fail);
     if (timeMs !== null && timeMs < 0) fail({ line: lineNo, column: 'time_ms', message: `${timeMs} is negative; a travel time must be > 0` });
     if (sigmaMs !== null && sigmaMs <= 0) fail({ line: lineNo, column: 'sigma_ms', message: `${sigmaMs} must be > 0 (or empty for ${DEFAULT_SIGMA_MS} ms)` });
+    // Plausible ranges (shared/limits.ts): junk such as 1e308 is refused here, not found late as NaN.
+    checkRange(sourceX, X_RANGE, 'source_x', lineNo, fail);
+    checkRange(sourceZ, Z_RANGE, 'source_z', lineNo, fail);
+    checkRange(receiverX, X_RANGE, 'receiver_x', lineNo, fail);
+    checkRange(receiverZ, Z_RANGE, 'receiver_z', lineNo, fail);
+    if (timeMs !== null && timeMs >= 0) checkRange(timeMs, TIME_MS_RANGE, 'time_ms', lineNo, fail);
+    if (sigmaMs !== null && sigmaMs > 0) checkRange(sigmaMs, SIGMA_MS_RANGE, 'sigma_ms', lineNo, fail);
     if (errors.length > before || sourceX === null || receiverX === null || timeMs === null) return;
 
     const pick: Pick = {
@@ -171,6 +178,13 @@ function readNumber(
   const n = parseDecimal(t);
   if (n === null) fail({ line, column, message: `${JSON.stringify(clip(t))} is not a number` });
   return n;
+}
+
+/** Reports a number outside its plausible range (null: absent or already reported). */
+function checkRange(value: number | null, range: NumberRange, column: PickColumn, line: number, fail: (e: PickError) => void): void {
+  if (value === null) return;
+  const problem = outOfRange(value, range);
+  if (problem) fail({ line, column, message: problem });
 }
 
 const sizeText = (n: number): string => (n >= 1048576 ? `${+(n / 1048576).toFixed(1)} MB` : `${n} characters`);

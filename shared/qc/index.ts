@@ -6,3 +6,4 @@ export { findReciprocalPairs, type ReciprocalPair, type ReciprocalOptions } from
 export { flagSuspectPicks, type PickFlag, type SuspectPickOptions } from './suspect-picks';
 export { travelTimeCurves, type TravelTimeCurve } from './travel-time-curves';
 export { runPickQc, type PickQc } from './run-pick-qc';
+export { findFarPositions, positionsOfPicks, type FarPosition, type FarPositionResult, type PickPosition } from './far-positions';

@@ -6,7 +6,8 @@
  * Issue paths are `[row, column]`, e.g. `[14, 'time_ms']`.
  */
 import { z } from 'zod';
-import { MAX_PICK_ROWS } from '../limits';
+import { MAX_PICK_ROWS, SIGMA_MS_RANGE, TIME_MS_RANGE, X_RANGE, Z_RANGE } from '../limits';
+import { inRange } from './ranges';
 import { atSource, PickSetTracker } from '../picks/pick-set';
 import type { Pick } from '../picks/types';
 import { msToS } from '../units';
@@ -14,16 +15,20 @@ import { msToS } from '../units';
 const need = (what: string) => (issue: { input?: unknown }) =>
   issue.input === undefined ? `${what} is required` : `${what} must be a finite number`;
 const coord = (what: string) => z.number({ error: need(what) });
-const optionalZ = (what: string) => z.number({ error: `${what} must be a finite number or null (on the surface)` }).nullable().optional();
+const position = (what: string) => inRange(coord(what), X_RANGE, what);
+const optionalZ = (what: string) =>
+  inRange(z.number({ error: `${what} must be a finite number or null (on the surface)` }), Z_RANGE, what).nullable().optional();
 
 export const pickRowSchema = z.object({
   shot_id: z.string({ error: 'shot_id must be text' }).trim().min(1, { error: 'shot_id is empty' }),
-  source_x: coord('source_x'),
+  source_x: position('source_x'),
   source_z: optionalZ('source_z'),
-  receiver_x: coord('receiver_x'),
+  receiver_x: position('receiver_x'),
   receiver_z: optionalZ('receiver_z'),
-  time_ms: coord('time_ms').min(0, { error: 'time_ms is negative; a travel time must be > 0' }),
-  sigma_ms: z.number({ error: 'sigma_ms must be a finite number' }).positive({ error: 'sigma_ms must be > 0' }).nullable().optional(),
+  time_ms: coord('time_ms')
+    .min(0, { error: 'time_ms is negative; a travel time must be > 0' })
+    .max(TIME_MS_RANGE.max, { error: (i) => `time_ms must be between 0 and ${TIME_MS_RANGE.max} ms (got ${String(i.input)})` }),
+  sigma_ms: inRange(z.number({ error: 'sigma_ms must be a finite number' }), SIGMA_MS_RANGE, 'sigma_ms').nullable().optional(),
 });
 export type PickRow = z.infer<typeof pickRowSchema>;
 

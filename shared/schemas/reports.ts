@@ -1,9 +1,11 @@
 import { z } from 'zod';
+import { VELOCITY_RANGE } from '../limits';
+import { inRange } from './ranges';
 
 /** Body of POST /api/runs/:runId/reports. Defaults: the run's first shot, 2500 m/s (a common top-of-rock value; common practice, no source). */
 export const startReportBody = z.strictObject({
   shotId: z.string().trim().min(1).max(100).optional(),
-  isoVelocity: z.number().positive('must be a velocity above 0 m/s').max(10_000, 'must be at most 10 000 m/s').optional().default(2500),
+  isoVelocity: inRange(z.number(), VELOCITY_RANGE).optional().default(2500),
   acquisitionNotes: z.string().trim().max(4000).optional().default(''),
 });
 

@@ -1,10 +1,12 @@
 import { z } from 'zod';
+import { X_RANGE, Z_RANGE } from '../limits';
+import { inRange } from './ranges';
 
 /** One geophone station of a survey line: number, chainage x (m) and ground elevation z (m). */
 export const stationRow = z.strictObject({
   station: z.number().int('must be a whole number').positive('must be positive'),
-  x: z.number().refine(Number.isFinite, 'must be a finite number'),
-  z: z.number().refine(Number.isFinite, 'must be a finite number'),
+  x: inRange(z.number().refine(Number.isFinite, 'must be a finite number'), X_RANGE),
+  z: inRange(z.number().refine(Number.isFinite, 'must be a finite number'), Z_RANGE),
 });
 
 /** The JSON body of PUT /api/lines/:lineId/stations. Up to 10 000 stations on one line. */

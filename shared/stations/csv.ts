@@ -1,3 +1,4 @@
+import { outOfRange, X_RANGE, Z_RANGE } from '../limits';
 import { parseDecimal, splitCsvLine } from '../picks/fields';
 import type { Station } from '../schemas/stations';
 import { checkStationTable, type StationIssue } from './rules';
@@ -45,6 +46,11 @@ export function parseStationCsv(text: string): StationCsvResult {
     if (Number.isFinite(station) && (!Number.isInteger(station) || station <= 0)) {
       issues.push({ row, line, column: 'station', message: 'must be a positive whole number' });
     }
+    // Plausible ranges (shared/limits.ts), so a typo such as 1e15 is refused here rather than stored.
+    const xProblem = Number.isFinite(x) ? outOfRange(x, X_RANGE) : null;
+    if (xProblem) issues.push({ row, line, column: 'x', message: xProblem });
+    const zProblem = Number.isFinite(z) ? outOfRange(z, Z_RANGE) : null;
+    if (zProblem) issues.push({ row, line, column: 'z', message: zProblem });
     stations.push({ station, x, z });
   }
   if (!header) return { ok: false, issues: [{ row: 0, column: null, message: 'the file is empty: expected a header row station,x,z and one row per station' }] };

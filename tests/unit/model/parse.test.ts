@@ -22,11 +22,11 @@ describe('parseModelFile: good files', () => {
     if (r.ok) expect(rasteriseModel(r.model).velocity.every((v) => Number.isFinite(v) && v > 0)).toBe(true);
   });
 
-  it('keeps unknown keys and edits for a round trip', () => {
-    const r = parseModelFile({ ...base, notes: 'checked by R. Okafor', edits: [{ ix: 1, iz: 2, v: 900 }] });
+  it('keeps the known extras (description, edits) for a round trip', () => {
+    const r = parseModelFile({ ...base, description: 'checked by R. Okafor', edits: [{ ix: 1, iz: 2, v: 900 }] });
     expect(r.ok).toBe(true);
     if (r.ok) {
-      expect((r.model as Record<string, unknown>).notes).toBe('checked by R. Okafor');
+      expect(r.model.description).toBe('checked by R. Okafor');
       expect(JSON.parse(JSON.stringify(r.model)).edits).toEqual([{ ix: 1, iz: 2, v: 900 }]);
     }
   });

@@ -96,7 +96,7 @@ describe('rasteriseModel: other forms', () => {
   });
 
   it('edits paint ground nodes over the layered result and leave air alone', () => {
-    const m = rasteriseModel(load({ ...worked, edits: [{ ix: 1, iz: 4, v: 999 }, { ix: 2, iz: 0, v: 5 }] }));
+    const m = rasteriseModel(load({ ...worked, edits: [{ ix: 1, iz: 4, v: 999 }, { ix: 2, iz: 0, v: 55 }] }));
     expect(m.velocity[4 * 3 + 1]).toBe(999);
     expect(m.active[2]).toBe(0);
     expect(m.velocity[2]).toBeCloseTo(3000, 3);

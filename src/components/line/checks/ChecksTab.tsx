@@ -1,3 +1,4 @@
+import { useMemo } from 'react';
 import { errorMessage, isApiError } from '../../../api/errors';
 import { usePickSet } from '../../../api/picksets';
 import type { LineDetail } from '../../../api/types';
@@ -24,6 +25,7 @@ export function ChecksTab({
   // The newest pick set unless the address names one.
   const chosen = pickSetId && line.pickSets.some((p) => p.id === pickSetId) ? pickSetId : (line.pickSets[0]?.id ?? null);
   const detail = usePickSet(chosen, revision);
+  const stationXs = useMemo(() => line.stations.map((s) => s.x), [line.stations]);
 
   if (!chosen) {
     return (
@@ -50,7 +52,7 @@ export function ChecksTab({
       ) : !data ? (
         <Loading what="picks and checks" />
       ) : (
-        <PickSetChecks key={data.id} data={data} canExclude={canExclude} onRevisionSaved={() => onChoose(chosen, null)} />
+        <PickSetChecks key={data.id} data={data} stationXs={stationXs} canExclude={canExclude} onRevisionSaved={() => onChoose(chosen, null)} />
       )}
     </>
   );

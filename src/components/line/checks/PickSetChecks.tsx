@@ -1,9 +1,10 @@
 import { useCallback, useDeferredValue, useMemo, useState, type ReactNode } from 'react';
-import { findReciprocalPairs, flagSuspectPicks, travelTimeCurves, type QcPick } from '../../../../shared/qc';
+import { findFarPositions, findReciprocalPairs, flagSuspectPicks, positionsOfPicks, travelTimeCurves, type QcPick } from '../../../../shared/qc';
 import type { PickSetDetail } from '../../../api/types';
 import { Section } from '../../Section';
 import { ApparentVelocityPanel, type FitRequest } from './ApparentVelocityPanel';
 import { ExclusionForm } from './ExclusionForm';
+import { FarPositionsWarning } from './FarPositionsWarning';
 import type { KeptFit } from './fits';
 import { PicksTable } from './PicksTable';
 import { toQcPicks } from './qcPicks';
@@ -35,7 +36,18 @@ function readTolerance(text: string): { ms: number | null; error?: string } {
  * Every check on one revision of one pick set. Unsaved exclusions take effect at once on the
  * chart and tables, so a geophysicist sees what a new revision would change before saving it.
  */
-export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: PickSetDetail; canExclude: boolean; onRevisionSaved: (revision: number) => void }) {
+export function PickSetChecks({
+  data,
+  stationXs,
+  canExclude,
+  onRevisionSaved,
+}: {
+  data: PickSetDetail;
+  /** x of every station of the line, for the far-position warning. */
+  stationXs: readonly number[];
+  canExclude: boolean;
+  onRevisionSaved: (revision: number) => void;
+}) {
   const ex = useExclusionDraft(data, onRevisionSaved);
   // Hundreds of agreeing pairs would bury the curves in diamonds: start with those hidden.
   const [hidden, setHidden] = useState<Set<string>>(() => new Set(data.qc.reciprocalPairs.length > 40 ? [OVERLAY.pairOk] : []));
@@ -48,6 +60,7 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
   const picksByIndex = useMemo(() => new Map(data.picks.map((p) => [p.index, p])), [data.picks]);
   const curves = useMemo(() => travelTimeCurves(qcPicks), [qcPicks]);
   const flags = useMemo(() => flagSuspectPicks(qcPicks), [qcPicks]);
+  const far = useMemo(() => findFarPositions(positionsOfPicks(qcPicks), stationXs), [qcPicks, stationXs]);
   const tol = readTolerance(tolerance);
   // Typing stays responsive on a large pick set; the chart catches up with the deferred value.
   const toleranceMs = useDeferredValue(tol.ms ?? data.qc.reciprocalToleranceMs);
@@ -97,10 +110,15 @@ export function PickSetChecks({ data, canExclude, onRevisionSaved }: { data: Pic
         <Fact term="Suspect picks" tone={flags.length ? 'warn' : undefined}>
           {flags.length}
         </Fact>
+        <Fact term="Far from stations" tone={far.positions.length ? 'warn' : undefined}>
+          {far.medianSpacing === null ? '–' : far.positions.length}
+        </Fact>
         <Fact term={`Reciprocal pairs over ${toleranceMs} ms`} tone={overTolerance ? 'warn' : undefined}>
           {overTolerance} of {pairs.length}
         </Fact>
       </dl>
+
+      <FarPositionsWarning result={far} />
 
       <Section
         title="Travel-time curves"

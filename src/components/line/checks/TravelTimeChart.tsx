@@ -53,9 +53,11 @@ export const TravelTimeChart = memo(function TravelTimeChart(props: TravelTimeCh
       data={data}
       layout={layout}
       config={CONFIG}
-      onLegendClick={(e: { curveNumber: number; data: { name?: string }[] }) => {
-        const name = e.data[e.curveNumber]?.name;
-        if (name) props.onToggleTrace(name);
+      onLegendClick={(e: { curveNumber: number; data: { meta?: unknown }[] }) => {
+        // `meta` holds the raw shot id or overlay name; the drawn name is escaped (plainText).
+        const name = e.data[e.curveNumber]?.meta;
+        if (typeof name !== 'string') return false;
+        props.onToggleTrace(name);
         return false; // visibility is ours, so it survives re-renders
       }}
       onLegendDoubleClick={() => false}

@@ -1,5 +1,6 @@
 import type { PickRow } from '../../../api/types';
 import type { PickFlag, ReciprocalPair, TravelTimeCurve } from '../../../../shared/qc';
+import { plainText } from '../../plot/plainText';
 import { shotColour } from '../plot/chartTheme';
 import type { KeptFit } from './fits';
 import { showVelocity } from './numbers';
@@ -60,7 +61,9 @@ export function chartTraces({ curves, picksByIndex, excluded, hidden, flags, pai
     return {
       type: scatter,
       mode: 'lines+markers',
-      name: c.shotId,
+      // Shot ids are user text: escaped for plotly; `meta` keeps the raw id for the legend toggle.
+      name: plainText(c.shotId),
+      meta: c.shotId,
       visible: vis(c.shotId),
       x: keep.map((j) => c.x[j]),
       y: keep.map((j) => c.t[j] * 1000),
@@ -69,7 +72,7 @@ export function chartTraces({ curves, picksByIndex, excluded, hidden, flags, pai
       marker: { color: shotColour(k), size: 6 },
       unselected: KEEP,
       selected: KEEP,
-      hovertemplate: `shot ${c.shotId}<br>x %{x} m<br>t %{y:.2f} ms<extra></extra>`,
+      hovertemplate: `shot ${plainText(c.shotId)}<br>x %{x} m<br>t %{y:.2f} ms<extra></extra>`,
     };
   });
 
@@ -80,7 +83,7 @@ export function chartTraces({ curves, picksByIndex, excluded, hidden, flags, pai
     const list = pairs.filter((p) => p.flagged === flagged);
     const pts = at(list.flatMap((p) => [p.indexAB, p.indexBA]));
     const text = list.flatMap((p) => {
-      const t = `${p.shotA} ↔ ${p.shotB}: |Δt| ${(p.difference * 1000).toFixed(2)} ms`;
+      const t = `${plainText(p.shotA)} ↔ ${plainText(p.shotB)}: |Δt| ${(p.difference * 1000).toFixed(2)} ms`;
       return [t, t];
     });
     return { ...pts, text };
@@ -93,6 +96,7 @@ export function chartTraces({ curves, picksByIndex, excluded, hidden, flags, pai
     type: scatter,
     mode: 'markers',
     name,
+    meta: name,
     visible: vis(name),
     x: pts.xs,
     y: pts.ys,
@@ -117,11 +121,12 @@ export function chartTraces({ curves, picksByIndex, excluded, hidden, flags, pai
       mode: curves.length <= 16 ? 'markers+text' : 'markers',
       unselected: { marker: { opacity: 1 }, textfont: { color: '#44403c' } },
       name: OVERLAY.shots,
+      meta: OVERLAY.shots,
       visible: vis(OVERLAY.shots),
       yaxis: 'y2',
       x: curves.map((c) => c.sourceX),
       y: curves.map(() => 0.012),
-      text: curves.map((c) => c.shotId),
+      text: curves.map((c) => plainText(c.shotId)),
       textposition: 'top center',
       textfont: { size: 12, color: '#44403c' },
       marker: { symbol: 'star', size: 13, color: curves.map((_, k) => shotColour(k)), line: { width: 1, color: '#292524' } },
@@ -133,12 +138,12 @@ export function chartTraces({ curves, picksByIndex, excluded, hidden, flags, pai
   const fitTraces = fits.map((f) => ({
     type: 'scatter',
     mode: 'lines',
-    name: `${f.shotId}: ${showVelocity(f.fit.velocity)} m/s`,
+    name: `${plainText(f.shotId)}: ${showVelocity(f.fit.velocity)} m/s`,
     showlegend: false,
     x: [f.fit.xMin, f.fit.xMax],
     y: [f.fit.xMin, f.fit.xMax].map((x) => (f.fit.intercept + f.fit.slope * x) * 1000),
     line: { color: '#1c1917', width: 2.5, dash: 'dash' },
-    hovertemplate: `fit on ${f.shotId}: ${showVelocity(f.fit.velocity)} m/s<extra></extra>`,
+    hovertemplate: `fit on ${plainText(f.shotId)}: ${showVelocity(f.fit.velocity)} m/s<extra></extra>`,
   }));
 
   return [...shotTraces, ...overlays, ...fitTraces];

@@ -1,3 +1,4 @@
+import { outOfRange, X_RANGE, Z_RANGE } from '../../../../shared/limits';
 import type { Station } from '../../../api/types';
 
 /**
@@ -57,12 +58,14 @@ export function checkRows(rows: readonly DraftRow[]): { stations: Station[] | nu
     else seen.set(station, i + 1);
     if (x === null) addError(errors, row.key, 'x: enter the distance along the line (m).');
     else if (x === 'bad') addError(errors, row.key, `x: “${row.x.trim()}” is not a number.`);
+    else if (outOfRange(x, X_RANGE)) addError(errors, row.key, `x: ${outOfRange(x, X_RANGE)}.`);
     else {
       if (previousX !== null && x <= previousX) addError(errors, row.key, `x: must be greater than the row above (${previousX} m).`);
       previousX = x;
     }
     if (z === null) addError(errors, row.key, 'Elevation: enter the elevation (m).');
     else if (z === 'bad') addError(errors, row.key, `Elevation: “${row.z.trim()}” is not a number.`);
+    else if (outOfRange(z, Z_RANGE)) addError(errors, row.key, `Elevation: ${outOfRange(z, Z_RANGE)}.`);
     if (typeof station === 'number' && typeof x === 'number' && typeof z === 'number') stations.push({ station, x, z });
   });
   return { stations: errors.size === 0 ? stations : null, errors };

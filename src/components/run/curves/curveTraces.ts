@@ -1,5 +1,6 @@
 import type { Data } from 'plotly.js';
 import type { ResidualRow } from '../../../api/types';
+import { plainText } from '../../plot/plainText';
 import { shotColour } from '../plot/runChartTheme';
 import { compareShotIds } from '../table/residualFilters';
 
@@ -17,7 +18,7 @@ export function groupByShot(rows: readonly ResidualRow[]): { shotId: string; row
 }
 
 const hover = (r: ResidualRow) =>
-  `shot ${r.shotId} · receiver x ${r.receiverX} m<br>observed ${r.observedMs.toFixed(2)} ± ${r.sigmaMs.toFixed(2)} ms<br>computed ${r.computedMs.toFixed(2)} ms<br>residual ${r.residualMs >= 0 ? '+' : ''}${r.residualMs.toFixed(2)} ms${r.excluded ? '<br>excluded from the statistics' : ''}`;
+  `shot ${plainText(r.shotId)} · receiver x ${r.receiverX} m<br>observed ${r.observedMs.toFixed(2)} ± ${r.sigmaMs.toFixed(2)} ms<br>computed ${r.computedMs.toFixed(2)} ms<br>residual ${r.residualMs >= 0 ? '+' : ''}${r.residualMs.toFixed(2)} ms${r.excluded ? '<br>excluded from the statistics' : ''}`;
 
 /**
  * Every shot's picks as points with σ bars and its computed times as a line (upper panel, axis y),
@@ -34,7 +35,7 @@ export function curveTraces(rows: readonly ResidualRow[]): Data[] {
       ...common,
       type: 'scatter',
       mode: 'lines',
-      name: `${shotId} computed`,
+      name: `${plainText(shotId)} computed`,
       showlegend: false,
       x: list.map((r) => r.receiverX),
       y: list.map((r) => r.computedMs),
@@ -46,7 +47,7 @@ export function curveTraces(rows: readonly ResidualRow[]): Data[] {
       ...common,
       type: 'scatter',
       mode: 'markers',
-      name: shotId,
+      name: plainText(shotId),
       x: used.map((r) => r.receiverX),
       y: used.map((r) => r.observedMs),
       text: used.map(hover),
@@ -58,7 +59,7 @@ export function curveTraces(rows: readonly ResidualRow[]): Data[] {
       ...common,
       type: 'scatter',
       mode: 'markers',
-      name: `${shotId} residuals`,
+      name: `${plainText(shotId)} residuals`,
       showlegend: false,
       xaxis: 'x',
       yaxis: 'y2',
@@ -74,7 +75,7 @@ export function curveTraces(rows: readonly ResidualRow[]): Data[] {
         ...common,
         type: 'scatter',
         mode: 'markers',
-        name: `${shotId} excluded`,
+        name: `${plainText(shotId)} excluded`,
         showlegend: false,
         x: excluded.map((r) => r.receiverX),
         y: excluded.map((r) => r.observedMs),
