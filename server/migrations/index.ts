@@ -3,6 +3,7 @@ import { FieldData1764640000000 } from './1764640000000-FieldData';
 import { VelocityModels1764650000000 } from './1764650000000-VelocityModels';
 import { Runs1764660000000 } from './1764660000000-Runs';
 import { Reports1764670000000 } from './1764670000000-Reports';
+import { StoredReads1764700000000 } from './1764700000000-StoredReads';
 
 /** Every migration, oldest first. Add new ones at the end. */
-export const migrations = [Foundation1764633600000, FieldData1764640000000, VelocityModels1764650000000, Runs1764660000000, Reports1764670000000];
+export const migrations = [Foundation1764633600000, FieldData1764640000000, VelocityModels1764650000000, Runs1764660000000, Reports1764670000000, StoredReads1764700000000];
