@@ -1,40 +1,41 @@
-import { sToMs } from '../../shared/units';
-import { runPickQc, type QcPick } from '../../shared/qc';
-import type { PickSetHead, RevisionRow, StoredPick } from '../services/pickSets';
+import type { FarPositionResult } from '../../shared/qc';
+import type { PickSetHead, RevisionRow } from '../services/pickSets';
 
 const presentRevision = (r: RevisionRow) => ({
   number: r.number, createdAt: r.createdAt, createdBy: r.createdBy, comment: r.comment, excluded: r.exclusions.length,
 });
 
-/** A pick set at one revision: picks in ms at the edge, exclusions applied, and the quality checks. */
-export function presentPickSet(head: PickSetHead, picks: StoredPick[], revisions: RevisionRow[], revision: RevisionRow) {
-  const reasons = new Map(revision.exclusions.map((e) => [e.index, e.reason]));
-  const qcInput: QcPick[] = picks.map((p) => ({
-    index: p.index, shotId: p.shotId, sourceX: p.sourceX, receiverX: p.receiverX, time: p.time, sigma: p.sigma, excluded: reasons.has(p.index),
-  }));
-  const shots = new Map<string, { shotId: string; sourceX: number; sourceZ: number | null; picks: number }>();
-  for (const p of picks) {
-    const s = shots.get(p.shotId) ?? { shotId: p.shotId, sourceX: p.sourceX, sourceZ: p.sourceZ, picks: 0 };
-    s.picks++;
-    shots.set(p.shotId, s);
-  }
-  const RECIPROCAL_TOLERANCE_MS = 2; // common practice, no source
-  return {
-    id: head.id,
-    lineId: head.lineId,
-    fileName: head.fileName,
-    sizeBytes: head.sizeBytes,
-    createdAt: head.createdAt,
-    createdBy: head.createdBy,
-    revision: { number: revision.number, createdAt: revision.createdAt, createdBy: revision.createdBy, comment: revision.comment },
-    revisions: revisions.map(presentRevision),
-    shots: [...shots.values()],
-    picks: picks.map((p) => ({
-      index: p.index, line: p.line, shotId: p.shotId, sourceX: p.sourceX, sourceZ: p.sourceZ, receiverX: p.receiverX, receiverZ: p.receiverZ,
-      timeMs: sToMs(p.time), sigmaMs: sToMs(p.sigma), excluded: reasons.has(p.index), exclusionReason: reasons.get(p.index) ?? null,
-    })),
-    qc: { reciprocalToleranceMs: RECIPROCAL_TOLERANCE_MS, ...runPickQc(qcInput, { reciprocalToleranceS: RECIPROCAL_TOLERANCE_MS / 1000 }) },
-  };
+export interface PickSetParts {
+  head: PickSetHead;
+  revisions: RevisionRow[];
+  revision: RevisionRow;
+  shots: { shotId: string; sourceX: number; sourceZ: number | null; picks: number }[];
+  /** JSON array text of the picks (ms at the edge, exclusions applied), built by the database. */
+  picksJson: string;
+  /** JSON object text `{ reciprocalPairs, flags }`, stored per revision. */
+  qcJson: string;
+  reciprocalToleranceMs: number;
+  far: FarPositionResult;
 }
 
-export type PresentedPickSet = ReturnType<typeof presentPickSet>;
+/**
+ * A pick set at one revision: picks in ms, exclusions applied, and the quality checks, as JSON text.
+ * The two large parts arrive as text and are spliced in unparsed, so a 200 000-pick set is never
+ * turned into objects and back on the request thread.
+ */
+export function presentPickSetJson(p: PickSetParts): string {
+  const rest = JSON.stringify({
+    id: p.head.id,
+    lineId: p.head.lineId,
+    fileName: p.head.fileName,
+    sizeBytes: p.head.sizeBytes,
+    createdAt: p.head.createdAt,
+    createdBy: p.head.createdBy,
+    revision: { number: p.revision.number, createdAt: p.revision.createdAt, createdBy: p.revision.createdBy, comment: p.revision.comment },
+    revisions: p.revisions.map(presentRevision),
+    shots: p.shots,
+  });
+  const qcHead = JSON.stringify({ reciprocalToleranceMs: p.reciprocalToleranceMs, farPositions: p.far });
+  const qc = `${qcHead.slice(0, -1)},${p.qcJson.trim().slice(1)}`;
+  return `${rest.slice(0, -1)},"picks":${p.picksJson},"qc":${qc}}`;
+}

@@ -1,13 +1,15 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { rasteriseModel } from '../../shared/model';
-import { summariseRaster } from '../../shared/model/summary';
+import { gunzip } from 'node:zlib';
+import { promisify } from 'node:util';
 import { HttpError } from '../http/errors';
 import { largeJsonBody } from '../http/json-body';
 import { parse } from '../http/parse';
 import { authorize } from '../policies/authorize';
 import { projectOfLine, projectOfModel } from '../policies/scopes';
-import { loadModelVersion, saveModelVersion } from '../services/models';
+import { loadModelRaster, loadModelVersionText, saveModelVersion } from '../services/models';
+
+const gunzipAsync = promisify(gunzip);
 
 const saveQuery = z.object({
   name: z.string().trim().min(1).max(80).optional().default('main'),
@@ -28,18 +30,21 @@ export function modelsRouter(): Router {
   });
 
   r.get('/models/:modelId', authorize('model.read', projectOfModel), async (req, res) => {
-    const version = await loadModelVersion(req.params.modelId as string);
-    const raster = rasteriseModel(version.model);
-    res.json({ ...version, summary: { grid: raster.grid, ...summariseRaster(raster) } });
+    // Summary stored at save; the model file is spliced in as the stored JSON text (no parse, no re-stringify).
+    const [{ head, modelJson }, { summary }] = await Promise.all([
+      loadModelVersionText(req.params.modelId as string), loadModelRaster(req.params.modelId as string),
+    ]);
+    const rest = JSON.stringify({ ...head, summary });
+    res.type('application/json').send(`${rest.slice(0, -1)},"model":${modelJson}}`);
   });
 
   // The rasterised velocity grid, Float32 little-endian, row-major iz outer; air nodes are NaN.
   r.get('/models/:modelId/grid', authorize('model.read', projectOfModel), async (req, res) => {
-    const { model } = await loadModelVersion(req.params.modelId as string);
-    const raster = rasteriseModel(model);
-    const out = new Float32Array(raster.velocity);
-    for (let i = 0; i < out.length; i++) if (!raster.active[i]) out[i] = Number.NaN;
-    res.set('X-Grid', JSON.stringify(raster.grid)).type('application/octet-stream').send(Buffer.from(out.buffer));
+    // Stored gzip'd at save: sent as is to clients that accept gzip, else inflated off the event loop.
+    const { summary, velocityGz } = await loadModelRaster(req.params.modelId as string);
+    res.set('X-Grid', JSON.stringify(summary.grid)).type('application/octet-stream').vary('Accept-Encoding');
+    if (req.acceptsEncodings('gzip') === 'gzip') res.set('Content-Encoding', 'gzip').send(velocityGz);
+    else res.send(await gunzipAsync(velocityGz));
   });
 
   r.put('/models/:modelId', authorize('model.update', projectOfModel), () => {

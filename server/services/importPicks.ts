@@ -2,7 +2,9 @@ import { dataSource } from '../db/dataSource';
 import { PickSet, PickSetRevision } from '../entities';
 import { HttpError } from '../http/errors';
 import { formatPickError, parsePickText, type Pick } from '../../shared/picks';
+import { pickQcOffThread } from '../threads/read-pool';
 import { audit } from './audit';
+import { RECIPROCAL_TOLERANCE_MS } from './pickSetReads';
 
 export interface ImportedPickSet {
   id: string;
@@ -24,12 +26,23 @@ export async function importPicks(actorId: string, projectId: string, lineId: st
     throw new HttpError(422, 'invalid_file', `The pick file was not stored: ${formatPickError(first)}${result.errors.length > 1 ? ` (and ${result.errors.length - 1} more problems)` : ''}.`, result.errors.map((e) => ({ line: e.line ?? undefined, column: e.column ?? undefined, message: e.message })));
   }
   const { picks, shots } = result;
+  // Revision 0's quality checks, computed once here on a worker thread and stored (reads serve them as is).
+  const qc = await pickQcOffThread({
+    shotIds: picks.map((p) => p.shotId),
+    sourceX: Float64Array.from(picks, (p) => p.sourceX),
+    receiverX: Float64Array.from(picks, (p) => p.receiverX),
+    time: Float64Array.from(picks, (p) => p.time),
+    sigma: Float64Array.from(picks, (p) => p.sigma),
+    excluded: new Uint8Array(picks.length),
+    reciprocalToleranceS: RECIPROCAL_TOLERANCE_MS / 1000,
+  });
   return dataSource.transaction(async (em) => {
     const set = await em.save(
       em.create(PickSet, { lineId, fileName, sizeBytes: bytes.length, original: bytes, shotCount: shots.length, pickCount: picks.length, createdBy: actorId }),
     );
     await insertPicks(em.query.bind(em), set.id, picks);
     await em.insert(PickSetRevision, { pickSetId: set.id, number: 0, exclusions: [], comment: 'as uploaded', createdBy: actorId });
+    await em.query('INSERT INTO pick_set_qc (pick_set_id, revision, qc) VALUES ($1, 0, $2)', [set.id, JSON.stringify(qc)]);
     await audit(em, { actorId, action: 'pickset.upload', objectType: 'pick_set', objectId: set.id, projectId, detail: { fileName, shots: shots.length, picks: picks.length } });
     return { id: set.id, shots: shots.length, picks: picks.length };
   });

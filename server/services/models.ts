@@ -1,8 +1,9 @@
 import { dataSource } from '../db/dataSource';
 import { VelocityModel } from '../entities';
 import { HttpError } from '../http/errors';
-import { parseModelFile, rasteriseModel, type ModelFile } from '../../shared/model';
-import { summariseRaster } from '../../shared/model/summary';
+import { parseModelFile, type ModelFile } from '../../shared/model';
+import { rasterOffThread } from '../threads/read-pool';
+import type { RasterResult } from '../threads/read-tasks';
 import { audit } from './audit';
 
 export interface SaveModelOptions {
@@ -24,7 +25,9 @@ export function validateModelFile(json: unknown): ModelFile {
 /** Saves a new immutable version (next number for this line and name) and returns it with its warnings. */
 export async function saveModelVersion(actorId: string, projectId: string, lineId: string, json: unknown, opts: SaveModelOptions) {
   const model = validateModelFile(json);
-  const summary = summariseRaster(rasteriseModel(model));
+  // Rasterised once, off the request thread, and stored beside the version (reads serve it as is).
+  const raster = await rasterOffThread(model);
+  const { summary } = raster;
   return dataSource.transaction(async (em) => {
     // One writer per line at a time, so two saves cannot take the same number.
     await em.query('SELECT id FROM survey_lines WHERE id = $1 FOR UPDATE', [lineId]);
@@ -39,6 +42,7 @@ export async function saveModelVersion(actorId: string, projectId: string, lineI
         nx: model.grid.nx, nz: model.grid.nz, createdBy: actorId,
       }),
     );
+    await em.query('INSERT INTO model_rasters (model_id, summary, velocity_gz) VALUES ($1, $2, $3)', [saved.id, JSON.stringify(raster.summary), Buffer.from(raster.velocityGz)]);
     await audit(em, { actorId, action: 'model.save', objectType: 'velocity_model', objectId: saved.id, projectId, detail: { name: opts.name, version: next } });
     return { id: saved.id, version: next, name: opts.name, warnings: summary.warnings };
   });
@@ -69,4 +73,57 @@ export async function listModelVersions(lineId: string) {
     id: r.id, name: r.name, version: r.version, comment: r.comment, basedOn: r.based_on, nx: r.nx, nz: r.nz, createdAt: r.created_at,
     createdBy: r.created_by ? { id: r.created_by, name: r.created_by_name } : null,
   }));
+}
+
+export interface StoredRaster {
+  summary: RasterResult['summary'];
+  /** gzip of the Float32 little-endian grid, air NaN. */
+  velocityGz: Buffer;
+}
+
+/**
+ * The version's rasterised grid as stored at save time. Versions saved before the table existed
+ * are rasterised once, on a worker thread, and stored (immutable input, so never stale).
+ */
+export async function loadModelRaster(id: string): Promise<StoredRaster> {
+  const [row] = await dataSource.query('SELECT summary, velocity_gz FROM model_rasters WHERE model_id = $1', [id]);
+  if (row) return { summary: row.summary, velocityGz: row.velocity_gz };
+  // Parallel first reads of one old version share one rasterisation.
+  let pending = rasterising.get(id);
+  if (!pending) {
+    pending = rasteriseAndStore(id).finally(() => rasterising.delete(id));
+    rasterising.set(id, pending);
+  }
+  return pending;
+}
+
+const rasterising = new Map<string, Promise<StoredRaster>>();
+
+async function rasteriseAndStore(id: string): Promise<StoredRaster> {
+  const { model } = await loadModelVersion(id);
+  const raster = await rasterOffThread(model);
+  const velocityGz = Buffer.from(raster.velocityGz);
+  await dataSource.query(
+    'INSERT INTO model_rasters (model_id, summary, velocity_gz) VALUES ($1, $2, $3) ON CONFLICT (model_id) DO NOTHING',
+    [id, JSON.stringify(raster.summary), velocityGz],
+  );
+  return { summary: raster.summary, velocityGz };
+}
+
+/** Like loadModelVersion, but the model file stays JSON text (a raw 2 M-value grid is not parsed only to be sent again). */
+export async function loadModelVersionText(id: string) {
+  const [row] = await dataSource.query(
+    `SELECT m.id, m.line_id, m.name, m.version, m.comment, m.based_on, m.content::text AS content, m.created_at, m.created_by, u.name AS created_by_name
+     FROM velocity_models m LEFT JOIN users u ON u.id = m.created_by WHERE m.id = $1`,
+    [id],
+  );
+  if (!row) throw new HttpError(404, 'not_found', 'Not found.');
+  return {
+    head: {
+      id: row.id as string, lineId: row.line_id as string, name: row.name as string, version: row.version as number, comment: row.comment as string,
+      basedOn: row.based_on as string | null, createdAt: row.created_at as Date,
+      createdBy: row.created_by ? { id: row.created_by as string, name: row.created_by_name as string } : null,
+    },
+    modelJson: row.content as string,
+  };
 }
