@@ -35,6 +35,6 @@ export async function listProjectReports(projectId: string, sharedOnly: boolean)
     [projectId],
   );
   return rows.map((r: Record<string, never>) => ({
-    id: r.id, status: r.status, renderState: r.render_state, createdAt: r.created_at, runId: r.run_id, line: r.line, createdBy: r.created_by,
+    id: r.id, status: r.status, renderState: r.render_state, createdAt: r.created_at, runId: r.run_id, line: r.line, createdBy: sharedOnly ? null : r.created_by, // clients see no staff names
   }));
 }

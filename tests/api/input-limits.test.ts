@@ -67,7 +67,7 @@ describe('input limits at the edge', () => {
       ['velocity 1e-300', withLayer({ v_base: 1e-300 }), 'layers[0].v_base'],
       ['grid spacing 1e308', { ...WORLD_MODEL, grid: { ...WORLD_MODEL.grid, dx: 1e308 } }, 'grid.dx'],
       ['a megabyte of junk under an unknown key', { ...WORLD_MODEL, junk: 'j'.repeat(1024 * 1024) }, 'junk'],
-      ['an unknown key inside a layer', withLayer({ extra: [1, 2, 3] }), 'layers[0].extra'],
+      ['more than 64 kB under an unknown key inside a layer', withLayer({ extra: ['x'.repeat(70 * 1024)] }), 'layers[0].extra'],
     ])('%s → 422 with the JSON path, nothing stored', async (_name, body, path) => {
       const before = await count('velocity_models');
       const res = await save(body);

@@ -134,6 +134,9 @@ describe('reports: release to the client and frozen inputs', () => {
     expect(seen.render).toEqual({ state: 'ready', renderedAt: expect.any(String) });
     const raw = JSON.stringify(seen);
     for (const secret of ['Internal: redo', 'Test lead', 'Test geophysicist']) expect(raw).not.toContain(secret);
+    // The client's list of reports names no staff either.
+    const list = JSON.stringify((await client.get(`/api/projects/${world.projectA.id}/reports`).expect(200)).body);
+    for (const secret of ['Test lead', 'Test geophysicist']) expect(list).not.toContain(secret);
 
     for (const staff of [geo, lead, tech]) {
       const history = (await staff.get(`/api/reports/${id}`).expect(200)).body.history as { action: string; actor: string; comment: string }[];

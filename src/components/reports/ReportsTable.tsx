@@ -48,14 +48,13 @@ export function TeamReportsTable({ reports }: { reports: ReportSummary[] }) {
   );
 }
 
-/** A client's view: shared reports only, each with its download; nothing points at lines or runs. */
+/** A client's view: shared reports only, each with its download; no staff names, nothing points at lines or runs. */
 export function ClientReportsTable({ reports }: { reports: ReportSummary[] }) {
   return (
     <DataTable caption="Reports shared with you, newest first" testId="reports-table" minWidth="32rem">
       <thead>
         <tr>
           <Th>Report</Th>
-          <Th>Prepared by</Th>
           <Th>Created</Th>
           <Th>
             <span className="sr-only">Download</span>
@@ -70,7 +69,6 @@ export function ClientReportsTable({ reports }: { reports: ReportSummary[] }) {
                 Line {r.line}
               </Link>
             </Td>
-            <Td>{r.createdBy ?? '–'}</Td>
             <Td className="whitespace-nowrap text-stone-700">{dateTime(r.createdAt)}</Td>
             <Td className="text-right">
               <PdfDownload reportId={r.id} state={r.renderState} size="sm" />
