@@ -52,10 +52,10 @@ for _ in $(seq 1 100); do
   curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break
   sleep 0.2
 done
-cat <<MSG
-
-  Timefield is running at http://127.0.0.1:$PORT
-
+printf '\n  Timefield is running at http://%s:%s\n\n' "${HOST:-127.0.0.1}" "$PORT"
+# The demo accounts exist only in local demo mode (server/config.ts decides, for the seed and here).
+if node --import tsx -e "import('./server/config.ts').then((c) => process.exit(c.isLocalDemoMode(process.env) ? 0 : 1))"; then
+  cat <<MSG
   Demo sign-ins (local demo only; password for all: timefield-demo)
     admin@timefield.test   administrator
     geo@timefield.test     geophysicist
@@ -63,8 +63,10 @@ cat <<MSG
     lead@timefield.test    project lead
     client@timefield.test  client
 
-  Press Ctrl-C to stop.
-
 MSG
+else
+  printf '  No demo accounts here (not local demo mode). Create the first administrator with\n  npm run create-admin -- --email you@example.org --name "Your Name"\n\n'
+fi
+printf '  Press Ctrl-C to stop.\n\n'
 # Stop everything if the API exits on its own.
 wait "$api" || true
