@@ -3,7 +3,6 @@
  * 4xx (or 503 when a service is down) and never a 500; a large body is read only after the caller
  * is known to be allowed; an anonymous visitor costs no session row.
  */
-import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -13,11 +12,10 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { dataSource } from '../../server/db/dataSource';
+import { services } from './support/services';
 import { anonymousAgent, signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
 import { emailOf, PASSWORD, resetWorld, type World } from './support/world';
 
-const services = (...steps: string[]) =>
-  execFileSync('bash', ['-c', `source scripts/lib/test-services.sh && ${steps.join(' && ')}`], { env: process.env, stdio: 'pipe' });
 
 /**
  * Starts a POST of `announced` bytes, sends only the first MB, and resolves with the status as

@@ -5,7 +5,6 @@
  * found when a worker starts, an unreachable queue answers 503 at once and leaves no row, a
  * repeated submission with one Idempotency-Key makes one run, and a run has a cap on its shots.
  */
-import { execFileSync } from 'node:child_process';
 import { Worker } from 'bullmq';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/dataSource';
@@ -13,11 +12,10 @@ import { createRedis, QUEUE_NAME } from '../../server/queue/connection';
 import { importPicks } from '../../server/services/importPicks';
 import { MAX_SHOTS_PER_RUN } from '../../shared/limits';
 import { signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
+import { services } from './support/services';
 import { startWorker, waitFor, type WorkerProcess } from './support/worker';
 import { emailOf, PASSWORD, resetWorld, type World } from './support/world';
 
-const services = (...steps: string[]) =>
-  execFileSync('bash', ['-c', `source scripts/lib/test-services.sh && ${steps.join(' && ')}`], { env: process.env, stdio: 'pipe' });
 
 describe('job lifecycle', () => {
   let t: TestApp;

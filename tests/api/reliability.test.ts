@@ -2,13 +2,13 @@
  * Reliability of the run pipeline with real processes: a worker killed mid-run, two workers sharing
  * the queue, and PostgreSQL and Redis restarted under a running app.
  */
-import { execFileSync } from 'node:child_process';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/dataSource';
 import { importPicks } from '../../server/services/importPicks';
 import { saveModelVersion } from '../../server/services/models';
 import { signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
+import { services } from './support/services';
 import { startWorker, waitFor, type WorkerProcess } from './support/worker';
 import { emailOf, PASSWORD, resetWorld, type World } from './support/world';
 
@@ -22,9 +22,6 @@ async function heavyInputs(world: World, shots = 24) {
   return { modelId, pickSetId, picks: shots * 60, shots };
 }
 
-/** Runs a function of scripts/lib/test-services.sh (stop_redis, start_postgres, …) against the test services. */
-const services = (...steps: string[]) =>
-  execFileSync('bash', ['-c', `source scripts/lib/test-services.sh && ${steps.join(' && ')}`], { env: process.env, stdio: 'pipe' });
 
 describe('run pipeline reliability', () => {
   let t: TestApp;
