@@ -1,4 +1,5 @@
 import { AuditEntry } from './AuditEntry';
+import { Inversion } from './Inversion';
 import { Organisation } from './Organisation';
 import { PickSet } from './PickSet';
 import { PickSetRevision } from './PickSetRevision';
@@ -11,5 +12,5 @@ import { SurveyLine } from './SurveyLine';
 import { User } from './User';
 import { VelocityModel } from './VelocityModel';
 
-export { AuditEntry, Organisation, PickSet, PickSetRevision, Project, ProjectMember, Report, Run, Station, SurveyLine, User, VelocityModel };
-export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry, Station, PickSet, PickSetRevision, VelocityModel, Run, Report, Organisation];
+export { AuditEntry, Inversion, Organisation, PickSet, PickSetRevision, Project, ProjectMember, Report, Run, Station, SurveyLine, User, VelocityModel };
+export const entities = [User, Project, ProjectMember, SurveyLine, AuditEntry, Station, PickSet, PickSetRevision, VelocityModel, Run, Report, Organisation, Inversion];

@@ -57,3 +57,18 @@ export const projectOfReport: ProjectScope = async (req) => {
   const rows = await dataSource.query('SELECT project_id FROM reports WHERE id = $1', [id]);
   return rows[0]?.project_id ?? null;
 };
+
+/** POST /api/inversions names its pick set in the body; the pick set's line decides the project. */
+export const projectOfBodyPickSet: ProjectScope = async (req) => {
+  const id = req.body?.pickSetId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM pick_sets s JOIN survey_lines l ON l.id = s.line_id WHERE s.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};
+
+export const projectOfInversion: ProjectScope = async (req) => {
+  const id = req.params.inversionId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM inversions i JOIN survey_lines l ON l.id = i.line_id WHERE i.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};

@@ -46,6 +46,13 @@ export const policyTable = {
   'run.read': { roles: STAFF },
   'run.cancel': { roles: ['geophysicist', 'lead'] },
 
+  // Issue 11: geophysicists start and save inversions; leads and field technicians read them; leads
+  // may also stop one, as they may stop a run (a lead answers for the project's use of the workers).
+  'inversions.create': { roles: ['geophysicist'] },
+  'inversion.read': { roles: STAFF },
+  'inversion.cancel': { roles: ['geophysicist', 'lead'] },
+  'inversion.save_model': { roles: ['geophysicist'] },
+
   'reports.create': { roles: ['geophysicist', 'lead'] },
   // A client reads a report only once it is shared with them (checked with report.read_unshared).
   'report.read': { roles: MEMBERS },

@@ -6,7 +6,7 @@ import { createRedis, QUEUE_NAME } from './connection';
 import { logOutages } from './outage-log';
 
 /** Job kinds on the one queue; the worker dispatches by name (worker/processors). */
-export type JobName = 'solve' | 'report';
+export type JobName = 'solve' | 'report' | 'invert';
 
 /**
  * Producer side of the queue (the API). The job id is the database row's id, so a retry never

@@ -1,3 +1,4 @@
+import type { EntityManager } from 'typeorm';
 import { dataSource } from '../db/dataSource';
 import { VelocityModel } from '../entities';
 import { HttpError } from '../http/errors';
@@ -27,25 +28,27 @@ export async function saveModelVersion(actorId: string, projectId: string, lineI
   const model = validateModelFile(json);
   // Rasterised once, off the request thread, and stored beside the version (reads serve it as is).
   const raster = await rasterOffThread(model);
-  const { summary } = raster;
-  return dataSource.transaction(async (em) => {
-    // One writer per line at a time, so two saves cannot take the same number.
-    await em.query('SELECT id FROM survey_lines WHERE id = $1 FOR UPDATE', [lineId]);
-    if (opts.basedOn) {
-      const [base] = await em.query('SELECT line_id FROM velocity_models WHERE id = $1', [opts.basedOn]);
-      if (!base || base.line_id !== lineId) throw new HttpError(422, 'validation_failed', 'basedOn: no model version of this line has that id', [{ path: 'basedOn', message: 'no model version of this line has that id' }]);
-    }
-    const [{ next }] = await em.query('SELECT coalesce(max(version), 0) + 1 AS next FROM velocity_models WHERE line_id = $1 AND name = $2', [lineId, opts.name]);
-    const saved = await em.save(
-      em.create(VelocityModel, {
-        lineId, name: opts.name, version: next, comment: opts.comment, basedOn: opts.basedOn, content: model as object,
-        nx: model.grid.nx, nz: model.grid.nz, createdBy: actorId,
-      }),
-    );
-    await em.query('INSERT INTO model_rasters (model_id, summary, velocity_gz) VALUES ($1, $2, $3)', [saved.id, JSON.stringify(raster.summary), Buffer.from(raster.velocityGz)]);
-    await audit(em, { actorId, action: 'model.save', objectType: 'velocity_model', objectId: saved.id, projectId, detail: { name: opts.name, version: next } });
-    return { id: saved.id, version: next, name: opts.name, warnings: summary.warnings };
-  });
+  return dataSource.transaction((em) => insertModelVersion(em, actorId, projectId, lineId, model, raster, opts));
+}
+
+/** The insert of saveModelVersion, inside the caller's transaction (a version saved together with another change). */
+export async function insertModelVersion(em: EntityManager, actorId: string, projectId: string, lineId: string, model: ModelFile, raster: RasterResult, opts: SaveModelOptions) {
+  // One writer per line at a time, so two saves cannot take the same number.
+  await em.query('SELECT id FROM survey_lines WHERE id = $1 FOR UPDATE', [lineId]);
+  if (opts.basedOn) {
+    const [base] = await em.query('SELECT line_id FROM velocity_models WHERE id = $1', [opts.basedOn]);
+    if (!base || base.line_id !== lineId) throw new HttpError(422, 'validation_failed', 'basedOn: no model version of this line has that id', [{ path: 'basedOn', message: 'no model version of this line has that id' }]);
+  }
+  const [{ next }] = await em.query('SELECT coalesce(max(version), 0) + 1 AS next FROM velocity_models WHERE line_id = $1 AND name = $2', [lineId, opts.name]);
+  const saved = await em.save(
+    em.create(VelocityModel, {
+      lineId, name: opts.name, version: next, comment: opts.comment, basedOn: opts.basedOn, content: model as object,
+      nx: model.grid.nx, nz: model.grid.nz, createdBy: actorId,
+    }),
+  );
+  await em.query('INSERT INTO model_rasters (model_id, summary, velocity_gz) VALUES ($1, $2, $3)', [saved.id, JSON.stringify(raster.summary), Buffer.from(raster.velocityGz)]);
+  await audit(em, { actorId, action: 'model.save', objectType: 'velocity_model', objectId: saved.id, projectId, detail: { name: opts.name, version: next } });
+  return { id: saved.id, version: next as number, name: opts.name, warnings: raster.summary.warnings };
 }
 
 export async function loadModelVersion(id: string) {

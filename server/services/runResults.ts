@@ -9,7 +9,12 @@ export async function loadResidualRows(runId: string) {
      FROM run_residuals WHERE run_id = $1 ORDER BY shot_id, receiver_x, pick_index`,
     [runId],
   );
-  return rows.map((r: Record<string, never>) => ({
+  return rows.map(presentResidualRow);
+}
+
+/** A stored residual row (run_residuals, inversion_residuals) as the API shows it: ms, and flags worth a look. */
+export function presentResidualRow(r: Record<string, never>) {
+  return {
     pickIndex: r.pick_index,
     shotId: r.shot_id,
     receiverX: r.receiver_x,
@@ -22,7 +27,7 @@ export async function loadResidualRows(runId: string) {
     excluded: r.excluded,
     // Beyond three sigma: worth a look (common practice, no source).
     flags: [...(r.excluded ? ['excluded'] : []), ...(Math.abs(r.normalised) > 3 ? ['beyond_3_sigma'] : [])],
-  }));
+  };
 }
 
 export async function loadFieldRow(runId: string, shotId: string): Promise<{ grid: Grid; source: { x: number; z: number }; data: Buffer } | null> {

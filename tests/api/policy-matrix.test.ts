@@ -47,6 +47,15 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/runs/:runId/rays': STAFF_A,
   'POST /api/runs/:runId/cancel': ['geophysicist', 'lead'],
   'POST /api/runs/:runId/reports': ['geophysicist', 'lead'],
+  // Issue 11 item 7: geophysicists start and save inversions; leads and field technicians read them;
+  // cancelling is allowed to whoever may cancel a run (geophysicist, lead), as item 3 says "cancel works as for runs".
+  'POST /api/inversions': ['geophysicist'],
+  'GET /api/lines/:lineId/inversions': STAFF_A,
+  'GET /api/inversions/:inversionId': STAFF_A,
+  'GET /api/inversions/:inversionId/section': STAFF_A,
+  'GET /api/inversions/:inversionId/residuals': STAFF_A,
+  'POST /api/inversions/:inversionId/cancel': ['geophysicist', 'lead'],
+  'POST /api/inversions/:inversionId/model': ['geophysicist'],
   // A draft: the project's client may not read it yet (tests/api/reports.test.ts covers a shared one).
   'GET /api/reports/:reportId': STAFF_A,
   'GET /api/reports/:reportId/pdf': STAFF_A,
@@ -98,6 +107,7 @@ function concretePath(path: string, w: World): string {
     .replace(':modelId', w.modelA)
     .replace(':runId', w.runA)
     .replace(':reportId', w.reportA)
+    .replace(':inversionId', w.inversionA)
     .replace(':shotId', 'F')
     .replace(':userId', w.loner.id);
 }
@@ -108,6 +118,7 @@ function concretePath(path: string, w: World): string {
  */
 function bodyFor(key: string, w: World): object {
   if (key === 'POST /api/runs') return { modelId: w.modelA, pickSetId: w.pickSetA, order: 3 };
+  if (key === 'POST /api/inversions') return { pickSetId: w.pickSetA, start: { kind: 'gradient' }, settings: { vMin: 5000, vMax: 100 } };
   if (/^POST \/api\/reports\/:reportId\//.test(key)) return { comment: 42 }; // not a string: 400 before any step
   if (key === 'POST /api/runs/:runId/reports') return { isoVelocity: -1 };
   return {};

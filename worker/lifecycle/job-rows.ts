@@ -34,6 +34,19 @@ export const jobRows: Record<string, JobRowKind> = {
       await dataSource.query(`UPDATE runs SET status = 'failed', error = $2, finished_at = now() WHERE id = $1 AND status IN ('queued', 'running')`, [id, reason]);
     },
   },
+  invert: {
+    rowIdOf: idField('inversionId'),
+    async unfinishedRows(grace) {
+      const rows = await dataSource.query(
+        `SELECT id FROM inversions WHERE status IN ('queued', 'running') AND coalesce(started_at, created_at) < now() - make_interval(secs => $1)`,
+        [grace],
+      );
+      return rows.map((r: { id: string }) => r.id);
+    },
+    async markFailed(id, reason) {
+      await dataSource.query(`UPDATE inversions SET status = 'failed', error = $2, finished_at = now() WHERE id = $1 AND status IN ('queued', 'running')`, [id, reason]);
+    },
+  },
   report: {
     rowIdOf: idField('reportId'),
     async unfinishedRows(grace) {

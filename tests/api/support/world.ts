@@ -1,6 +1,7 @@
 import { dataSource } from '../../../server/db/dataSource';
 import { hashPassword } from '../../../server/auth/password';
-import { Project, ProjectMember, Report, Run, SurveyLine, User } from '../../../server/entities';
+import { Inversion, Project, ProjectMember, Report, Run, SurveyLine, User } from '../../../server/entities';
+import { DEFAULT_INVERSION_SETTINGS } from '../../../shared/schemas/inversions';
 import type { ProjectRole } from '../../../shared/schemas/projects';
 import { importPicks } from '../../../server/services/importPicks';
 import { saveModelVersion } from '../../../server/services/models';
@@ -25,6 +26,8 @@ export interface World {
   runA: string;
   /** A draft report of run A (no PDF yet). */
   reportA: string;
+  /** A finished inversion row of pick set A (no iterations or result stored). */
+  inversionA: string;
   /** An active account that belongs to no project. */
   loner: User;
 }
@@ -59,7 +62,12 @@ export async function resetWorld(): Promise<World> {
   const runA = (await runs.save(runs.create({ lineId: lineA.id, modelId: modelA, pickSetId: pickSetA, pickSetRevision: 0, order: 2, status: 'done', shotsTotal: 2, shotsDone: 2 }))).id;
   const reports = dataSource.getRepository(Report);
   const reportA = (await reports.save(reports.create({ runId: runA, projectId: projectA.id, status: 'draft', renderState: 'queued', options: { shotId: 'F', isoVelocity: 2500, acquisitionNotes: '' }, createdBy: users.geophysicist.id }))).id;
-  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, loner };
+  const inversions = dataSource.getRepository(Inversion);
+  const inversionA = (await inversions.save(inversions.create({
+    lineId: lineA.id, pickSetId: pickSetA, pickSetRevision: 0, startKind: 'gradient', startSpacing: 2.5, grid: WORLD_MODEL.grid, surface: null,
+    settings: DEFAULT_INVERSION_SETTINGS, status: 'done', shots: 2, picks: 10, createdBy: users.geophysicist.id,
+  }))).id;
+  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, loner };
 }
 
 /** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */
