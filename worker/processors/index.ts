@@ -1,4 +1,5 @@
 import type { Job } from 'bullmq';
+import { invertJob } from './invert';
 import { reportJob } from './report';
 import { solveJob } from './solve';
 
@@ -8,6 +9,7 @@ export type Processor = (job: Job) => Promise<unknown>;
 export const processors: Record<string, Processor> = {
   solve: solveJob,
   report: reportJob,
+  invert: invertJob,
 };
 
 export async function dispatch(job: Job): Promise<unknown> {
