@@ -13,8 +13,19 @@ if (!isLocalDemoMode(process.env)) {
 }
 
 const { initDataSource } = await import('../server/db/dataSource');
-const { seedDemo } = await import('../server/services/seedDemo');
+const { seedDemo, seedDemoInversion } = await import('../server/services/seedDemo');
+const { closeJobQueue, createJobQueue } = await import('../server/queue/queue');
+const { closeReadPool } = await import('../server/threads/read-pool');
 const ds = await initDataSource();
 const { created } = await seedDemo(ds);
 console.log(`[seed] demo scenario ${created ? `seeded (${created} rows)` : 'already present'}`);
+// The demo line's inversion is made by the worker; without the queue the demo still starts, without it.
+const queue = createJobQueue();
+try {
+  if (await seedDemoInversion(ds, queue)) console.log('[seed] demo inversion queued (the worker makes it in a few seconds)');
+} catch (err) {
+  console.error(`[seed] demo inversion not queued: ${(err as Error).message}`);
+}
+await closeJobQueue(queue);
+await closeReadPool();
 await ds.destroy();

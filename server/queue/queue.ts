@@ -26,6 +26,12 @@ export function createJobQueue(): Queue {
 
 const connections = new WeakMap<Queue, Redis>();
 
+/** Closes the queue and the connection it was given (BullMQ leaves a connection it did not open alone), so a script can exit. */
+export async function closeJobQueue(queue: Queue): Promise<void> {
+  await queue.close();
+  await connections.get(queue)?.quit().catch(() => undefined);
+}
+
 /** Resolves once the queue's connection is ready (at once when it is). */
 function ready(queue: Queue): Promise<unknown> {
   const client = connections.get(queue);

@@ -1,10 +1,13 @@
 import { readFileSync } from 'node:fs';
+import type { Queue } from 'bullmq';
 import type { DataSource } from 'typeorm';
+import { startInversionBody } from '../../shared/schemas/inversions';
 import { parseStationCsv } from '../../shared/stations';
 import { demoConsultancy, demoLine, demoProject, demoUsers, DEMO_PASSWORD } from '../../fixtures/demo/scenario';
 import { hashPassword } from '../auth/password';
-import { PickSet, Project, ProjectMember, Station, SurveyLine, User, VelocityModel } from '../entities';
+import { Inversion, PickSet, Project, ProjectMember, Station, SurveyLine, User, VelocityModel } from '../entities';
 import { importPicks } from './importPicks';
+import { startInversion } from './inversions';
 import { saveModelVersion } from './models';
 import { replaceStations } from './stations';
 
@@ -72,4 +75,19 @@ async function seedDemoFieldData(ds: DataSource): Promise<number> {
     created++;
   }
   return created;
+}
+
+/**
+ * The demo line's inversion from the automatic start (issue 11 item 8), queued when the line has
+ * none; the worker that `npm start` runs next makes it, as it makes any other. True when one was queued.
+ */
+export async function seedDemoInversion(ds: DataSource, queue: Queue): Promise<boolean> {
+  const project = await ds.getRepository(Project).findOneByOrFail({ name: demoProject.name });
+  const line = await ds.getRepository(SurveyLine).findOneByOrFail({ projectId: project.id, name: demoLine.name });
+  if (await ds.getRepository(Inversion).existsBy({ lineId: line.id })) return false;
+  const pickSet = await ds.getRepository(PickSet).findOneOrFail({ where: { lineId: line.id }, order: { createdAt: 'ASC' } });
+  const geo = await ds.getRepository(User).findOneByOrFail({ email: 'geo@timefield.test' });
+  const body = startInversionBody.parse({ pickSetId: pickSet.id, start: { kind: 'gradient' }, label: 'Automatic start' });
+  await startInversion(geo.id, project.id, body, queue);
+  return true;
 }
