@@ -4,7 +4,9 @@
  * worker is killed with SIGKILL after some iterations are stored; a second worker takes the job up
  * and goes on from the last stored iteration.
  */
+import { Worker } from 'bullmq';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createRedis, QUEUE_NAME } from '../../server/queue/connection';
 import { dataSource } from '../../server/db/dataSource';
 import { signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
 import { flatStations, gradientPicks, range } from './support/inversion-data';
@@ -73,4 +75,32 @@ describe('inversion reliability', () => {
     expect(view.history).toHaveLength(after.length);
     await second.stop();
   }, 300_000);
+
+  it('marks inversions failed whose job failed for good or is gone, when a worker starts (as for runs)', async () => {
+    const insert = async (status: string, ageSeconds: number) =>
+      (await dataSource.query(
+        `INSERT INTO inversions (line_id, pick_set_id, pick_set_revision, start_kind, start_spacing, grid, settings, status, shots, picks, created_at, started_at)
+         VALUES ($1, $2, 0, 'gradient', 2.5, '{"x0":0,"dx":2.5,"nx":11,"z0":0,"dz":2.5,"nz":5}', '{}', $3, 2, 10, now() - make_interval(secs => $4), now() - make_interval(secs => $4)) RETURNING id`,
+        [world.lineA.id, world.pickSetA, status, ageSeconds],
+      ))[0].id as string;
+    const stalled = await insert('running', 120);
+    const orphan = await insert('running', 120);
+    const fresh = await insert('queued', 0); // its job may still be on its way: left alone
+    // A job that BullMQ failed for good (a worker killed again and again) while the row could not be told.
+    await t.queue.add('invert', { inversionId: stalled }, { jobId: stalled });
+    const failer = new Worker(QUEUE_NAME, async () => {
+      throw new Error('job stalled more than allowable limit');
+    }, { connection: createRedis({ forBullmq: true }), autorun: true });
+    await waitFor(async () => ((await t.queue.getJob(stalled))?.failedReason ? true : undefined), 10_000, 'the job to fail');
+    await failer.close();
+
+    const worker = startWorker('reconciler');
+    workers.push(worker);
+    const a = await waitFor(async () => ((await row(stalled)).status === 'failed' ? row(stalled) : undefined), 30_000, 'the stalled inversion to be marked');
+    expect(a.error).toMatch(/stopped responding/);
+    const b = await waitFor(async () => ((await row(orphan)).status === 'failed' ? row(orphan) : undefined), 30_000, 'the orphaned inversion to be marked');
+    expect(b.error).toMatch(/lost/);
+    expect((await row(fresh)).status).toBe('queued');
+    await worker.stop();
+  }, 90_000);
 });
