@@ -181,6 +181,39 @@ describe('inversions through the worker', () => {
     expect(solved.stats.chi2).toBeLessThan(1.3);
   }, 120_000);
 
+  it('leaves excluded picks out of the inversion but shows their residuals, flagged; runs the checkerboard test when asked', async () => {
+    const revision = await geo.post(`/api/picksets/${pickSetId}/revisions`).set('X-CSRF-Token', geo.csrf)
+      .send({ exclusions: [0, 1, 2].map((index) => ({ index, reason: 'test exclusion' })) });
+    expect(revision.status).toBe(201);
+    const id = await start({ start: { kind: 'gradient' }, settings: { checkerboard: true } });
+    const v = await finished(id);
+    expect(v.status, `${v.error} ${worker.output.join('')}`).toBe('done');
+    expect(v.pickSetRevision).toBe(revision.body.number);
+    expect(v.stats!.picks).toBe(picks - 3);
+    const residuals = (await geo.get(`/api/inversions/${id}/residuals`).expect(200)).body as { pickIndex: number; excluded: boolean; flags: string[] }[];
+    expect(residuals).toHaveLength(picks);
+    const excluded = residuals.filter((r) => r.excluded);
+    expect(excluded.map((r) => r.pickIndex).sort()).toEqual([0, 1, 2]);
+    for (const r of excluded) expect(r.flags).toContain('excluded');
+
+    // Checkerboard (issue 11 item 1): the true and recovered patterns on every ground node, and their correlation.
+    const section: InversionSectionView = (await geo.get(`/api/inversions/${id}/section`).expect(200)).body;
+    const cb = section.checkerboard!;
+    expect(cb).not.toBeNull();
+    expect(cb.amplitude).toBe(0.07);
+    expect(cb.truePattern).toHaveLength(section.grid.nx * section.grid.nz);
+    expect(cb.recovered).toHaveLength(section.grid.nx * section.grid.nz);
+    // ±7 % squares on the ground, nothing in the air.
+    section.velocity.forEach((vel, i) => {
+      if (vel === null) expect(cb.truePattern[i]).toBeNull();
+      else expect(Math.abs(cb.truePattern[i]!)).toBeCloseTo(0.07, 6);
+    });
+    expect(cb.correlation).toBeGreaterThan(-1);
+    expect(cb.correlation).toBeLessThanOrEqual(1);
+    expect(v.stats!.checkerboardCorrelation).toBeCloseTo(cb.correlation, 9);
+    await geo.post(`/api/picksets/${pickSetId}/revisions`).set('X-CSRF-Token', geo.csrf).send({ exclusions: [] }).expect(201);
+  }, 120_000);
+
   it('cancels a running inversion: it stops, keeps its history so far, and stores no result', async () => {
     // Picks stated ten times more certain than their noise: the misfit cannot reach its target, so the inversion runs on.
     const tight = gradientPicks({ v0: V0, k: K, shotXs: [0, 16, 32, 48], receiverXs: RECEIVERS, sigmaMs: 0.05, noise: 10 });
