@@ -110,6 +110,7 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
   let stopReason: StopReason = 'iteration-cap';
   let lastLambda = lambda;
   let slowSteps = 0;
+  let rejections = 0;
   for (;;) {
     if (fit.chi2 >= TARGET_CHI2.low && fit.chi2 <= TARGET_CHI2.high) {
       stopReason = 'target-misfit';
@@ -171,14 +172,19 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
       const part = await tryStep(fractionToTarget(predicted));
       if (Math.abs(Math.log(part.fit.chi2)) < Math.abs(Math.log(trial.fit.chi2)) && part.fit.used >= trial.fit.used) trial = part;
     }
-    if (worse(trial.fit, fit)) {
-      const half = await tryStep(0.5);
-      if (!worse(half.fit, trial.fit)) trial = half;
+    // A step that makes the misfit worse is shortened (halved, then quartered) before it is given up.
+    for (const fraction of [0.5, 0.25]) {
+      if (!worse(trial.fit, fit)) break;
+      const shorter = await tryStep(fraction);
+      if (!worse(shorter.fit, trial.fit)) trial = shorter;
     }
     lastLambda = lambda;
-    if (worse(trial.fit, fit)) {
-      lambda *= 4; // keep the model, smooth harder
+    const rejected = worse(trial.fit, fit);
+    if (rejected) {
+      rejections++;
+      if (!fixed) lambda *= 4; // keep the model, smooth harder
     } else {
+      rejections = 0;
       current = trial.s;
       velocity = trial.v;
       F = trial.f;
@@ -193,16 +199,23 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
         else if (gain < 0.1) lambda *= 2;
       }
     }
-    if (fixed) lambda = settings.smoothing!;
     history.push({ iteration: history.length, chi2: fit.chi2, rmsMs: fit.rmsMs, smoothing: lastLambda, seconds: nowSeconds() - t0 });
     await hooks.onIteration?.(history[history.length - 1], checkpoint());
 
+    if (rejected) {
+      // No shorter step helps: with a fixed weight nothing will change; with the schedule, give
+      // the smoother steps three tries.
+      if (fixed || rejections >= 3) {
+        stopReason = 'stalled';
+        break;
+      }
+      continue;
+    }
     const change = Math.abs(previous - fit.chi2) / previous;
     slowSteps = change < STALL_CHANGE ? slowSteps + 1 : 0;
     const atFloor = fixed || lastLambda <= AUTO_SMOOTHING_FLOOR;
     if (slowSteps >= 2 || (slowSteps === 1 && atFloor)) {
-      if (!(fit.chi2 >= TARGET_CHI2.low && fit.chi2 <= TARGET_CHI2.high)) stopReason = 'stalled';
-      else stopReason = 'target-misfit';
+      stopReason = fit.chi2 >= TARGET_CHI2.low && fit.chi2 <= TARGET_CHI2.high ? 'target-misfit' : 'stalled';
       break;
     }
   }
