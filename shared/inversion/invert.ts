@@ -89,10 +89,11 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
   };
 
   const resume = hooks.resumeFrom;
-  let current = new Float64Array(nu);
+  const current = new Float64Array(nu);
   const from = resume ? resume.velocity : problem.start;
   for (let j = 0; j < nu; j++) current[j] = clipS(1 / from[nodeOf[j]]);
-  let velocity = toVelocity(current);
+  let velocity = resume ? Float32Array.from(resume.velocity, (v, i) => (active[i] ? v : Number.NaN)) : toVelocity(current);
+  for (let j = 0; j < nu; j++) current[j] = 1 / velocity[nodeOf[j]];
   let t0 = nowSeconds();
   let F = await forward(velocity);
   let fit = misfit(obs.times, obs.sigmas, F.times);
@@ -186,8 +187,9 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
       if (!fixed) lambda *= 4; // keep the model, smooth harder
     } else {
       rejections = 0;
-      current = trial.s;
+      // The state carried on is the stored (Float32) model, so a resumed run continues exactly.
       velocity = trial.v;
+      for (let j = 0; j < nu; j++) current[j] = 1 / velocity[nodeOf[j]];
       F = trial.f;
       fit = trial.fit;
       if (!fixed) {
