@@ -27,8 +27,8 @@ const TRUE_MODEL = {
   ],
 };
 const GEOPHONES = Array.from({ length: 25 }, (_, i) => 2.5 * i);
-const SHOT_XS = [-5, 0, 15, 30, 45, 60, 65];
-const SIGMA = 0.0004;
+const SHOT_XS = [-5, 0, 10, 20, 30, 40, 50, 60, 65];
+const SIGMA = 0.0005;
 
 const parsed = parseModelFile(TRUE_MODEL);
 if (!parsed.ok) throw new Error(`true model invalid: ${JSON.stringify(parsed.issues)}`);

@@ -23,18 +23,29 @@ export function recoveryWords(r: number): string {
   return 'poorly recovered';
 }
 
+/** The correlation as printed, or null when there is none. */
+export function correlationValue(r: number | null): number | null {
+  return r !== null && Number.isFinite(r) ? r : null;
+}
+
 export function drawCheckerboard(ctx: InversionContext): void {
   const cb = ctx.input.inversion.checkerboard;
   if (!cb) return;
   sectionHeading(ctx, 'checkerboard');
   const pct = plain(100 * cb.amplitude, 1);
-  const r = fixed(cb.correlation, 2);
+  const rv = correlationValue(cb.correlation);
+  const r = fixed(rv, 2);
   paragraph(
     ctx,
     `How large a feature can these picks resolve? The final model was given a pattern of squares ${plain(cb.size, 2)} m across, alternately ${pct} % faster and slower; travel times were computed on it for the same shots and geophones, with noise of each pick's uncertainty, and inverted with the same settings. ` +
       `The recovered pattern (right) is the result divided by the final model, minus one. Where it matches the true pattern (left), features of this size are resolved; where it is smeared or faint, they are not.`,
   );
-  paragraph(ctx, `Correlation of the recovered with the true pattern over the covered nodes: r = ${r}, the pattern is ${recoveryWords(cb.correlation)}.`);
+  paragraph(
+    ctx,
+    rv === null
+      ? 'The correlation of the recovered with the true pattern could not be computed: the recovered pattern is flat (the test inversion did not move from the final model), so the test says nothing about resolution.'
+      : `Correlation of the recovered with the true pattern over the covered nodes: r = ${r}, the pattern is ${recoveryWords(rv)}.`,
+  );
   ctx.y += 4;
 
   const gap = 26;
@@ -42,7 +53,7 @@ export function drawCheckerboard(ctx: InversionContext): void {
   const place = (top: number) => sectionLayoutFor(ctx.grid, ctx.ground, CONTENT.left + 34, top, width, 110, 200);
   const text =
     `Checkerboard test with ${plain(cb.size, 2)} m squares of ±${pct} %: true pattern (left) and pattern recovered by the inversion (right), relative velocity change in per cent on one scale (blue slower, red faster). ` +
-    `Grey on the right: nodes crossed by less than ${plain(ctx.threshold, 2)} m of ray; dotted: their boundary. Correlation r = ${r} over covered nodes${cb.coverageThreshold !== undefined ? ` (at least ${plain(cb.coverageThreshold, 2)} m of ray)` : ''}.`;
+    `Grey on the right: nodes crossed by less than ${plain(ctx.threshold, 2)} m of ray; dotted: their boundary. ${rv === null ? 'No correlation (flat recovered pattern)' : `Correlation r = ${r} over covered nodes`}${rv !== null && cb.coverageThreshold !== undefined ? ` (at least ${plain(cb.coverageThreshold, 2)} m of ray)` : ''}.`;
   ctx.ensureSpace(place(ctx.y).box.height + 110 + captionHeight(ctx, text));
   const left = place(ctx.y + 14);
   const right = { ...left, box: { ...left.box, left: left.box.left + width + gap } };

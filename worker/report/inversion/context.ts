@@ -66,6 +66,9 @@ export class InversionContext extends PageFlow<InversionSectionKey> {
     const f = Math.min(grid.nx - 1, Math.max(0, (x - grid.x0) / grid.dx));
     const ix = Math.min(grid.nx - 2, Math.floor(f));
     const w = f - ix;
+    // At a node column only that column counts (its neighbour may have no ray).
+    if (w < 1e-9) return this.doi[ix];
+    if (w > 1 - 1e-9) return this.doi[ix + 1];
     return (1 - w) * this.doi[ix] + w * this.doi[ix + 1];
   }
 

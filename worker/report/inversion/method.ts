@@ -64,7 +64,7 @@ export function drawInversionMethod(ctx: InversionContext): void {
     ['Pick uncertainty σ', sigmaText(input.residuals.map((r) => r.sigmaMs))],
     ['Coverage mask', `nodes crossed by less than ${plain(ctx.threshold, 2)} m of ray in total are greyed as not resolved`],
     ['Depth of investigation', 'per grid column, the lowest point reached by any ray of the final model'],
-    ['Checkerboard test', cb ? `run: ±${plain(100 * cb.amplitude, 1)} % squares of ${plain(cb.size, 2)} m (${s.checkerSize === null ? 'size chosen automatically' : 'size set by the user'}), correlation ${fixed(cb.correlation, 2)}` : s.checkerboard ? 'requested, no result stored' : 'not run'],
+    ['Checkerboard test', cb ? `run: ±${plain(100 * cb.amplitude, 1)} % squares of ${plain(cb.size, 2)} m (${s.checkerSize === null ? 'size chosen automatically' : 'size set by the user'}), ${cb.correlation !== null && Number.isFinite(cb.correlation) ? `correlation ${fixed(cb.correlation, 2)}` : 'no correlation (flat recovered pattern)'}` : s.checkerboard ? 'requested, no result stored' : 'not run'],
     ['Pick set', `${inv.pickSetFile}, revision ${inv.pickSetRevision}`],
     ['Inversion', `${inv.id}${inv.label.trim() ? ` ("${inv.label.trim()}")` : ''}, ${isoDate(inv.createdAt)}`],
   ], { labelWidth: 125 });

@@ -39,8 +39,8 @@ export interface InversionReportInput extends ReportMeta {
       /** Square size (m) and amplitude (0.07 = ±7 %). */
       size: number;
       amplitude: number;
-      /** Pearson correlation of true and recovered pattern over covered nodes. */
-      correlation: number;
+      /** Pearson correlation of true and recovered pattern over covered nodes; null (or NaN) when it cannot be computed (a flat pattern). */
+      correlation: number | null;
       /** Ray length (m) a node needed to count in the correlation, when known. */
       coverageThreshold?: number;
       /** Relative anomaly per node; NaN or null in the air. */

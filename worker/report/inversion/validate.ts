@@ -91,7 +91,7 @@ export function validateInversionReportInput(input: InversionReportInput): void 
   if (cb) {
     need(finite(cb.size) && cb.size > 0, 'inversion.checkerboard.size', `must be a size > 0 m (got ${cb.size})`);
     need(finite(cb.amplitude) && cb.amplitude > 0, 'inversion.checkerboard.amplitude', `must be > 0 (got ${cb.amplitude})`);
-    need(finite(cb.correlation) && Math.abs(cb.correlation) <= 1 + 1e-9, 'inversion.checkerboard.correlation', `must be a correlation from −1 to 1 (got ${cb.correlation})`);
+    need(air(cb.correlation) || (finite(cb.correlation) && Math.abs(cb.correlation) <= 1 + 1e-9), 'inversion.checkerboard.correlation', `must be a correlation from −1 to 1, or null (got ${cb.correlation})`);
     if (cb.coverageThreshold !== undefined) need(finite(cb.coverageThreshold) && cb.coverageThreshold >= 0, 'inversion.checkerboard.coverageThreshold', `must be a ray length ≥ 0 m (got ${cb.coverageThreshold})`);
     nodeArray(cb.truePattern, n, 'inversion.checkerboard.truePattern', () => true, 'a relative anomaly');
     nodeArray(cb.recovered, n, 'inversion.checkerboard.recovered', () => true, 'a relative anomaly');
