@@ -100,6 +100,17 @@ describe('inversion report on a known answer', () => {
     expect(flow).toContain('section 6, Limitations and cautions');
   }, 60_000);
 
+  it('names a saved starting model and a fixed smoothing weight', async () => {
+    const base = knownInversionInput({
+      start: { kind: 'model', modelName: 'KA-1 layered', modelVersion: 4 },
+      settings: { ...knownInversionInput().inversion.settings, smoothing: 12.5 },
+    });
+    const { flow, pages } = await render(base);
+    expect(flow).toContain('Starting model saved model "KA-1 layered", version 4');
+    expect(flow).toContain('Smoothing weight fixed by the user at 12.5');
+    expect(normalisedLines(pages[0]).join(' ')).toContain('starting model: model version 4.');
+  }, 60_000);
+
   it('says when the checkerboard correlation could not be computed, never NaN', async () => {
     const base = smallInversionReportInput();
     const input = { ...base, inversion: { ...base.inversion, checkerboard: { ...base.inversion.checkerboard!, correlation: null } } };

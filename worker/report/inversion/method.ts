@@ -21,7 +21,7 @@ export function startText(input: InversionReportInput): string {
   if (st.kind === 'gradient') {
     return `automatic: one velocity law v = v0 + k·depth below the ground surface, fitted to all travel-time curves at once (t = (2/k)·asinh(k·x / 2v0)); v0 = ${plain(st.v0, 0)} m/s, k = ${plain(st.k, 2)} m/s per m, on a grid of ${plain(st.spacing, 3)} m spacing`;
   }
-  return `saved model "${st.modelName}", version ${st.modelVersion} (its grid, ground surface and velocities)`;
+  return `saved model ${st.modelName.trim() ? `"${st.modelName.trim()}", ` : ''}version ${st.modelVersion} (its grid, ground surface and velocities)`;
 }
 
 export function smoothingText(input: InversionReportInput): string {

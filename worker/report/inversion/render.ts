@@ -52,7 +52,7 @@ export async function renderInversionReportPdf(input: InversionReportInput): Pro
   drawCoverPage(ctx, input, {
     subtitle: `Velocity section of line ${input.line.name} by travel-time tomography`,
     cautions: inversionHeadingText('cautions', input).replace(/^(\d+)\s+/, '$1, '),
-    provenance: `Produced with Timefield from inversion ${inv.id} (${isoDate(inv.createdAt)}) of pick set ${inv.pickSetFile} revision ${inv.pickSetRevision}; starting model: ${inv.start.kind === 'gradient' ? 'automatic 1-D gradient' : `"${inv.start.modelName}" version ${inv.start.modelVersion}`}.`,
+    provenance: `Produced with Timefield from inversion ${inv.id} (${isoDate(inv.createdAt)}) of pick set ${inv.pickSetFile} revision ${inv.pickSetRevision}; starting model: ${inv.start.kind === 'gradient' ? 'automatic 1-D gradient' : `model version ${inv.start.modelVersion}`}.`,
   });
   drawInversionSection(ctx);
   drawInversionIsoDepth(ctx);
