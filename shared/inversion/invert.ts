@@ -32,7 +32,7 @@ export const AUTO_SMOOTHING_FLOOR = 0.01;
 export const TARGET_CHI2 = { low: 0.9, high: 1.1 };
 export const STALL_CHANGE = 0.02;
 /** LSQR iterations per step: the step is a direction to be refined by the next linearisation, not an exact solution. */
-const LSQR_ITERATIONS = 150;
+const LSQR_ITERATIONS = Number((globalThis as any).process?.env?.X_LSQR ?? 150);
 
 export class InversionInputError extends Error {
   constructor(message: string) {
@@ -75,11 +75,12 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
   const start = new Float64Array(nu);
   for (let j = 0; j < nu; j++) start[j] = clipS(1 / problem.start[nodeOf[j]]);
 
-  const timings: Timings = { forwardSeconds: 0, matrixSeconds: 0, lsqrSeconds: 0 };
+  const timings: Timings = { forwardSteps: 0, forwardSeconds: 0, matrixSeconds: 0, lsqrSeconds: 0 };
   const forward = async (v: Float32Array): Promise<ForwardResult> => {
     const t0 = nowSeconds();
     const f = await modeller.forward(v);
     timings.forwardSeconds += nowSeconds() - t0;
+    timings.forwardSteps++;
     return f;
   };
   const toVelocity = (s: Float64Array): Float32Array => {
