@@ -168,7 +168,9 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
             <Side letter="B" title={bTitle} to={`/runs/${target.id}`} chi2={bRun.data?.stats?.chi2} rmsMs={bRun.data?.stats?.rms_ms} scene={runScene} exaggeration={ve} />
           )}
         </div>
-        <SectionLegend />
+        <div className="mb-8">
+          <SectionLegend />
+        </div>
         <Section title="Change in residual, B − A">
           <p className="mb-3 text-stone-600">Where the two sections predict different times for the same pick.</p>
           {(residualsA.isPending || (isInv ? residualsB.isPending : runResiduals.isPending)) && <Loading what="residuals" />}

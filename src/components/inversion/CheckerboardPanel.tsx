@@ -29,8 +29,8 @@ function PatternChart({ title, z, section, limit, testId }: { title: string; z: 
       title: { text: title, font: { size: 15 } },
       paper_bgcolor: '#ffffff',
       plot_bgcolor: '#e7e5e4',
-      xaxis: { ...runAxis, title: { text: 'x along the line (m)' } },
-      yaxis: { ...runAxis, title: { text: 'elevation (m)' } },
+      xaxis: { ...runAxis, zeroline: false, title: { text: 'x along the line (m)' } },
+      yaxis: { ...runAxis, zeroline: false, title: { text: 'elevation (m)' } },
     }),
     [title],
   );

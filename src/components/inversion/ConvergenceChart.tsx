@@ -6,6 +6,8 @@ import { CHI2_BAND, CHI2_TARGET, convergenceSeries, convergenceWords } from './c
 
 const CHI2_COLOUR = '#0072b2';
 const RMS_COLOUR = '#d55e00';
+/** Round ticks for a logarithmic χ² axis (1–2–5 series). */
+const LOG_TICKS = [0.1, 0.2, 0.5, 1, 2, 5, 10, 20, 50, 100, 200, 500, 1000, 2000, 5000];
 
 /** χ² (left axis) and RMS misfit (right axis) per iteration, with the χ² = 1 target and its stopping band; live while the inversion runs. */
 export function ConvergenceChart({ history, maxIterations }: { history: readonly InversionIterationView[]; maxIterations: number }) {
@@ -22,14 +24,17 @@ export function ConvergenceChart({ history, maxIterations }: { history: readonly
   const layout = useMemo(
     () => ({
       font: RUN_CHART_FONT,
-      margin: { l: 64, r: 64, t: 16, b: 48 },
+      margin: { l: 64, r: 64, t: 40, b: 48 },
       paper_bgcolor: '#ffffff',
       plot_bgcolor: '#ffffff',
       showlegend: true,
-      legend: { orientation: 'h' as const, x: 0, y: 1.12 },
-      xaxis: { ...runAxis, title: { text: 'iteration (0 = starting model)' }, range: [-0.3, Math.max(maxIterations, series.iterations.at(-1) ?? 0) + 0.3], dtick: maxIterations > 20 ? 5 : 1 },
-      yaxis: { ...runAxis, title: { text: 'χ² per datum' }, type: log ? ('log' as const) : ('linear' as const), rangemode: log ? undefined : ('tozero' as const) },
-      yaxis2: { ...runAxis, title: { text: 'RMS misfit (ms)' }, overlaying: 'y' as const, side: 'right' as const, showgrid: false, rangemode: 'tozero' as const },
+      legend: { orientation: 'h' as const, x: 0, y: 1, yanchor: 'bottom' as const },
+      xaxis: { ...runAxis, title: { text: 'iteration (0 = starting model)' }, range: [-0.3, Math.max(maxIterations, series.iterations.at(-1) ?? 0) + 0.3], tick0: 0, dtick: maxIterations <= 10 ? 1 : maxIterations <= 25 ? 2 : 5 },
+      yaxis: log
+        ? { ...runAxis, title: { text: 'χ² per datum' }, type: 'log' as const, tickmode: 'array' as const, tickvals: LOG_TICKS, ticktext: LOG_TICKS.map(String) }
+        : { ...runAxis, title: { text: 'χ² per datum' }, type: 'linear' as const, rangemode: 'tozero' as const },
+      // Its own ticks: an overlaid axis would otherwise copy the χ² axis's tick positions.
+      yaxis2: { ...runAxis, title: { text: 'RMS misfit (ms)' }, overlaying: 'y' as const, side: 'right' as const, showgrid: false, rangemode: 'tozero' as const, tickmode: 'auto' as const, nticks: 6 },
       shapes: [
         { type: 'rect' as const, xref: 'paper' as const, x0: 0, x1: 1, yref: 'y' as const, y0: CHI2_BAND[0], y1: CHI2_BAND[1], fillcolor: 'rgba(5, 150, 105, 0.12)', line: { width: 0 }, layer: 'below' as const },
         { type: 'line' as const, xref: 'paper' as const, x0: 0, x1: 1, yref: 'y' as const, y0: CHI2_TARGET, y1: CHI2_TARGET, line: { color: '#047857', width: 1.5, dash: 'dash' as const } },

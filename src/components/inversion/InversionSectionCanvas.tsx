@@ -84,7 +84,7 @@ export function InversionSectionCanvas({ scene, width, exaggeration, label, test
         onMouseMove={onMove}
         onMouseLeave={() => setReadout(null)}
       />
-      <p className="h-6 text-sm tabular-nums text-stone-700" data-testid={`${testId}-readout`}>
+      <p className="min-h-6 text-sm tabular-nums text-stone-700" data-testid={`${testId}-readout`}>
         {readout ?? 'Point at the section to read position, velocity and ray coverage.'}
       </p>
     </div>

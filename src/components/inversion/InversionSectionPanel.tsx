@@ -7,6 +7,9 @@ import { SectionControls } from './SectionControls';
 import { SectionLegend } from './SectionLegend';
 import { useSectionScene } from './useSectionScene';
 
+/** Narrower than this the section cannot be read; on a phone it scrolls sideways inside its frame instead. */
+const MIN_SECTION_WIDTH = 560;
+
 /** The final velocity section with its coverage mask, contours and depth-of-investigation line, and the controls for them. */
 export function InversionSectionPanel({ section }: { section: InversionSectionView }) {
   const [threshold, setThreshold] = useState(DEFAULT_COVERAGE_THRESHOLD_M);
@@ -33,7 +36,7 @@ export function InversionSectionPanel({ section }: { section: InversionSectionVi
         {ve !== 1 && ' Heights are exaggerated, so slopes look steeper than they are.'}
       </p>
       <div ref={ref} className="overflow-x-auto rounded-lg border border-stone-200 bg-white p-2">
-        <InversionSectionCanvas scene={scene} width={Math.max(320, width - 16)} exaggeration={ve} label={`Inverted velocity section, vertical exaggeration ${ve} times, ground with less than ${threshold.toFixed(1)} m of ray greyed`} />
+        <InversionSectionCanvas scene={scene} width={Math.max(MIN_SECTION_WIDTH, width - 16)} exaggeration={ve} label={`Inverted velocity section, vertical exaggeration ${ve} times, ground with less than ${threshold.toFixed(1)} m of ray greyed`} />
       </div>
       <SectionLegend />
     </div>

@@ -178,8 +178,8 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
           <TextField label="Lowest velocity (m/s)" name="vMin" inputMode="decimal" value={form.vMin} error={errors['settings.vMin']} onChange={(e) => set('vMin', e.target.value)} data-testid="inversion-vmin" />
           <TextField label="Highest velocity (m/s)" name="vMax" inputMode="decimal" value={form.vMax} error={errors['settings.vMax']} onChange={(e) => set('vMax', e.target.value)} data-testid="inversion-vmax" />
           <SelectField label="Eikonal scheme" name="order" value={form.order} error={errors['settings.order']} onChange={(e) => set('order', e.target.value as '1' | '2')} data-testid="inversion-order">
-            <option value="2">Second order (more accurate; the usual choice)</option>
-            <option value="1">First order (faster, rougher)</option>
+            <option value="2">Second order (usual)</option>
+            <option value="1">First order (rougher)</option>
           </SelectField>
           <fieldset className="flex flex-col gap-1 md:col-span-2">
             <legend className="font-semibold text-stone-800">Resolution check</legend>
