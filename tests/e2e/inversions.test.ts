@@ -63,8 +63,8 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
     await page.goto(`${server.baseUrl}/lines/${lineId}?tab=inversions`);
     await page.getByTestId('start-inversion-form').waitFor();
     await page.getByTestId('line-inversions-empty').waitFor();
-    // Demo geophones are 2.5 m apart (fixtures/demo/tq-l1.stations.csv): half of that is the default cell.
-    await expect.poll(() => page.getByTestId('inversion-grid-size').textContent()).toMatch(/Default 1\.25 m, half the median station spacing\. Grid \d+ × \d+ nodes/);
+    // Demo geophones are 2.5 m apart (fixtures/demo/tq-l1.stations.csv): half is 1.25 m, down to the round 1 m.
+    await expect.poll(() => page.getByTestId('inversion-grid-size').textContent()).toMatch(/Default 1 m, from half the median station spacing\. Grid \d+ × \d+ nodes/);
     await page.getByTestId('inversion-spacing').fill('0.5');
     await expect.poll(() => page.getByTestId('inversion-grid-size').textContent()).toMatch(/^Grid \d+ × \d+ nodes/);
     await page.getByTestId('inversion-spacing').fill('');

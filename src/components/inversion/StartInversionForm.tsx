@@ -38,8 +38,8 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
   const pickSet = usePickSet(form.pickSetId || null, null);
 
   const detail = pickSet.data && pickSet.data.id === form.pickSetId ? pickSet.data : undefined;
-  const defaultSpacing = defaultInversionSpacing(line.stations);
   const geometry = useMemo(() => ({ stations: line.stations, shotXs: detail?.shots.map((s) => s.sourceX) ?? [] }), [line.stations, detail]);
+  const defaultSpacing = useMemo(() => defaultInversionSpacing(geometry), [geometry]);
 
   if (!canRunInversions(line.myRole)) {
     return <p className="text-stone-600">Geophysicists start inversions; you can open and compare the inversions listed here.</p>;
@@ -82,7 +82,7 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
   // What grid the inversion will get, so the node count is seen before starting.
   const typedSpacing = Number(form.spacing.replace(',', '.'));
   const spacing = form.spacing.trim() !== '' && typedSpacing > 0 ? typedSpacing : defaultSpacing;
-  const gridWords = spacing ? gridSizeWords(inversionGrid(geometry, spacing)) : null;
+  const gridWords = gridSizeWords(inversionGrid(geometry, spacing));
   const chosenModel = models.find((m) => m.id === form.modelId);
   const revisions = detail ? [...detail.revisions].reverse() : [];
   const anyError = Object.values(errors).some(Boolean) || server.other.length > 0;
@@ -119,14 +119,14 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
               name="spacing"
               inputMode="decimal"
               value={form.spacing}
-              placeholder={defaultSpacing ? String(defaultSpacing) : ''}
+              placeholder={String(defaultSpacing)}
               error={errors['start.spacing']}
               onChange={(e) => set('spacing', e.target.value)}
               data-testid="inversion-spacing"
               hint={
                 <span data-testid="inversion-grid-size">
-                  {form.spacing.trim() === '' && defaultSpacing ? `Default ${defaultSpacing} m, half the median station spacing. ` : ''}
-                  {gridWords ? `Grid ${gridWords.text}${gridWords.tooLarge ? ' — past the limit; choose a larger cell.' : '.'}` : 'The line has no stations yet: the server sizes the grid from the picks.'}
+                  {form.spacing.trim() === '' ? `Default ${defaultSpacing} m, from half the median station spacing. ` : ''}
+                  {`Grid ${gridWords.text}${gridWords.tooLarge ? ' — past the limit; choose a larger cell.' : '.'}`}
                 </span>
               }
             />

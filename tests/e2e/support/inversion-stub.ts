@@ -132,7 +132,7 @@ function viewOf(lineId: string, body: StartInversionBody, label: string): Invers
     status: 'queued',
     pickSetId: body.pickSetId,
     pickSetRevision: body.pickSetRevision ?? 0,
-    start: body.start.kind === 'gradient' ? { kind: 'gradient', spacing: body.start.spacing ?? 1.25, v0: null, k: null } : { kind: 'model', modelId: body.start.modelId, modelVersion: 1 },
+    start: body.start.kind === 'gradient' ? { kind: 'gradient', spacing: body.start.spacing ?? 1, v0: null, k: null } : { kind: 'model', modelId: body.start.modelId, modelVersion: 1 },
     grid: { x0: -12.5, dx: 1.25, nx: 117, z0: 102.5, dz: 1.25, nz: 25 },
     settings: body.settings,
     history: [],

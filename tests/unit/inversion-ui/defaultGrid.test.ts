@@ -4,8 +4,10 @@ import { MAX_GRID_NODES } from '../../../shared/limits';
 import { defaultGridSpec } from '../../../shared/model/edit/defaults';
 import { defaultInversionSpacing, gridSizeWords, inversionGrid, medianStationSpacing } from '../../../src/components/inversion/defaultGrid';
 
-// The rule is the one the issue brief states: the model editor's default extent for the line,
-// on a spacing of half the median station spacing. Expected values worked out by hand.
+// The rule: the model editor's default extent for the line, on half the median station spacing
+// taken down to one of the editor's round spacings (shared/model/edit/defaults.ts NICE_SPACINGS) and
+// coarsened while the grid would have more than 600 nodes along the line — the server's rule for the
+// automatic start, so the form shows the grid the worker will use. Expected values worked out by hand.
 
 const line = (xs: number[], z = 100) => xs.map((x) => ({ x, z }));
 
@@ -17,12 +19,12 @@ describe('medianStationSpacing', () => {
     expect(medianStationSpacing(line([7]))).toBeNull();
   });
 
-  it('gives 1.25 m cells on the demo line, whose geophones are 2.5 m apart', () => {
+  it('gives 1 m cells on the demo line, whose geophones are 2.5 m apart (half is 1.25, down to 1)', () => {
     const rows = readFileSync('fixtures/demo/tq-l1.stations.csv', 'utf8')
       .split('\n')
       .filter((l) => /^\d/.test(l))
       .map((l) => l.split(','));
-    expect(defaultInversionSpacing(rows.map(([, x, z]) => ({ x: Number(x), z: Number(z) })))).toBe(1.25);
+    expect(defaultInversionSpacing({ stations: rows.map(([, x, z]) => ({ x: Number(x), z: Number(z) })) })).toBe(1);
   });
 });
 
@@ -33,7 +35,7 @@ describe('inversionGrid', () => {
   const stations = line(Array.from({ length: 51 }, (_, i) => 2 * i));
 
   it('keeps the editor default extent on the finer spacing', () => {
-    const spacing = defaultInversionSpacing(stations)!;
+    const spacing = defaultInversionSpacing({ stations });
     expect(spacing).toBe(1);
     const grid = inversionGrid({ stations }, spacing);
     expect(grid).toEqual({ x0: -5, dx: 1, nx: 111, z0: 101, dz: 1, nz: 27 });
@@ -48,6 +50,23 @@ describe('inversionGrid', () => {
       expect(g.z0).toBeGreaterThanOrEqual(spec.top - 1e-9);
       expect(g.z0 - (g.nz - 1) * g.dz).toBeLessThanOrEqual(spec.top - spec.depth + 1e-9);
     }
+  });
+});
+
+describe('defaultInversionSpacing', () => {
+  it('takes half the station spacing down to a round spacing', () => {
+    expect(defaultInversionSpacing({ stations: line([0, 3, 6, 9]) })).toBe(1); // 1.5 → 1
+    expect(defaultInversionSpacing({ stations: line([0, 5, 10]) })).toBe(2.5); // 2.5 is round already
+    expect(defaultInversionSpacing({ stations: line([0, 0.3, 0.6]) })).toBe(0.1); // 0.15 → 0.1
+    expect(defaultInversionSpacing({ stations: line([0, 0.1, 0.2]) })).toBe(0.1); // 0.05: nothing smaller is offered
+  });
+
+  it('coarsens a long line until the grid has at most 600 nodes along it', () => {
+    // 0 … 2000 m every 2 m: editor extent −100 … 2100 m (margin 5 % of 2000). Nodes along the line at
+    // 1, 2, 2.5 and 5 m: 2201, 1101, 881, 441 — the first within 600 is 5 m.
+    const long = line(Array.from({ length: 1001 }, (_, i) => 2 * i));
+    expect(defaultInversionSpacing({ stations: long })).toBe(5);
+    expect(inversionGrid({ stations: long }, 5).nx).toBe(441);
   });
 });
 
