@@ -14,8 +14,8 @@ import { inversionTitle } from '../components/inversion/InversionHeader';
 import { SectionControls } from '../components/inversion/SectionControls';
 import { SectionLegend } from '../components/inversion/SectionLegend';
 import { TomographyCaution } from '../components/inversion/TomographyCaution';
-import { sharedRange, useModelScene } from '../components/inversion/compareScenes';
-import { toFloat32 } from '../components/inversion/sectionArrays';
+import { modelRange, sharedRange, useModelScene } from '../components/inversion/compareScenes';
+import { coveredRange, toFloat32 } from '../components/inversion/sectionArrays';
 import { useSectionScene } from '../components/inversion/useSectionScene';
 import { runLabel } from '../components/run/compare/CompareChooser';
 import { DifferenceView } from '../components/run/compare/DifferenceView';
@@ -108,9 +108,9 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
   const [ve, setVe] = useState(2);
   const [contours, setContours] = useState(true);
 
-  const velocityA = useMemo(() => (sectionA.data ? toFloat32(sectionA.data.velocity) : null), [sectionA.data]);
-  const velocityB = useMemo(() => (isInv ? (sectionB.data ? toFloat32(sectionB.data.velocity) : null) : (runGrid.data?.values ?? null)), [isInv, sectionB.data, runGrid.data]);
-  const range = useMemo(() => sharedRange(velocityA, velocityB), [velocityA, velocityB]);
+  const rangeA = useMemo(() => (sectionA.data ? sectionRange(sectionA.data) : null), [sectionA.data]);
+  const rangeB = useMemo(() => (isInv ? (sectionB.data ? sectionRange(sectionB.data) : null) : modelRange(runGrid.data?.values ?? null)), [isInv, sectionB.data, runGrid.data]);
+  const range = useMemo(() => sharedRange(rangeA, rangeB), [rangeA, rangeB]);
   const surface = (runModel.data?.model.surface as [number, number][] | undefined) ?? null;
   const runScene = useModelScene(isInv ? undefined : runGrid.data, surface, line?.stations ?? [], runShots.data, range, contours);
 
@@ -205,6 +205,9 @@ function InversionSideView(props: { letter: 'A' | 'B'; inversion: InversionView;
     />
   );
 }
+
+/** An inversion section's own colour range: its covered ground. */
+const sectionRange = (s: InversionSectionView) => coveredRange(toFloat32(s.velocity), toFloat32(s.coverage));
 
 function runTitle(run: RunDetail, line: LineDetail | undefined): string {
   const summary = line ? lineRuns(line.runs).find((r) => r.id === run.id) : undefined;

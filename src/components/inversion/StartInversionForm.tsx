@@ -126,7 +126,8 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
               hint={
                 <span data-testid="inversion-grid-size">
                   {form.spacing.trim() === '' ? `Default ${defaultSpacing} m, from half the median station spacing. ` : ''}
-                  {`Grid ${gridWords.text}${gridWords.tooLarge ? ' — past the limit; choose a larger cell.' : '.'}`}
+                  {/* The grid reaches the shots, so it is known once the pick set's shots are. */}
+                  {detail ? `Grid ${gridWords.text}${gridWords.tooLarge ? ' — past the limit; choose a larger cell.' : '.'}` : 'Working out the grid from the shots…'}
                 </span>
               }
             />

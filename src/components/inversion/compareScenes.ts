@@ -6,14 +6,16 @@ import { finiteRange } from '../run/section/velocityColours';
 import type { InversionSectionScene } from './InversionSectionCanvas';
 import { isoVelocityContours, isoVelocityLevels } from './velocityContours';
 
-/** One colour range over both sides, so the same colour means the same velocity on each (null while either is missing). */
-export function sharedRange(a: ArrayLike<number> | null, b: ArrayLike<number> | null): { min: number; max: number } | null {
+type Range = { min: number; max: number };
+
+/** One colour range over both sides (each side's own range: covered ground for an inversion), so the same colour means the same velocity on each; null while either is missing. */
+export function sharedRange(a: Range | null, b: Range | null): Range | null {
   if (!a || !b) return null;
-  const ra = finiteRange(a);
-  const rb = finiteRange(b);
-  if (!ra || !rb) return null;
-  return { min: Math.min(ra.min, rb.min), max: Math.max(ra.max, rb.max) };
+  return { min: Math.min(a.min, b.min), max: Math.max(a.max, b.max) };
 }
+
+/** A forward run's model has no coverage: all its ground counts. */
+export const modelRange = (values: ArrayLike<number> | null): Range | null => (values ? finiteRange(values) : null);
 
 /** A forward run's model drawn like an inversion section: no coverage mask and no depth of investigation, since no inversion made it. */
 export function useModelScene(

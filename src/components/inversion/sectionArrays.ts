@@ -63,3 +63,23 @@ export function doiPolylines(doi: readonly (number | null)[], grid: Grid): [numb
   if (current.length) runs.push(current);
   return runs;
 }
+
+/**
+ * The colour range of a section: the velocities of ground that at least one ray crossed. Ground no ray
+ * reached keeps whatever the smoothing left there, often far outside what the picks support; letting
+ * it set the range would wash out the part of the section that carries information (it is drawn at the
+ * end colours instead). Falls back to all ground when no node has coverage. Null without ground.
+ */
+export function coveredRange(velocity: ArrayLike<number>, coverage: ArrayLike<number>): { min: number; max: number } | null {
+  let min = Number.POSITIVE_INFINITY;
+  let max = Number.NEGATIVE_INFINITY;
+  for (let pass = 0; pass < 2 && !(min <= max); pass++) {
+    for (let i = 0; i < velocity.length; i++) {
+      const v = velocity[i]!;
+      if (!Number.isFinite(v) || (pass === 0 && !(coverage[i]! > 0))) continue;
+      if (v < min) min = v;
+      if (v > max) max = v;
+    }
+  }
+  return min <= max ? { min, max } : null;
+}

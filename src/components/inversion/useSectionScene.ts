@@ -1,22 +1,17 @@
 import { useMemo } from 'react';
 import type { InversionSectionView } from '../../../shared/schemas/inversions';
-import { finiteRange } from '../run/section/velocityColours';
 import { coverageMask } from './coverageMask';
 import type { InversionSectionScene } from './InversionSectionCanvas';
-import { doiPolylines, toFloat32, withoutMasked } from './sectionArrays';
+import { coveredRange, doiPolylines, toFloat32, withoutMasked } from './sectionArrays';
 import { isoVelocityContours, isoVelocityLevels } from './velocityContours';
 
 /** The typed arrays of a section, converted once per section. */
 export function useSectionArrays(section: InversionSectionView) {
-  return useMemo(
-    () => ({
-      velocity: toFloat32(section.velocity),
-      coverage: toFloat32(section.coverage),
-      range: finiteRange(toFloat32(section.velocity)) ?? { min: 0, max: 1 },
-      doi: doiPolylines(section.doi, section.grid),
-    }),
-    [section],
-  );
+  return useMemo(() => {
+    const velocity = toFloat32(section.velocity);
+    const coverage = toFloat32(section.coverage);
+    return { velocity, coverage, range: coveredRange(velocity, coverage) ?? { min: 0, max: 1 }, doi: doiPolylines(section.doi, section.grid) };
+  }, [section]);
 }
 
 /**

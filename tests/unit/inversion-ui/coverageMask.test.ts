@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { coverageMask, greyMaskedPixels, MASK_RGB, maskedShare, thresholdCeiling } from '../../../src/components/inversion/coverageMask';
+import { coveredRange } from '../../../src/components/inversion/sectionArrays';
 
 // Issue 11 asks for "cells below a coverage threshold greyed, threshold adjustable": a node with
 // less ray than the threshold is greyed, one with exactly the threshold or more is not, and air
@@ -45,5 +46,19 @@ describe('thresholdCeiling', () => {
     expect(thresholdCeiling([0.2, 1, 3, 40, 80, null])).toBe(5); // median 3 → 5 (floor)
     expect(thresholdCeiling([10, 30, 70, null])).toBe(50); // median 30 → 1–2–5 step 50
     expect(thresholdCeiling([null, null])).toBe(5);
+  });
+});
+
+describe('coveredRange', () => {
+  // The colour range comes from ground at least one ray crossed (coverage > 0); ground no ray reached
+  // is left to the end colours, and air (NaN) never counts.
+  it('spans the covered ground only', () => {
+    const v = [Number.NaN, 400, 900, 6500, 2500, 120];
+    const c = [Number.NaN, 12, 3, 0, 0.4, 0];
+    expect(coveredRange(v, c)).toEqual({ min: 400, max: 2500 });
+  });
+  it('falls back to all ground when no ray crossed any, and is null without ground', () => {
+    expect(coveredRange([Number.NaN, 700, 300], [Number.NaN, 0, 0])).toEqual({ min: 300, max: 700 });
+    expect(coveredRange([Number.NaN], [Number.NaN])).toBeNull();
   });
 });
