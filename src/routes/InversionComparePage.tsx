@@ -14,7 +14,7 @@ import { inversionTitle } from '../components/inversion/InversionHeader';
 import { SectionControls } from '../components/inversion/SectionControls';
 import { SectionLegend } from '../components/inversion/SectionLegend';
 import { TomographyCaution } from '../components/inversion/TomographyCaution';
-import { modelRange, sharedRange, useModelScene } from '../components/inversion/compareScenes';
+import { modelRange, padScene, sharedRange, unionExtent, useModelScene, type Extent } from '../components/inversion/compareScenes';
 import { coveredRange, toFloat32 } from '../components/inversion/sectionArrays';
 import { useSectionScene } from '../components/inversion/useSectionScene';
 import { runLabel } from '../components/run/compare/CompareChooser';
@@ -24,6 +24,8 @@ import { useElementWidth } from '../components/run/useElementWidth';
 
 interface SideProps {
   letter: 'A' | 'B';
+  /** Both sides are drawn over this stretch of line and depth (null until both grids are known). */
+  extent: Extent | null;
   title: string;
   to: string;
   chi2: number | null | undefined;
@@ -33,8 +35,9 @@ interface SideProps {
   note?: ReactNode;
 }
 
-function Side({ letter, title, to, chi2, rmsMs, scene, exaggeration, note }: SideProps) {
+function Side({ letter, extent, title, to, chi2, rmsMs, scene, exaggeration, note }: SideProps) {
   const { ref, width } = useElementWidth<HTMLDivElement>(600);
+  const shown = useMemo(() => (scene && extent ? padScene(scene, extent) : scene), [scene, extent]);
   return (
     <div data-testid={`compare-side-${letter}`} className="min-w-0">
       <h3 className="text-lg font-semibold text-stone-900">
@@ -45,8 +48,8 @@ function Side({ letter, title, to, chi2, rmsMs, scene, exaggeration, note }: Sid
         {note}
       </p>
       <div ref={ref} className="overflow-x-auto rounded-lg border border-stone-200 bg-white p-2">
-        {scene ? (
-          <InversionSectionCanvas scene={scene} width={Math.max(300, width - 16)} exaggeration={exaggeration} label={`Section ${letter}: ${title}`} testId={`compare-canvas-${letter}`} />
+        {shown ? (
+          <InversionSectionCanvas scene={shown} width={Math.max(300, width - 16)} exaggeration={exaggeration} label={`Section ${letter}: ${title}`} testId={`compare-canvas-${letter}`} />
         ) : (
           <div role="status" className="flex h-48 items-center justify-center text-stone-600">
             Loading the section…
@@ -111,6 +114,8 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
   const rangeA = useMemo(() => (sectionA.data ? sectionRange(sectionA.data) : null), [sectionA.data]);
   const rangeB = useMemo(() => (isInv ? (sectionB.data ? sectionRange(sectionB.data) : null) : modelRange(runGrid.data?.values ?? null)), [isInv, sectionB.data, runGrid.data]);
   const range = useMemo(() => sharedRange(rangeA, rangeB), [rangeA, rangeB]);
+  const gridB = isInv ? sectionB.data?.grid : runGrid.data?.grid;
+  const extent = useMemo(() => (sectionA.data && gridB ? unionExtent(sectionA.data.grid, gridB) : null), [sectionA.data, gridB]);
   const surface = (runModel.data?.model.surface as [number, number][] | undefined) ?? null;
   const runScene = useModelScene(isInv ? undefined : runGrid.data, surface, line?.stations ?? [], runShots.data, range, contours);
 
@@ -154,18 +159,18 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
         {(sectionA.error || sectionB.error || runGrid.error) && <LoadError error={sectionA.error ?? sectionB.error ?? runGrid.error} what="section" />}
         <div className="grid gap-6 xl:grid-cols-2">
           {sectionA.data && range ? (
-            <InversionSideView letter="A" inversion={inversion} section={sectionA.data} range={range} threshold={threshold} contours={contours} exaggeration={ve} />
+            <InversionSideView letter="A" extent={extent} inversion={inversion} section={sectionA.data} range={range} threshold={threshold} contours={contours} exaggeration={ve} />
           ) : (
-            <Side letter="A" title={inversionTitle(inversion)} to={`/lines/${inversion.lineId}/inversions/${inversion.id}`} chi2={inversion.stats?.chi2} rmsMs={inversion.stats?.rms_ms} scene={null} exaggeration={ve} />
+            <Side letter="A" extent={extent} title={inversionTitle(inversion)} to={`/lines/${inversion.lineId}/inversions/${inversion.id}`} chi2={inversion.stats?.chi2} rmsMs={inversion.stats?.rms_ms} scene={null} exaggeration={ve} />
           )}
           {isInv ? (
             sectionB.data && range && bInv.data ? (
-              <InversionSideView letter="B" inversion={bInv.data} section={sectionB.data} range={range} threshold={threshold} contours={contours} exaggeration={ve} />
+              <InversionSideView letter="B" extent={extent} inversion={bInv.data} section={sectionB.data} range={range} threshold={threshold} contours={contours} exaggeration={ve} />
             ) : (
-              <Side letter="B" title={bTitle} to="#" chi2={null} rmsMs={null} scene={null} exaggeration={ve} />
+              <Side letter="B" extent={extent} title={bTitle} to="#" chi2={null} rmsMs={null} scene={null} exaggeration={ve} />
             )
           ) : (
-            <Side letter="B" title={bTitle} to={`/runs/${target.id}`} chi2={bRun.data?.stats?.chi2} rmsMs={bRun.data?.stats?.rms_ms} scene={runScene} exaggeration={ve} />
+            <Side letter="B" extent={extent} title={bTitle} to={`/runs/${target.id}`} chi2={bRun.data?.stats?.chi2} rmsMs={bRun.data?.stats?.rms_ms} scene={runScene} exaggeration={ve} />
           )}
         </div>
         <div className="mb-8">
@@ -189,12 +194,13 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
   );
 }
 
-function InversionSideView(props: { letter: 'A' | 'B'; inversion: InversionView; section: InversionSectionView; range: { min: number; max: number }; threshold: number; contours: boolean; exaggeration: number }) {
+function InversionSideView(props: { letter: 'A' | 'B'; extent: Extent | null; inversion: InversionView; section: InversionSectionView; range: { min: number; max: number }; threshold: number; contours: boolean; exaggeration: number }) {
   const { inversion, section, threshold, contours, range } = props;
   const scene = useSectionScene(section, threshold, contours, range);
   return (
     <Side
       letter={props.letter}
+      extent={props.extent}
       title={inversionTitle(inversion)}
       to={`/lines/${inversion.lineId}/inversions/${inversion.id}`}
       chi2={inversion.stats?.chi2}

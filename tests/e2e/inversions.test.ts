@@ -217,6 +217,16 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
     await page.getByTestId('compare-canvas-B').waitFor();
     expect(await page.getByTestId('compare-range').textContent()).toMatch(/no coverage mask or depth of investigation/);
     expect(await page.getByTestId('compare-side-B').textContent()).toMatch(/χ² per datum 1\.50 · RMS 0\.62 ms/);
+    // The two grids differ (inversion 1.25 m cells from x −12.5 m, demo model 0.3 m from −20 m), yet the
+    // sections cover the same stretch: the same point of either drawing reads the same x.
+    const xAt = async (letter: 'A' | 'B') => {
+      const box = (await page.getByTestId(`compare-canvas-${letter}`).boundingBox())!;
+      await page.mouse.move(box.x + box.width * 0.3, box.y + box.height * 0.5);
+      const text = (await page.getByTestId(`compare-canvas-${letter}-readout`).textContent()) ?? '';
+      return Number(/x (-?\d+\.\d) m/.exec(text)?.[1]);
+    };
+    const [xA, xB] = [await xAt('A'), await xAt('B')];
+    expect(Math.abs(xA - xB)).toBeLessThan(1.5);
     await page.getByTestId('difference-grid').waitFor();
     await shot(page, 'inversion-compare-run');
 
