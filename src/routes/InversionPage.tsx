@@ -13,7 +13,7 @@ import { InversionSummary } from '../components/inversion/InversionSummary';
 import { SaveModelPanel } from '../components/inversion/SaveModelPanel';
 import { SettingsList } from '../components/inversion/SettingsList';
 import { TomographyCaution } from '../components/inversion/TomographyCaution';
-import { canRunInversions } from '../lib/permissions';
+import { canCancelInversions, canRunInversions } from '../lib/permissions';
 
 /**
  * One inversion (/lines/:lineId/inversions/:inversionId): live progress and convergence while it runs,
@@ -38,7 +38,7 @@ export function InversionPage() {
       <title>{`Inversion · ${line.data?.name ?? 'line'} · Timefield`}</title>
       <InversionHeader inversion={inv} line={line.data} />
       <TomographyCaution />
-      {isInversionActive(inv.status) && <InversionProgress inversion={inv} canCancel={mayAct} />}
+      {isInversionActive(inv.status) && <InversionProgress inversion={inv} canCancel={canCancelInversions(line.data?.myRole)} />}
       {(inv.status === 'failed' || inv.status === 'cancelled') && (
         <>
           <InversionOutcome inversion={inv} />

@@ -273,10 +273,11 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
     await context.close();
   });
 
-  it('field technician and lead read inversions but cannot start, cancel or save them', async () => {
-    for (const email of ['tech@timefield.test', 'lead@timefield.test']) {
+  it('field technician and lead read inversions but cannot start or save them; a lead may cancel, as for runs', async () => {
+    for (const [email, mayCancel] of [['tech@timefield.test', false], ['lead@timefield.test', true]] as const) {
       const { context, stub: own } = await contextFor(email);
       const id = own.addDone('Read only', 380, 95);
+      const running = own.addRunning('Still going');
       const page = await context.newPage();
       await page.goto(`${server.baseUrl}/lines/${lineId}?tab=inversions`);
       await page.getByTestId('line-inversions').waitFor();
@@ -285,6 +286,9 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
       await page.getByTestId('inversion-section-canvas').waitFor();
       expect(await page.getByTestId('save-inversion-model').count()).toBe(0);
       expect(await page.getByText('A geophysicist can save this section').count()).toBe(1);
+      await page.goto(`${server.baseUrl}/lines/${lineId}/inversions/${running}`);
+      await page.getByTestId('inversion-progress').waitFor();
+      expect(await page.getByTestId('cancel-inversion').count()).toBe(mayCancel ? 1 : 0);
       await context.close();
     }
   });

@@ -150,8 +150,10 @@ export function serverFieldErrors(issues: readonly ApiIssue[]): { fields: FormFi
   for (const issue of issues) {
     const segments = issuePathSegments(issue);
     const key = fieldOfPath(segments);
-    if (key) fields[key] = fields[key] ? `${fields[key]}; ${issue.message}` : issue.message;
-    else other.push(segments.length ? `${segments.join('.')}: ${issue.message}` : issue.message);
+    // A pick-file problem (a shot outside the grid, say) names its line in the file, not an input.
+    const place = typeof issue.line === 'number' ? `Pick file line ${issue.line}${issue.column !== undefined && issue.column !== null ? `, ${issue.column}` : ''}` : null;
+    if (key && !place) fields[key] = fields[key] ? `${fields[key]}; ${issue.message}` : issue.message;
+    else other.push(place ? `${place}: ${issue.message}` : segments.length ? `${segments.join('.')}: ${issue.message}` : issue.message);
   }
   return { fields, other };
 }

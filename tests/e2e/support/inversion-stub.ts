@@ -116,6 +116,8 @@ export interface InversionStub {
   inversions: Map<string, Stored>;
   /** Add a finished inversion directly (for the comparison). */
   addDone(label: string, base: number, gradient: number): string;
+  /** Add an inversion that stays running until cancelled. */
+  addRunning(label: string): string;
   /** A finished forward run of the demo model (only GET /api/runs/:id and its residuals are canned). */
   addRun(modelId: string, pickSetId: string): string;
 }
@@ -193,6 +195,11 @@ export async function stubInversions(context: BrowserContext, lineId: string, sa
       const s: Stored = { view, polls: 0, hold: false, section: cannedSection(base, gradient, false), residuals: cannedResiduals(1.3) };
       finish(s);
       inversions.set(view.id, s);
+      return view.id;
+    },
+    addRunning(label) {
+      const view = viewOf(lineId, startInversionBody.parse({ pickSetId: 'a1b2c3d4-e5f6-4a7b-8c9d-0e1f2a3b4c5d', start: { kind: 'gradient' }, label }), label);
+      inversions.set(view.id, { view, polls: 1, hold: true, section: cannedSection(380, 95, false), residuals: cannedResiduals(1) });
       return view.id;
     },
     addRun(modelId, pickSetId) {

@@ -86,6 +86,12 @@ describe('server issues on the form', () => {
     expect(other).toEqual(['too few picks for the grid', 'grid.nx: the grid is past the limit']);
   });
 
+  it('lists pick-file problems with their line in the file, not on an input', () => {
+    const { fields, other } = serverFieldErrors([{ path: '', line: 14, column: 'receiver_x', message: 'the geophone lies outside the grid' }]);
+    expect(fields).toEqual({});
+    expect(other).toEqual(['Pick file line 14, receiver_x: the geophone lies outside the grid']);
+  });
+
   it('maps deeper paths to their input', () => {
     expect(fieldOfPath(['settings', 'vMax'])).toBe('settings.vMax');
     expect(fieldOfPath(['start', 'spacing'])).toBe('start.spacing');
