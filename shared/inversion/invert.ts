@@ -12,8 +12,9 @@
  * 1263–1280, "cooling"; from memory). A weight given by the user is kept fixed.
  *
  * A step that makes the misfit worse is halved once; if that is still worse the model stays and
- * λ is raised fourfold. Stops: χ² within [0.9, 1.1]; χ² changing by less than 2 % in a step while
- * λ cannot fall further (fixed, or at its floor), or in two steps in a row; the iteration cap;
+ * λ is raised fourfold (three times at most). A step that changes χ² by less than 2 % halves λ
+ * (the smoothing is what holds the model back). Stops: χ² within [0.9, 1.1]; χ² changing by less
+ * than 2 % in a step while λ cannot fall further (fixed, or at its floor); the iteration cap;
  * cancellation (the AbortSignal).
  */
 import { CHECKER_AMPLITUDE, autoCheckerSize, checkerPattern, correlation, normalDeviates } from './checkerboard';
@@ -75,11 +76,12 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
   const start = new Float64Array(nu);
   for (let j = 0; j < nu; j++) start[j] = clipS(1 / problem.start[nodeOf[j]]);
 
-  const timings: Timings = { forwardSeconds: 0, matrixSeconds: 0, lsqrSeconds: 0 };
+  const timings: Timings = { forwardSteps: 0, forwardSeconds: 0, matrixSeconds: 0, lsqrSeconds: 0 };
   const forward = async (v: Float32Array): Promise<ForwardResult> => {
     const t0 = nowSeconds();
     const f = await modeller.forward(v);
     timings.forwardSeconds += nowSeconds() - t0;
+    timings.forwardSteps++;
     return f;
   };
   const toVelocity = (s: Float64Array): Float32Array => {
@@ -111,7 +113,6 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
   const fixed = settings.smoothing !== null;
   let stopReason: StopReason = 'iteration-cap';
   let lastLambda = lambda;
-  let slowSteps = 0;
   let rejections = 0;
   for (;;) {
     if (fit.chi2 >= TARGET_CHI2.low && fit.chi2 <= TARGET_CHI2.high) {
@@ -196,10 +197,12 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
         // Lower λ only when the linearisation held (the misfit fell by at least half of what it
         // predicted); raise it when it failed badly. The trust-region ratio test of Nocedal &
         // Wright 2006, "Numerical Optimization", 2nd ed., Algorithm 4.1.
+        // A step that hardly moved the misfit means the smoothing holds the model back: loosen it.
         const gain = (previous - fit.chi2) / Math.max(1e-12, previous - predicted(trial.fraction));
+        const slow = (previous - fit.chi2) / previous < STALL_CHANGE;
         if (fit.chi2 < TARGET_CHI2.low) lambda *= 2;
-        else if (fit.chi2 > TARGET_CHI2.high && gain >= 0.5) lambda = Math.max(AUTO_SMOOTHING_FLOOR, lambda / 2);
-        else if (gain < 0.1) lambda *= 2;
+        else if (gain < 0.1 && !slow) lambda *= 2;
+        else if (fit.chi2 > TARGET_CHI2.high && (gain >= 0.5 || slow)) lambda = Math.max(AUTO_SMOOTHING_FLOOR, lambda / 2);
       }
     }
     history.push({ iteration: history.length, chi2: fit.chi2, rmsMs: fit.rmsMs, smoothing: lastLambda, seconds: nowSeconds() - t0 });
@@ -215,9 +218,8 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
       continue;
     }
     const change = Math.abs(previous - fit.chi2) / previous;
-    slowSteps = change < STALL_CHANGE ? slowSteps + 1 : 0;
     const atFloor = fixed || lastLambda <= AUTO_SMOOTHING_FLOOR;
-    if (slowSteps >= 2 || (slowSteps === 1 && atFloor)) {
+    if (change < STALL_CHANGE && atFloor) {
       stopReason = fit.chi2 >= TARGET_CHI2.low && fit.chi2 <= TARGET_CHI2.high ? 'target-misfit' : 'stalled';
       break;
     }

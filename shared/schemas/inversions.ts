@@ -53,7 +53,7 @@ export const inversionStart = z.discriminatedUnion('kind', [
 export const startInversionBody = z.strictObject({
   pickSetId: z.uuid('must be a pick set id'),
   /** Absent = the pick set's latest revision. */
-  pickSetRevision: z.number().int().positive().optional(),
+  pickSetRevision: z.number().int('must be a whole number').min(0, 'must be 0 (as uploaded) or a later revision').optional(),
   start: inversionStart,
   settings: inversionSettingsInput.prefault({}),
   label: z.string().trim().max(200).optional().default(''),

@@ -11,7 +11,7 @@ import { gridFromSpec, type GridSpec } from './grid-spec';
 import { fitPolylineToRange, type Point } from './polyline-edit';
 
 /** Spacings offered by default, finest first (m). */
-const NICE_SPACINGS = [0.1, 0.2, 0.25, 0.5, 1, 2, 2.5, 5, 10, 20, 25, 50];
+export const NICE_SPACINGS = [0.1, 0.2, 0.25, 0.5, 1, 2, 2.5, 5, 10, 20, 25, 50];
 /** The default spacing keeps the grid at most this many nodes along the line (a quick preview). */
 const DEFAULT_MAX_NX = 400;
 
