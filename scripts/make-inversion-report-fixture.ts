@@ -90,7 +90,6 @@ writeFileSync(
     stations: GEOPHONES.map((x, i) => ({ station: 101 + i, x, z: +fine.surfaceZ(x).toFixed(2) })),
     residuals,
     checkerboard: { size: cb.size, amplitude: cb.amplitude, correlation: +cb.correlation.toFixed(4), coverageThreshold: cb.coverageThreshold, truePattern: nullable(cb.truePattern, 4), recovered: nullable(cb.recovered, 4) },
-    seconds: +seconds.toFixed(1),
   })}\n`,
 );
 console.log(`${out}: ${result.history.length - 1} iterations (${result.stopReason}), χ² ${result.history.at(-1)!.chi2.toFixed(3)}, checkerboard r = ${cb.correlation.toFixed(3)}, ${seconds.toFixed(1)} s`);
