@@ -95,6 +95,7 @@ describe('inversion report: numbers', () => {
     expect(flow).toContain(`The misfit fell from χ² ${first.chi2.toFixed(2)} (RMS ${first.rmsMs.toFixed(2)} ms) on the starting model to χ² ${last.chi2.toFixed(2)} (RMS ${last.rmsMs.toFixed(2)} ms) after ${last.iteration} iterations`);
     expect(input.inversion.stopReason).toBe('target-misfit');
     expect(flow).toContain('it stopped because χ² per datum reached the target range 0.9 to 1.1');
+    expect(flow).toContain('Figure 2. Convergence: χ² per datum on a logarithmic scale, the target range 0.9 to 1.1 shaded');
   });
 
   it('prints the misfit of the final model as computed from the residual rows', () => {
@@ -138,7 +139,7 @@ describe('inversion report: numbers', () => {
     const cb = input.inversion.checkerboard!;
     expect(flow).toContain(`squares ${cb.size} m across, alternately 7 % faster and slower`);
     expect(flow).toContain(`r = ${cb.correlation!.toFixed(2)}`);
-    expect(flow).toContain('Figure 3. Checkerboard test');
+    expect(flow).toContain('Figure 4. Checkerboard test');
   });
 
   it('carries the limitations of tomography next to the usual cautions', () => {

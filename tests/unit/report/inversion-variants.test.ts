@@ -10,6 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { smallInversionReportInput } from '../../../fixtures/report/inversion';
+import { logTicks } from '../../../worker/report/inversion/convergence-figure';
 import { renderInversionReportPdf } from '../../../worker/report/inversion/render';
 import type { InversionReportInput } from '../../../worker/report/inversion/types';
 import { KNOWN_GRID, knownInversionInput, UNCOVERED_BLOCK } from './inversion-inputs';
@@ -149,5 +150,13 @@ describe('inversion report: bad input', () => {
     const f = smallInversionReportInput();
     const input = { ...f, inversion: { ...f.inversion, checkerboard: { ...f.inversion.checkerboard!, recovered: [0.1] } } };
     await expect(renderInversionReportPdf(input)).rejects.toThrow(/^inversion\.checkerboard\.recovered: must hold 1971 values \(got 1\)$/);
+  });
+});
+
+describe('convergence chart ticks', () => {
+  it('labels a logarithmic χ² axis at 1, 2 and 5 of every decade it spans (common practice, no source)', () => {
+    expect(logTicks(0.8, 13)).toEqual([1, 2, 5, 10]);
+    expect(logTicks(0.3, 1.2)).toEqual([0.5, 1]);
+    expect(logTicks(0.9, 260)).toEqual([1, 2, 5, 10, 20, 50, 100, 200]);
   });
 });

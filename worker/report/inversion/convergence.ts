@@ -1,7 +1,9 @@
 /** Section "Convergence": χ², RMS misfit and the smoothing weight of every iteration, and why it stopped. */
-import { caption, paragraph, sectionHeading } from '../flow';
+import { caption, captionHeight, paragraph, sectionHeading } from '../flow';
 import { fixed, NONE } from '../format';
+import { CONTENT } from '../style';
 import { drawTable } from '../table';
+import { drawConvergenceChart } from './convergence-figure';
 import type { InversionContext } from './context';
 import type { InversionReportInput } from './types';
 
@@ -35,6 +37,13 @@ export function drawConvergence(ctx: InversionContext): void {
   } else if (last.chi2 < 0.5) {
     paragraph(ctx, `The final χ² per datum is well below 1: the model fits the picks more closely than their stated uncertainty warrants, and may show features that are noise.`);
   }
+  const text = 'Convergence: χ² per datum on a logarithmic scale, the target range 0.9 to 1.1 shaded (left), and RMS misfit in ms (right), after each iteration; iteration 0 is the starting model.';
+  const height = 120;
+  ctx.ensureSpace(height + 50 + captionHeight(ctx, text));
+  drawConvergenceChart(ctx, CONTENT.left + 40, ctx.y + 8, CONTENT.width - 50, height);
+  ctx.y += 8 + height + 36;
+  caption(ctx, 'Figure', text);
+
   ctx.ensureSpace(60);
   const table = caption(ctx, 'Table', 'Convergence: χ² per datum and RMS misfit of the model after each iteration (iteration 0: the starting model), and the smoothing weight of the step that produced it.');
   ctx.y -= 8;
