@@ -2,7 +2,7 @@
 import { caption, captionHeight, paragraph, sectionHeading } from '../flow';
 import { count, fixed, plain } from '../format';
 import { stationSpacing } from '../line-geometry';
-import { CONTENT } from '../style';
+import { COLOUR, CONTENT } from '../style';
 import { sectionLayoutFor } from '../velocity-figure';
 import type { InversionContext } from './context';
 import { sectionNo } from './convergence';
@@ -26,7 +26,7 @@ export function drawInversionSection(ctx: InversionContext): void {
       `after ${last.iteration} iteration${last.iteration === 1 ? '' : 's'} the model explains the picks with χ² per datum ${fixed(last.chi2, 2)} and RMS misfit ${fixed(last.rmsMs, 2)} ms.`,
   );
   const lineNotes = input.line.notes.trim();
-  if (lineNotes) paragraph(ctx, lineNotes, { colour: '#5d6a73' });
+  if (lineNotes) paragraph(ctx, lineNotes, { colour: COLOUR.muted });
   paragraph(
     ctx,
     `Only the part of the section that rays cross says anything about the ground. Nodes crossed by less than ${plain(ctx.threshold, 2)} m of ray in total are greyed out, and below the depth of investigation (the deepest ray in each column) the model is simply the starting model smoothed: nothing is known there.`,
