@@ -4,21 +4,17 @@
  * residuals and misfit. Exit 0 on success, 1 for bad input files, 2 for usage errors.
  * Messages go to stderr as sentences, never stack traces.
  */
-import { createReadStream } from 'node:fs';
-import { readFile, writeFile } from 'node:fs/promises';
+import { writeFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { validateSolveInput, EikonalInputError } from '../shared/eikonal';
-import { formatModelIssues, parseModelFile, rasteriseModel } from '../shared/model';
-import { createPickParser, formatPickError, groupPicksByShot, placeShots, type Pick, type PickError } from '../shared/picks';
+import { rasteriseModel } from '../shared/model';
+import { groupPicksByShot, placeShots } from '../shared/picks';
 import { computeResiduals, formatResidualCsv, residualStats, statsByShot, type ResidualInput } from '../shared/residuals';
 import { sToMs } from '../shared/units';
 import { defaultThreadCount, ShotPool, ShotSolveError } from '../worker/threads/shot-pool';
+import { InputError, pickErrors, readModel, readPicks, runCli, UsageError } from './lib/cli-inputs';
 
 const USAGE = 'usage: npm run solve -- --model M.model.json --picks P.picks.csv [--order 1|2] [--residuals OUT.csv] [--json] [--threads N]';
-
-class UsageError extends Error {}
-/** Bad input files or positions: exit 1. */
-class InputError extends Error {}
 
 interface CliOptions {
   model: string;
@@ -58,40 +54,6 @@ function readOptions(argv: string[]): CliOptions {
   return { model: values.model, picks: values.picks, order: values.order === '1' ? 1 : 2, residuals: values.residuals, json: values.json, threads };
 }
 
-async function readModel(path: string) {
-  let text: string;
-  try {
-    text = await readFile(path, 'utf8');
-  } catch (err) {
-    throw new InputError(`${path}: cannot read the model file (${(err as NodeJS.ErrnoException).code ?? (err as Error).message})`);
-  }
-  let json: unknown;
-  try {
-    json = JSON.parse(text);
-  } catch (err) {
-    throw new InputError(`${path}: not valid JSON (${(err as Error).message})`);
-  }
-  const parsed = parseModelFile(json);
-  if (!parsed.ok) throw new InputError(`${path}: the model file has errors:\n${indent(formatModelIssues(parsed.issues))}`);
-  return parsed.model;
-}
-
-/** Streams the file through the chunked parser (never holds more than one chunk of text plus the picks). */
-async function readPicks(path: string): Promise<Pick[]> {
-  const parser = createPickParser();
-  try {
-    for await (const chunk of createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 16 })) parser.push(chunk as string);
-  } catch (err) {
-    throw new InputError(`${path}: cannot read the pick file (${(err as NodeJS.ErrnoException).code ?? (err as Error).message})`);
-  }
-  const result = parser.finish();
-  if (!result.ok) throw new InputError(pickErrors(path, 'the pick file has errors', result.errors));
-  return result.picks;
-}
-
-const indent = (text: string): string => text.split('\n').map((l) => `  ${l}`).join('\n');
-const pickErrors = (path: string, what: string, errors: PickError[]): string =>
-  `${path}: ${what}:\n${indent(errors.map(formatPickError).join('\n'))}`;
 const round = (v: number, digits: number): number => +v.toFixed(digits);
 
 async function main(argv: string[]): Promise<void> {
@@ -177,20 +139,4 @@ async function main(argv: string[]): Promise<void> {
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 
-main(process.argv.slice(2)).then(
-  () => {
-    process.exitCode = 0;
-  },
-  (err: unknown) => {
-    if (err instanceof UsageError) {
-      process.stderr.write(`${err.message ? `solve: ${err.message}\n` : ''}${USAGE}\n`);
-      process.exitCode = 2;
-    } else if (err instanceof InputError) {
-      process.stderr.write(`solve: ${err.message}\n`);
-      process.exitCode = 1;
-    } else {
-      process.stderr.write(`solve: internal error: ${err instanceof Error ? err.message : String(err)}\n`);
-      process.exitCode = 1;
-    }
-  },
-);
+runCli('solve', USAGE, () => main(process.argv.slice(2)));

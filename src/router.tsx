@@ -37,6 +37,9 @@ export const router = createBrowserRouter([
           { path: 'lines/:lineId/runs', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/LineRunsPage')).LineRunsPage }) },
           { path: 'runs/:runId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunPage')).RunPage }) },
           { path: 'runs/:runId/compare/:otherRunId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/RunComparePage')).RunComparePage }) },
+          // Inversion pages (issue 11) carry the section and chart code: their own chunks, loaded on first visit.
+          { path: 'lines/:lineId/inversions/:inversionId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/InversionPage')).InversionPage }) },
+          { path: 'lines/:lineId/inversions/:inversionId/compare', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/InversionComparePage')).InversionComparePage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },
           { path: 'account', element: <MyAccountPage /> },
           // Reports, the mail outbox and the audit trail (issue 7), each in its own small chunk.

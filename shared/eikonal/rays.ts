@@ -155,11 +155,14 @@ export class RayTracer {
     for (const e of edges) if (e.conduit && (!best || e.rate > best.rate)) best = e;
     if (best) return best;
 
-    const cxs = onX ? [Math.round(fx) - 1, Math.round(fx)] : [Math.floor(fx)];
-    const czs = onZ ? [Math.round(fz) - 1, Math.round(fz)] : [Math.floor(fz)];
-    for (const cz of czs) {
+    // Candidate cells: the one containing the point, or both sides of a grid line it sits on.
+    const cx0 = onX ? Math.round(fx) - 1 : Math.floor(fx);
+    const cx1 = onX ? cx0 + 1 : cx0;
+    const cz0 = onZ ? Math.round(fz) - 1 : Math.floor(fz);
+    const cz1 = onZ ? cz0 + 1 : cz0;
+    for (let cz = cz0; cz <= cz1; cz++) {
       if (cz < 0 || cz > nz - 2) continue;
-      for (const cx of cxs) {
+      for (let cx = cx0; cx <= cx1; cx++) {
         if (cx < 0 || cx > nx - 2) continue;
         const ux = clamp(fx - cx, 0, 1);
         const uz = clamp(fz - cz, 0, 1);
@@ -184,35 +187,37 @@ export class RayTracer {
     const { nx, nz, dx, dz } = this.grid;
     const ncx = nx - 1;
     const moves: Move[] = [];
-    const add = (ta: number, tb: number, h: number, vx: number, vz: number, limit: number, c1: number, c2: number): void => {
-      if (!Number.isFinite(ta) || !Number.isFinite(tb) || !(limit > 0)) return;
-      const rate = (tb - ta) / h; // fall of time per metre towards a
-      const contrast = (c1 >= 0 && this.cells.contrast[c1] !== 0) || (c2 >= 0 && this.cells.contrast[c2] !== 0);
-      const cell = this.fasterCell(c1, c2);
-      const conduit = contrast && rate >= CONDUIT * this.cells.value[cell];
-      moves.push({ vx, vz, limit, cell, rate, conduit });
-    };
     if (onZ) {
       const iz = Math.round(fz);
-      for (const sgn of [-1, 1]) {
+      for (let sgn = -1; sgn <= 1; sgn += 2) {
         const ixa = sgn < 0 ? Math.ceil(fx - EPS) - 1 : Math.floor(fx + EPS) + 1; // next node that way
         if (ixa < 0 || ixa > nx - 1) continue;
         const ixb = ixa - sgn;
         const cx = Math.min(ixa, ixb);
-        add(T[iz * nx + ixa], T[iz * nx + ixb], dx, sgn / dx, 0, Math.abs(ixa - fx) * dx, iz > 0 ? (iz - 1) * ncx + cx : -1, iz < nz - 1 ? iz * ncx + cx : -1);
+        this.addEdgeMove(moves, T[iz * nx + ixa], T[iz * nx + ixb], dx, sgn / dx, 0, Math.abs(ixa - fx) * dx, iz > 0 ? (iz - 1) * ncx + cx : -1, iz < nz - 1 ? iz * ncx + cx : -1);
       }
     }
     if (onX) {
       const ix = Math.round(fx);
-      for (const sgn of [-1, 1]) {
+      for (let sgn = -1; sgn <= 1; sgn += 2) {
         const iza = sgn < 0 ? Math.ceil(fz - EPS) - 1 : Math.floor(fz + EPS) + 1;
         if (iza < 0 || iza > nz - 1) continue;
         const izb = iza - sgn;
         const cz = Math.min(iza, izb);
-        add(T[iza * nx + ix], T[izb * nx + ix], dz, 0, sgn / dz, Math.abs(iza - fz) * dz, ix > 0 ? cz * ncx + ix - 1 : -1, ix < nx - 1 ? cz * ncx + ix : -1);
+        this.addEdgeMove(moves, T[iza * nx + ix], T[izb * nx + ix], dz, 0, sgn / dz, Math.abs(iza - fz) * dz, ix > 0 ? cz * ncx + ix - 1 : -1, ix < nx - 1 ? cz * ncx + ix : -1);
       }
     }
     return moves;
+  }
+
+  /** The move from b towards a along an edge of length h between cells c1 and c2 (−1: none). */
+  private addEdgeMove(moves: Move[], ta: number, tb: number, h: number, vx: number, vz: number, limit: number, c1: number, c2: number): void {
+    if (!Number.isFinite(ta) || !Number.isFinite(tb) || !(limit > 0)) return;
+    const rate = (tb - ta) / h; // fall of time per metre towards a
+    const contrast = (c1 >= 0 && this.cells.contrast[c1] !== 0) || (c2 >= 0 && this.cells.contrast[c2] !== 0);
+    const cell = this.fasterCell(c1, c2);
+    const conduit = contrast && rate >= CONDUIT * this.cells.value[cell];
+    moves.push({ vx, vz, limit, cell, rate, conduit });
   }
 
   private fasterCell(a: number, b: number): number {

@@ -6,3 +6,6 @@ export { inProcessModeller } from './forward';
 export { shotSensitivity, type ShotSensitivity } from './shot-sensitivity';
 export { lsqr, type LsqrOperator, type LsqrResult } from './lsqr';
 export { CsrMatrix } from './csr';
+export { inversionShots, inversionDataProblems, MIN_INVERSION_PICKS, MAX_NODES_PER_PICK } from './problem';
+export { InversionInputError, AUTO_SMOOTHING_START, AUTO_SMOOTHING_FLOOR, TARGET_CHI2 } from './invert';
+export { CHECKER_AMPLITUDE, autoCheckerSize } from './checkerboard';

@@ -72,15 +72,25 @@ export function lsqr(A: LsqrOperator, b: Float64Array, options: LsqrOptions = {}
 
   while (iterations < maxIterations) {
     iterations++;
-    // Bidiagonalisation: β u = A v − α u ; α v = Aᵀ u − β v
+    // Bidiagonalisation: β u = A v − α u ; α v = Aᵀ u − β v (each update fused with its norm).
     A.apply(v, Av);
-    for (let i = 0; i < m; i++) u[i] = Av[i] - alpha * u[i];
-    beta = norm(u);
+    let su = 0;
+    for (let i = 0; i < m; i++) {
+      const ui = Av[i] - alpha * u[i];
+      u[i] = ui;
+      su += ui * ui;
+    }
+    beta = Math.sqrt(su);
     if (beta > 0) scale(u, 1 / beta);
     anorm2 += alpha * alpha + beta * beta;
     A.applyTranspose(u, Atu);
-    for (let j = 0; j < n; j++) v[j] = Atu[j] - beta * v[j];
-    alpha = norm(v);
+    let sv = 0;
+    for (let j = 0; j < n; j++) {
+      const vj = Atu[j] - beta * v[j];
+      v[j] = vj;
+      sv += vj * vj;
+    }
+    alpha = Math.sqrt(sv);
     if (alpha > 0) scale(v, 1 / alpha);
 
     // Plane rotation eliminating β from the lower bidiagonal.
@@ -94,8 +104,11 @@ export function lsqr(A: LsqrOperator, b: Float64Array, options: LsqrOptions = {}
 
     const t1 = phi / rho;
     const t2 = -theta / rho;
+    let sx = 0;
     for (let j = 0; j < n; j++) {
-      x[j] += t1 * w[j];
+      const xj = x[j] + t1 * w[j];
+      x[j] = xj;
+      sx += xj * xj;
       w[j] = v[j] + t2 * w[j];
     }
 
@@ -103,7 +116,7 @@ export function lsqr(A: LsqrOperator, b: Float64Array, options: LsqrOptions = {}
     const rnorm = phiBar;
     const anorm = Math.sqrt(anorm2);
     const arnorm = phiBar * alpha * Math.abs(c);
-    const xnorm = norm(x);
+    const xnorm = Math.sqrt(sx);
     if (rnorm <= btol * bnorm + atol * anorm * xnorm) {
       reason = 1;
       break;

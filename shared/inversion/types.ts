@@ -95,6 +95,8 @@ export interface InversionHooks {
 }
 
 export interface Timings {
+  /** Forward steps (every shot solved and its rays traced), and their wall-clock time. */
+  forwardSteps: number;
   forwardSeconds: number;
   matrixSeconds: number;
   lsqrSeconds: number;

@@ -3,7 +3,8 @@ export interface ApiIssue {
   path: string | (string | number)[];
   message: string;
   line?: number;
-  column?: number;
+  /** The server names the pick-file column (server/http/errors.ts). */
+  column?: string | number | null;
 }
 
 export class ApiError extends Error {

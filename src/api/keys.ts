@@ -39,3 +39,11 @@ export const adminKeys = {
   organisation: ['organisation'] as const,
   audit: (projectId: string) => ['projects', projectId, 'audit'] as const,
 };
+
+/** Inversions: a line's list, and one inversion with its finished section and residuals (never change once done). */
+export const inversionKeys = {
+  list: (lineId: string) => ['lines', lineId, 'inversions'] as const,
+  inversion: (inversionId: string) => ['inversions', inversionId] as const,
+  section: (inversionId: string) => ['inversions', inversionId, 'section'] as const,
+  residuals: (inversionId: string) => ['inversions', inversionId, 'residuals'] as const,
+};

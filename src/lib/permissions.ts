@@ -19,3 +19,9 @@ export const canCreateLine = (project: ProjectSummary): boolean =>
 /** Clients see projects, not survey data. */
 export const canSeeLines = (me: Me, project: ProjectSummary): boolean =>
   isAdmin(me) || (project.myRole !== null && project.myRole !== 'client');
+
+/** Geophysicists start and save inversions; leads and field technicians read them (issue 11). */
+export const canRunInversions = (role: ProjectRole | null | undefined): boolean => role === 'geophysicist';
+
+/** Cancelling works as for runs: geophysicists and leads (the server's policy table, inversion.cancel). */
+export const canCancelInversions = (role: ProjectRole | null | undefined): boolean => role === 'geophysicist' || role === 'lead';

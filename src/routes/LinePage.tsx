@@ -6,6 +6,7 @@ import type { ProjectRole } from '../api/types';
 import { ChecksTab } from '../components/line/checks/ChecksTab';
 import { ModelVersionsPanel } from '../components/line/models/ModelVersionsPanel';
 import { LineRunsPanel } from '../components/run/line/LineRunsPanel';
+import { LineInversionsPanel } from '../components/inversion/LineInversionsPanel';
 import { LineTabs, TabPanel, type TabDef } from '../components/line/LineTabs';
 import { PickSetsTab } from '../components/line/picksets/PickSetsTab';
 import { StationsTab } from '../components/line/stations/StationsTab';
@@ -13,15 +14,15 @@ import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
 import { formatDate, ROLE_LABELS } from '../lib/format';
 
-type TabKey = 'stations' | 'picks' | 'checks' | 'models' | 'runs';
-const TAB_KEYS: TabKey[] = ['stations', 'picks', 'checks', 'models', 'runs'];
+type TabKey = 'stations' | 'picks' | 'checks' | 'models' | 'runs' | 'inversions';
+const TAB_KEYS: TabKey[] = ['stations', 'picks', 'checks', 'models', 'runs', 'inversions'];
 
 /** Who may change field data on a line (the server's policy table decides; this only picks the view). */
 const FIELD_EDITORS: ProjectRole[] = ['geophysicist', 'field_tech'];
 
 /**
- * A survey line in five tabs: its stations, its pick sets, the quality checks of one pick set,
- * its velocity model versions, and its forward runs. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
+ * A survey line in six tabs: its stations, its pick sets, the quality checks of one pick set,
+ * its velocity model versions, its forward runs and its inversions. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
  * so a link or a reload brings back the same view.
  */
 export function LinePage() {
@@ -68,6 +69,7 @@ export function LinePage() {
     { key: 'checks', label: 'Checks' },
     { key: 'models', label: 'Models', badge: l.models.length },
     { key: 'runs', label: 'Runs', badge: l.runs.length },
+    { key: 'inversions', label: 'Inversions' },
   ];
 
   return (
@@ -118,6 +120,11 @@ export function LinePage() {
       {visited.has('runs') && (
         <TabPanel idPrefix={idPrefix} tabKey="runs" hidden={tab !== 'runs'}>
           <LineRunsPanel line={l} />
+        </TabPanel>
+      )}
+      {visited.has('inversions') && (
+        <TabPanel idPrefix={idPrefix} tabKey="inversions" hidden={tab !== 'inversions'}>
+          <LineInversionsPanel line={l} />
         </TabPanel>
       )}
     </>

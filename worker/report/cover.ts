@@ -1,11 +1,12 @@
 /** Page 1: who, where, what and in which state, with a pointer to the cautions. */
-import type { ReportContext } from './context';
+import type { PageFlow, ReportContext } from './context';
 import { labelValues } from './flow';
 import { FONT } from './fonts';
 import { drawText } from './glyph-runs';
 import { isoDate } from './format';
 import { sectionNumber, sectionTitle } from './outline';
 import { COLOUR, CONTENT, PAGE, SIZE } from './style';
+import type { ReportMeta } from './types';
 
 export const COVER_TITLE = 'Seismic refraction summary';
 
@@ -13,7 +14,26 @@ export const COVER_TITLE = 'Seismic refraction summary';
 const LOGO = { width: 120, height: 50 };
 
 export function drawCover(ctx: ReportContext): void {
-  const { doc, input } = ctx;
+  const { input } = ctx;
+  drawCoverPage(ctx, input, {
+    subtitle: `Forward travel-time model of line ${input.line.name}`,
+    cautions: `${sectionNumber('cautions')}, ${sectionTitle('cautions', input)}`,
+    provenance: `Produced with Timefield from run ${input.run.id} (${isoDate(input.run.createdAt)}), model "${input.model.name}" version ${input.model.version}, pick set ${input.run.pickSetFile} revision ${input.run.pickSetRevision}.`,
+  });
+}
+
+/** What differs between the covers of the report kinds. */
+export interface CoverText {
+  /** Under the title, e.g. "Forward travel-time model of line BH-2". */
+  subtitle: string;
+  /** "7, Limitations and cautions": the section the status box points to. */
+  cautions: string;
+  /** Small print at the foot: what the report was made from. */
+  provenance: string;
+}
+
+export function drawCoverPage(ctx: PageFlow, input: ReportMeta, text: CoverText): void {
+  const { doc } = ctx;
   const logoBox = input.consultancyLogo ? LOGO : null;
   const nameWidth = CONTENT.width - (logoBox ? logoBox.width + 16 : 0);
   if (logoBox) doc.image(input.consultancyLogo!, CONTENT.right - logoBox.width, CONTENT.top, { fit: [logoBox.width, logoBox.height], align: 'right' });
@@ -23,7 +43,7 @@ export function drawCover(ctx: ReportContext): void {
 
   ctx.y = 190;
   doc.font(FONT.semibold).fontSize(SIZE.title).fillColor(COLOUR.ink).text(COVER_TITLE, CONTENT.left, ctx.y, { width: CONTENT.width });
-  drawText(doc.fontSize(SIZE.subtitle).fillColor(COLOUR.muted), `Forward travel-time model of line ${input.line.name}`, FONT.regular, CONTENT.left, doc.y + 4, { width: CONTENT.width });
+  drawText(doc.fontSize(SIZE.subtitle).fillColor(COLOUR.muted), text.subtitle, FONT.regular, CONTENT.left, doc.y + 4, { width: CONTENT.width });
   drawText(doc.fontSize(SIZE.subtitle + 2).fillColor(COLOUR.ink), input.project.name, FONT.semibold, CONTENT.left, doc.y + 26, { width: CONTENT.width });
   ctx.y = doc.y + 22;
 
@@ -40,7 +60,7 @@ export function drawCover(ctx: ReportContext): void {
   ], { labelWidth: 120, size: SIZE.body + 1 });
 
   // A plain box on the status: until a lead approves it the report is a working document.
-  const cautions = `${sectionNumber('cautions')}, ${sectionTitle('cautions', input)}`;
+  const { cautions } = text;
   const approved = input.status === 'approved' || input.status === 'shared';
   const note = approved
     ? `Approved for issue by ${input.reviewedBy ?? 'the project lead'}. Read the results together with section ${cautions}.`
@@ -52,8 +72,5 @@ export function drawCover(ctx: ReportContext): void {
   drawText(doc.fillColor(COLOUR.ink), note, FONT.regular, CONTENT.left + 12, boxTop + 9, { width: CONTENT.width - 24 });
   ctx.y = boxTop + h + 10;
 
-  drawText(doc.fontSize(SIZE.small).fillColor(COLOUR.muted),
-    `Produced with Timefield from run ${input.run.id} (${isoDate(input.run.createdAt)}), model "${input.model.name}" version ${input.model.version}, pick set ${input.run.pickSetFile} revision ${input.run.pickSetRevision}.`,
-    FONT.regular, CONTENT.left, PAGE.height - 120, { width: CONTENT.width },
-  );
+  drawText(doc.fontSize(SIZE.small).fillColor(COLOUR.muted), text.provenance, FONT.regular, CONTENT.left, PAGE.height - 120, { width: CONTENT.width });
 }

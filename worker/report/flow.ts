@@ -1,32 +1,31 @@
 /** Flowing text blocks: section headings, paragraphs, bullet lists, captions and label–value lists. */
-import type { ReportContext } from './context';
+import type { PageFlow } from './context';
 import { FONT } from './fonts';
 import { drawText } from './glyph-runs';
-import { sectionHeadingText, type SectionKey } from './outline';
 import { COLOUR, CONTENT, GAP, SIZE } from './style';
 
 /** "2  Velocity section" at the top of a new page (or below the cursor when `newPage` is false). */
-export function sectionHeading(ctx: ReportContext, key: SectionKey, o: { newPage?: boolean } = {}): void {
+export function sectionHeading<K extends string>(ctx: PageFlow<K>, key: K, o: { newPage?: boolean } = {}): void {
   if (o.newPage ?? true) ctx.newPage();
   else {
     ctx.y += GAP.block;
     ctx.ensureSpace(120);
   }
   const { doc } = ctx;
-  drawText(doc.fontSize(SIZE.heading).fillColor(COLOUR.accent), sectionHeadingText(key, ctx.input), FONT.semibold, CONTENT.left, ctx.y, { width: CONTENT.width });
+  drawText(doc.fontSize(SIZE.heading).fillColor(COLOUR.accent), ctx.headingText(key), FONT.semibold, CONTENT.left, ctx.y, { width: CONTENT.width });
   ctx.y = doc.y + 3;
   doc.save().lineWidth(0.6).strokeColor(COLOUR.rule).moveTo(CONTENT.left, ctx.y).lineTo(CONTENT.right, ctx.y).stroke().restore();
   ctx.y += GAP.afterHeading + 2;
 }
 
-export function subheading(ctx: ReportContext, title: string): void {
+export function subheading(ctx: PageFlow, title: string): void {
   ctx.ensureSpace(60);
   const { doc } = ctx;
   drawText(doc.fontSize(SIZE.subheading).fillColor(COLOUR.ink), title, FONT.semibold, CONTENT.left, ctx.y, { width: CONTENT.width });
   ctx.y = doc.y + 3;
 }
 
-export function paragraph(ctx: ReportContext, text: string, o: { size?: number; colour?: string; italic?: boolean; gap?: number } = {}): void {
+export function paragraph(ctx: PageFlow, text: string, o: { size?: number; colour?: string; italic?: boolean; gap?: number } = {}): void {
   const { doc } = ctx;
   const size = o.size ?? SIZE.body;
   const font = o.italic ? FONT.italic : FONT.regular;
@@ -37,14 +36,14 @@ export function paragraph(ctx: ReportContext, text: string, o: { size?: number; 
 }
 
 /** Height the bullet list will take (lead-ins measured in the regular weight, a little narrower than drawn). */
-export function bulletsHeight(ctx: ReportContext, items: { lead?: string; text: string }[]): number {
+export function bulletsHeight(ctx: PageFlow, items: { lead?: string; text: string }[]): number {
   const { doc } = ctx;
   doc.font(FONT.regular).fontSize(SIZE.body);
   return items.reduce((h, item) => h + doc.heightOfString(`${item.lead ?? ''} ${item.text}`, { width: CONTENT.width - 12, lineGap: 1.5 }) + 4, 0) + GAP.paragraph;
 }
 
 /** Bullet points with a hanging indent; each item may start with a short semibold lead-in. */
-export function bullets(ctx: ReportContext, items: { lead?: string; text: string }[]): void {
+export function bullets(ctx: PageFlow, items: { lead?: string; text: string }[]): void {
   const { doc } = ctx;
   const indent = 12;
   for (const item of items) {
@@ -66,7 +65,7 @@ export function bullets(ctx: ReportContext, items: { lead?: string; text: string
 }
 
 /** "Figure 2. …" or "Table 1. …" below a figure or above a table; returns its number. */
-export function caption(ctx: ReportContext, kind: 'Figure' | 'Table', text: string, n = kind === 'Figure' ? ctx.nextFigure() : ctx.nextTable()): number {
+export function caption(ctx: PageFlow, kind: 'Figure' | 'Table', text: string, n = kind === 'Figure' ? ctx.nextFigure() : ctx.nextTable()): number {
   const { doc } = ctx;
   doc.font(FONT.regular).fontSize(SIZE.caption);
   const h = doc.heightOfString(`${kind} ${n}. ${text}`, { width: CONTENT.width, lineGap: 1 });
@@ -78,13 +77,13 @@ export function caption(ctx: ReportContext, kind: 'Figure' | 'Table', text: stri
 }
 
 /** Height a caption will take, to keep a figure and its caption on one page. */
-export function captionHeight(ctx: ReportContext, text: string): number {
+export function captionHeight(ctx: PageFlow, text: string): number {
   ctx.doc.font(FONT.regular).fontSize(SIZE.caption);
   return ctx.doc.heightOfString(`Figure 00. ${text}`, { width: CONTENT.width, lineGap: 1 }) + GAP.block;
 }
 
 /** Two columns: labels in muted type, values in ink. */
-export function labelValues(ctx: ReportContext, rows: [string, string][], o: { labelWidth?: number; size?: number; left?: number; width?: number } = {}): void {
+export function labelValues(ctx: PageFlow, rows: [string, string][], o: { labelWidth?: number; size?: number; left?: number; width?: number } = {}): void {
   const { doc } = ctx;
   const size = o.size ?? SIZE.body;
   const left = o.left ?? CONTENT.left;

@@ -2,11 +2,11 @@
  * The page frame, drawn once every page exists: a footer rule, the project, line and report status
  * on the left and "page N of M" on the right, and the consultancy's name in the header from page 2.
  */
-import type { ReportInput } from './types';
+import type { ReportMeta } from './types';
 import { label, textWidth } from './text';
 import { COLOUR, CONTENT, PAGE, SIZE } from './style';
 
-export function footerText(input: ReportInput): string {
+export function footerText(input: ReportMeta): string {
   return `${input.project.name} · line ${input.line.name} · report ${input.status}`;
 }
 
@@ -19,7 +19,7 @@ function fitText(doc: PDFKit.PDFDocument, text: string, width: number, size: num
   return `${head.trimEnd()}…${tail}`;
 }
 
-export function drawPageFrames(doc: PDFKit.PDFDocument, input: ReportInput): void {
+export function drawPageFrames(doc: PDFKit.PDFDocument, input: ReportMeta): void {
   const range = doc.bufferedPageRange();
   const total = range.count;
   const footerY = PAGE.height - 44;

@@ -10,7 +10,7 @@ export function lineRange(model: RasterModel): Range {
 }
 
 /** Typical station spacing (median gap between neighbouring stations), m; null with < 2 stations. */
-export function stationSpacing(stations: ReportInput['stations']): number | null {
+export function stationSpacing(stations: readonly { x: number }[]): number | null {
   const xs = stations.map((s) => s.x).sort((a, b) => a - b);
   const gaps = xs.slice(1).map((x, i) => x - xs[i]).filter((g) => g > 0).sort((a, b) => a - b);
   if (gaps.length === 0) return null;

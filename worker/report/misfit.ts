@@ -1,19 +1,26 @@
 /** Section "Misfit": run statistics, a table by shot and the shot × receiver residual heatmap. */
 import { colourAt, hex, RESIDUAL_STOPS, type Rgb } from './colour';
 import { horizontalColourBar } from './colour-bar';
-import type { ReportContext } from './context';
+import type { PageFlow, ReportContext } from './context';
 import { caption, captionHeight, labelValues, paragraph, sectionHeading } from './flow';
 import { count, fixed, ms, plain } from './format';
 import { encodeRgbPng } from './png';
 import { COLOUR, CONTENT, SIZE } from './style';
 import { drawTable } from './table';
 import { label, textWidth } from './text';
+import type { ReportResidual, RunStatsJson } from './types';
 import { niceStep } from './ticks';
 
 export function drawMisfit(ctx: ReportContext): void {
-  const { input } = ctx;
-  const s = input.run.stats;
   sectionHeading(ctx, 'misfit');
+  drawMisfitBody(ctx, ctx.input.run.stats, ctx.input.residuals, ctx.input.shots);
+}
+
+/** The statistics the misfit section prints. */
+export type MisfitStats = Pick<RunStatsJson, 'rms_ms' | 'chi2' | 'max_abs_residual_ms' | 'mean_residual_ms' | 'picks' | 'excluded' | 'shots' | 'by_shot'>;
+
+/** Everything under the heading: statistics, the table by shot and the heatmap (also used by the inversion report). */
+export function drawMisfitBody(ctx: PageFlow, s: MisfitStats, residuals: readonly ReportResidual[], shots: readonly { shotId: string }[]): void {
   paragraph(
     ctx,
     'Residual r = observed − computed for every pick. RMS misfit = √(Σr²/N); χ² per datum = Σ(r/σ)²/N with σ the pick uncertainty, about 1 when the model explains the picks to within their stated uncertainty, well above 1 when it does not. Excluded picks are shown but do not count.',
@@ -44,20 +51,20 @@ export function drawMisfit(ctx: ReportContext): void {
     ],
     rows: s.by_shot.map((b) => [b.shotId, String(b.count), ms(b.rms_ms), fixed(b.chi2, 2), ms(b.max_abs_residual_ms), ms(b.mean_residual_ms)]),
   });
-  drawHeatmap(ctx);
+  drawHeatmap(ctx, residuals, shots);
 }
 
-function drawHeatmap(ctx: ReportContext): void {
-  const { doc, input } = ctx;
-  const shots = [...new Set([...input.shots.map((s) => s.shotId), ...input.residuals.map((r) => r.shotId)])];
-  const xs = [...new Set(input.residuals.map((r) => r.receiverX))].sort((a, b) => a - b);
+function drawHeatmap(ctx: PageFlow, residuals: readonly ReportResidual[], shotList: readonly { shotId: string }[]): void {
+  const { doc } = ctx;
+  const shots = [...new Set([...shotList.map((s) => s.shotId), ...residuals.map((r) => r.shotId)])];
+  const xs = [...new Set(residuals.map((r) => r.receiverX))].sort((a, b) => a - b);
   if (shots.length === 0 || xs.length === 0) {
     paragraph(ctx, 'No residuals to show.');
     return;
   }
   const cell = new Map<string, { value: number; excluded: boolean }>();
   let maxAbs = 0;
-  for (const r of input.residuals) {
+  for (const r of residuals) {
     cell.set(`${r.shotId}\u0000${r.receiverX}`, { value: r.residualMs, excluded: r.excluded });
     if (!r.excluded) maxAbs = Math.max(maxAbs, Math.abs(r.residualMs));
   }

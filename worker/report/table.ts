@@ -3,7 +3,7 @@
  * tables continue on the next page under a repeated header; narrow tables with many rows can be
  * laid out in side-by-side blocks to save paper.
  */
-import type { ReportContext } from './context';
+import type { PageFlow } from './context';
 import { FONT } from './fonts';
 import { label, textWidth } from './text';
 import { COLOUR, CONTENT, SIZE } from './style';
@@ -27,7 +27,7 @@ export interface TableOptions {
 
 const PAD = 4;
 
-export function drawTable(ctx: ReportContext, o: TableOptions): void {
+export function drawTable(ctx: PageFlow, o: TableOptions): void {
   const size = o.size ?? SIZE.table;
   const rowH = size * 1.55;
   const headH = size * 1.9;

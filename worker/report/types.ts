@@ -1,11 +1,8 @@
 import type { Grid } from '../../shared/grid';
 import type { ModelFile } from '../../shared/model';
 
-/**
- * Everything the PDF summary shows, gathered from the database by worker/processors/report.ts.
- * Pure data: the renderer does no I/O. SI units (m, s, m/s) unless a name says ms.
- */
-export interface ReportInput {
+/** Who, where, when and in which state: the part every report (forward run or inversion) shares. */
+export interface ReportMeta {
   reportId: string;
   /** Shown on the cover, e.g. "draft", "submitted", "approved", "shared". */
   status: string;
@@ -20,6 +17,24 @@ export interface ReportInput {
   preparedBy: string;
   /** Name of the lead who approved it; null before approval. */
   reviewedBy: string | null;
+}
+
+/** One pick's residual as a report prints it (ms). */
+export interface ReportResidual {
+  shotId: string;
+  receiverX: number;
+  observedMs: number;
+  computedMs: number;
+  residualMs: number;
+  sigmaMs: number;
+  excluded: boolean;
+}
+
+/**
+ * Everything the PDF summary of a forward run shows, gathered from the database by worker/processors/report.ts.
+ * Pure data: the renderer does no I/O. SI units (m, s, m/s) unless a name says ms.
+ */
+export interface ReportInput extends ReportMeta {
   /** Free text from the geophysicist: acquisition notes for the survey section. */
   acquisitionNotes: string;
   stations: { station: number; x: number; z: number }[];
@@ -34,7 +49,7 @@ export interface ReportInput {
     /** As stored on the run: rms_ms, chi2, max_abs_residual_ms, mean_residual_ms, shots, picks, excluded, by_shot[], by_receiver[]. */
     stats: RunStatsJson;
   };
-  residuals: { shotId: string; receiverX: number; observedMs: number; computedMs: number; residualMs: number; sigmaMs: number; excluded: boolean }[];
+  residuals: ReportResidual[];
   /** The shot chosen for the section figure: its travel-time field (s, air NaN) and rays. */
   section: { shotId: string; grid: Grid; source: { x: number; z: number }; times: Float32Array; rays: { pickIndex: number; points: number[] }[] };
   /** Velocity (m/s) of the iso-velocity surface whose depth is tabulated (e.g. top of rock). */

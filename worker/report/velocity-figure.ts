@@ -3,7 +3,7 @@
  * the ground), a velocity colour bar, and as vector lines the chosen shot's wavefronts with time
  * labels, its rays, the ground surface and the layer interfaces; stations and the shot marked.
  */
-import { nodeZ } from '../../shared/grid';
+import { nodeX, nodeZ, type Grid } from '../../shared/grid';
 import { sToMs } from '../../shared/units';
 import { colourAt, VELOCITY_STOPS } from './colour';
 import { verticalColourBar } from './colour-bar';
@@ -33,13 +33,16 @@ export interface SectionLayout {
 
 /** Plot box and vertical exaggeration for a section `width` pt wide, aiming at `target` pt tall. */
 export function sectionLayout(ctx: ReportContext, left: number, top: number, width: number, target: number, maxHeight: number): SectionLayout {
-  const { model, input } = ctx;
-  const xr = lineRange(model);
-  const zBottom = nodeZ(model.grid, model.grid.nz - 1);
-  const ground = groundLine(model, input.model.file);
+  return sectionLayoutFor(ctx.model.grid, groundLine(ctx.model, ctx.input.model.file), left, top, width, target, maxHeight);
+}
+
+/** The same for any grid and ground line (x, z pairs): the inversion report's sections share it. */
+export function sectionLayoutFor(grid: Grid, ground: readonly number[], left: number, top: number, width: number, target: number, maxHeight: number): SectionLayout {
+  const xr = { min: grid.x0, max: nodeX(grid, grid.nx - 1) };
+  const zBottom = nodeZ(grid, grid.nz - 1);
   let maxGround = -Infinity;
   for (let i = 1; i < ground.length; i += 2) maxGround = Math.max(maxGround, ground[i]);
-  const zTop = Math.min(model.grid.z0, maxGround + 0.12 * (maxGround - zBottom));
+  const zTop = Math.min(grid.z0, maxGround + 0.12 * (maxGround - zBottom));
   const natural = (width * (zTop - zBottom)) / (xr.max - xr.min); // pt tall at 1:1
   let exaggeration = EXAGGERATIONS.find((e) => natural * e >= target) ?? EXAGGERATIONS[EXAGGERATIONS.length - 1];
   while (exaggeration > 1 && natural * exaggeration > maxHeight) exaggeration = EXAGGERATIONS[EXAGGERATIONS.indexOf(exaggeration) - 1];

@@ -1,4 +1,4 @@
-import { useRef, type KeyboardEvent, type ReactNode } from 'react';
+import { useEffect, useRef, type KeyboardEvent, type ReactNode } from 'react';
 
 export interface TabDef<K extends string> {
   key: K;
@@ -13,6 +13,18 @@ export interface TabDef<K extends string> {
  */
 export function LineTabs<K extends string>({ tabs, selected, onSelect, idPrefix }: { tabs: TabDef<K>[]; selected: K; onSelect: (key: K) => void; idPrefix: string }) {
   const refs = useRef<(HTMLButtonElement | null)[]>([]);
+  const list = useRef<HTMLDivElement>(null);
+  const selectedIndex = tabs.findIndex((t) => t.key === selected);
+
+  // On a narrow screen the row scrolls sideways: bring the selected tab into sight (a link may open
+  // the last tab), moving only the row, never the page.
+  useEffect(() => {
+    const row = list.current;
+    const tab = refs.current[selectedIndex];
+    if (!row || !tab) return;
+    const left = tab.offsetLeft - row.offsetLeft;
+    if (left < row.scrollLeft || left + tab.offsetWidth > row.scrollLeft + row.clientWidth) row.scrollLeft = Math.max(0, left - 16);
+  }, [selectedIndex]);
 
   function onKeyDown(e: KeyboardEvent, i: number) {
     const last = tabs.length - 1;
@@ -24,7 +36,7 @@ export function LineTabs<K extends string>({ tabs, selected, onSelect, idPrefix 
   }
 
   return (
-    <div role="tablist" aria-label="Line data" className="mb-6 flex gap-1 overflow-x-auto border-b border-stone-300">
+    <div ref={list} role="tablist" aria-label="Line data" className="mb-6 flex gap-1 overflow-x-auto border-b border-stone-300">
       {tabs.map((t, i) => {
         const active = t.key === selected;
         return (

@@ -3,7 +3,7 @@
  * images and page rendering. Tests look at the PDF the way a reader's tools do, not at our code.
  */
 import { execFileSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 
 const run = (cmd: string, args: string[]): string => execFileSync(cmd, args, { encoding: 'utf8', timeout: 60_000, maxBuffer: 64 * 1024 * 1024 });
 
@@ -86,4 +86,12 @@ export function wordBoxes(pdf: string, page: number): { text: string; xMin: numb
   return [...html.matchAll(/<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g)].map((m) => ({
     xMin: Number(m[1]), yMin: Number(m[2]), xMax: Number(m[3]), yMax: Number(m[4]), text: decode(m[5]),
   }));
+}
+
+/** The images of one page as pdfimages writes them (PPM for the report's RGB images), in page order. */
+export function extractImages(pdf: string, page: number, outPrefix: string): string[] {
+  run('pdfimages', ['-f', String(page), '-l', String(page), pdf, outPrefix]);
+  const dir = outPrefix.slice(0, outPrefix.lastIndexOf('/'));
+  const base = outPrefix.slice(outPrefix.lastIndexOf('/') + 1);
+  return readdirSync(dir).filter((f) => f.startsWith(`${base}-`) && f.endsWith('.ppm')).sort().map((f) => `${dir}/${f}`);
 }

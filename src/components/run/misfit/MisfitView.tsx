@@ -11,7 +11,8 @@ interface MisfitViewProps {
   rows: ResidualRow[];
   selected: ResidualRow | null;
   onSelect: (row: ResidualRow) => void;
-  onShowRay: (row: ResidualRow) => void;
+  /** Absent where no rays are stored (inversions): the pick's details then offer no ray. */
+  onShowRay?: (row: ResidualRow) => void;
   onShowInTable: (row: ResidualRow) => void;
 }
 
@@ -40,7 +41,7 @@ export function MisfitView({ rows, selected, onSelect, onShowRay, onShowInTable 
       </div>
       <div>
         {selected ? (
-          <PickDetails row={selected} onShowRay={() => onShowRay(selected)} onShowInTable={() => onShowInTable(selected)} />
+          <PickDetails row={selected} onShowRay={onShowRay && (() => onShowRay(selected))} onShowInTable={() => onShowInTable(selected)} />
         ) : (
           <p className="rounded-lg border border-dashed border-stone-300 bg-white/60 p-4 text-stone-600">
             Choose a cell (click it, or Tab to the grid and use the arrow keys and Enter) to see that pick.

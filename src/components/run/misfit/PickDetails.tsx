@@ -7,8 +7,8 @@ const FLAG_WORDS: Record<string, string> = {
   beyond_3_sigma: 'residual beyond 3σ: worth a second look at the trace',
 };
 
-/** Everything about one pick, and where to look at it next. */
-export function PickDetails({ row, onShowRay, onShowInTable }: { row: ResidualRow; onShowRay: () => void; onShowInTable: () => void }) {
+/** Everything about one pick, and where to look at it next (its ray only where rays are stored: forward runs). */
+export function PickDetails({ row, onShowRay, onShowInTable }: { row: ResidualRow; onShowRay?: () => void; onShowInTable: () => void }) {
   return (
     <div data-testid="pick-details" role="region" aria-label={`Pick of shot ${row.shotId} at ${metres(row.receiverX)}`} className="rounded-lg border border-stone-300 bg-white p-4">
       <h3 className="font-semibold text-stone-900">
@@ -41,9 +41,11 @@ export function PickDetails({ row, onShowRay, onShowInTable }: { row: ResidualRo
         </ul>
       )}
       <div className="mt-3 flex flex-wrap gap-2">
-        <Button variant="secondary" size="sm" onClick={onShowRay}>
-          Show its ray in the section
-        </Button>
+        {onShowRay && (
+          <Button variant="secondary" size="sm" onClick={onShowRay}>
+            Show its ray in the section
+          </Button>
+        )}
         <Button variant="secondary" size="sm" onClick={onShowInTable}>
           Show the shot in the table
         </Button>

@@ -1,0 +1,88 @@
+/**
+ * Section "Depth to the v* surface" of an inversion: the depth below ground where the inverted
+ * velocity first reaches v* at every station (shared/model/iso-depth, as for a forward model),
+ * kept only where the rays say something: a crossing below the depth of investigation, or at a
+ * node crossed by less ray than the coverage threshold, is "not resolved".
+ */
+import { nodeX } from '../../../shared/grid';
+import { isoVelocityDepth, type IsoDepth } from '../../../shared/model/iso-depth';
+import { caption, paragraph, sectionHeading } from '../flow';
+import { fixed, NONE, plain } from '../format';
+import { drawTable } from '../table';
+import type { InversionContext } from './context';
+
+export const BELOW_DOI = 'not resolved: below the DOI';
+export const UNCOVERED = 'not resolved: too little ray coverage';
+export const NO_RAYS = 'not resolved: no ray reaches here';
+export const NOT_REACHED_ABOVE_DOI = 'not reached above the DOI';
+export const OUTSIDE_GRID = 'outside the section';
+
+export type IsoDepthStatus = 'resolved' | typeof BELOW_DOI | typeof UNCOVERED | typeof NO_RAYS | typeof NOT_REACHED_ABOVE_DOI | typeof OUTSIDE_GRID;
+
+export interface StationIsoDepth {
+  station: number | string;
+  x: number;
+  result: IsoDepth | null;
+  status: IsoDepthStatus;
+}
+
+/** Depth of the first v* crossing at x and whether the inversion resolves it there. */
+export function inversionIsoDepth(ctx: InversionContext, velocity: number, x: number): { result: IsoDepth | null; status: IsoDepthStatus } {
+  const { grid } = ctx;
+  if (!(x >= grid.x0 && x <= nodeX(grid, grid.nx - 1))) return { result: null, status: OUTSIDE_GRID };
+  const result = isoVelocityDepth(ctx.raster, velocity, x);
+  const doi = ctx.doiAt(x);
+  if (!Number.isFinite(doi)) return { result, status: NO_RAYS };
+  if (result.elevation === null) return { result, status: NOT_REACHED_ABOVE_DOI };
+  // A crossing within a thousandth of a node row of the DOI counts as on it.
+  if (result.elevation < doi - 1e-3 * grid.dz) return { result, status: BELOW_DOI };
+  // The node nearest to the crossing must be covered (the surface node when it lies in the air above the first row).
+  const ix = Math.round((x - grid.x0) / grid.dx);
+  let iz = Math.min(grid.nz - 1, Math.max(0, Math.round((grid.z0 - result.elevation) / grid.dz)));
+  while (iz < grid.nz - 1 && !ctx.active[iz * grid.nx + ix]) iz++;
+  if (!ctx.covered(iz * grid.nx + ix)) return { result, status: UNCOVERED };
+  return { result, status: 'resolved' };
+}
+
+export function stationIsoDepths(ctx: InversionContext): StationIsoDepth[] {
+  return [...ctx.input.stations].sort((a, b) => a.x - b.x).map((s) => ({ station: s.station, x: s.x, ...inversionIsoDepth(ctx, ctx.input.isoVelocity, s.x) }));
+}
+
+export function drawInversionIsoDepth(ctx: InversionContext): void {
+  const { input } = ctx;
+  sectionHeading(ctx, 'isoDepth');
+  const v = plain(input.isoVelocity, 0);
+  const rows = stationIsoDepths(ctx);
+  const resolved = rows.filter((r) => r.status === 'resolved');
+  const depths = resolved.map((r) => r.result!.depth!);
+  paragraph(
+    ctx,
+    `Depth below the ground surface at which the inverted velocity first reaches ${v} m/s, a velocity chosen by the geophysicist to mark a boundary of engineering interest (for example the top of rock). ` +
+      `It is read from the final model between node rows ${plain(ctx.grid.dz, 3)} m apart. Tomography smooths a sharp contact into a gradient, so this depth marks where the gradient passes ${v} m/s, not a contact; it is given only where the inversion resolves it: ` +
+      `above the depth of investigation and at a node crossed by at least ${plain(ctx.threshold, 2)} m of ray.`,
+  );
+  paragraph(
+    ctx,
+    resolved.length
+      ? `At ${resolved.length} of ${rows.length} stations the ${v} m/s surface lies ${fixed(Math.min(...depths), 1)} m to ${fixed(Math.max(...depths), 1)} m below ground; at the others it is not resolved or not reached.`
+      : `The ${v} m/s surface is not resolved at any station.`,
+  );
+  ctx.ensureSpace(60);
+  const table = caption(ctx, 'Table', `Depth to the ${v} m/s surface at the stations: ground elevation, depth below ground and elevation of the surface (m), or why there is none.`);
+  ctx.y -= 8;
+  drawTable(ctx, {
+    continued: `Table ${table} (continued)`,
+    columns: [
+      { title: 'Station', width: 55 },
+      { title: 'x (m)', width: 55, align: 'right' },
+      { title: 'Ground elevation (m)', width: 95, align: 'right' },
+      { title: 'Depth below ground (m)', width: 170, align: 'right' },
+      { title: 'Elevation of surface (m)', width: 104, align: 'right' },
+    ],
+    rows: rows.map((r) => {
+      const head = [String(r.station), fixed(r.x, 2), r.result ? fixed(r.result.groundZ, 2) : NONE];
+      if (r.status !== 'resolved') return [...head, r.status, NONE];
+      return [...head, fixed(r.result!.depth, 1), fixed(r.result!.elevation, 1)];
+    }),
+  });
+}

@@ -1,0 +1,27 @@
+/** The inversion report's numbered sections, in order; the checkerboard test only when it was run. */
+import { plain } from '../format';
+import type { InversionReportInput } from './types';
+
+export type InversionSectionKey = 'section' | 'isoDepth' | 'convergence' | 'misfit' | 'checkerboard' | 'method' | 'cautions';
+
+export function inversionSections(input: InversionReportInput): InversionSectionKey[] {
+  const all: InversionSectionKey[] = ['section', 'isoDepth', 'convergence', 'misfit', 'checkerboard', 'method', 'cautions'];
+  return all.filter((k) => k !== 'checkerboard' || input.inversion.checkerboard);
+}
+
+export function inversionSectionTitle(key: InversionSectionKey, input: InversionReportInput): string {
+  switch (key) {
+    case 'section': return 'Velocity section from the inversion';
+    case 'isoDepth': return `Depth to the ${plain(input.isoVelocity, 0)} m/s surface`;
+    case 'convergence': return 'Convergence';
+    case 'misfit': return 'Misfit of the final model';
+    case 'checkerboard': return 'Resolution: checkerboard test';
+    case 'method': return 'Method statement and settings';
+    case 'cautions': return 'Limitations and cautions';
+  }
+}
+
+/** "7  Limitations and cautions", as the heading prints it. */
+export function inversionHeadingText(key: InversionSectionKey, input: InversionReportInput): string {
+  return `${inversionSections(input).indexOf(key) + 1}  ${inversionSectionTitle(key, input)}`;
+}
