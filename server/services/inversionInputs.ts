@@ -1,12 +1,12 @@
 /**
  * The picks and model an inversion works on: the grid and ground surface it records, the picks of
  * its pick-set revision placed on them, and the rules that must hold before anything is queued
- * (shared/inversion/input-rules.ts, grid within MAX_GRID_NODES, every source and receiver inside
- * the grid and in the ground). Used by the API before queuing and by the worker before inverting.
+ * (enough picks from enough shots for the grid, shared/inversion/problem.ts; grid within
+ * MAX_GRID_NODES; every source and receiver inside the grid and in the ground). Used by the API
+ * before queuing and by the worker before inverting.
  */
 import type { Grid } from '../../shared/grid';
-import type { InversionShot } from '../../shared/inversion/types';
-import { checkInversionPicks } from '../../shared/inversion/input-rules';
+import { inversionDataProblems } from '../../shared/inversion/problem';
 import { MAX_GRID_NODES, MAX_SHOTS_PER_RUN } from '../../shared/limits';
 import { MODEL_FORMAT } from '../../shared/schemas/model';
 import { rasteriseModel, type ModelFile, type RasterModel } from '../../shared/model';
@@ -42,16 +42,20 @@ export interface PlacedPicks {
 
 /**
  * The revision's picks on the raster, or the API error for the first rule they break. Rules on
- * counts name `pickSetRevision` when exclusions took the picks away, else `pickSetId`.
+ * counts name `pickSetRevision` when exclusions took picks away, else `pickSetId`; the rule on picks
+ * per grid node names `gridPath`, the body field that chose the grid.
  */
-export function placeInversionPicks(raster: RasterModel, picks: readonly StoredPick[], excludedIndices: readonly number[]): PlacedPicks {
+export function placeInversionPicks(raster: RasterModel, picks: readonly StoredPick[], excludedIndices: readonly number[], gridPath = 'start'): PlacedPicks {
   const excluded = new Set(excludedIndices);
   const used = picks.filter((p) => !excluded.has(p.index));
-  const rule = checkInversionPicks(used.map((p) => p.shotId), picks.length - used.length);
-  if (rule) {
-    const path = picks.length > used.length ? 'pickSetRevision' : 'pickSetId';
-    throw new HttpError(422, rule.code, `${path}: ${rule.message}`, [{ path, message: rule.message }]);
-  }
+  const byShot = groupPicksByShot(used).map((s) => ({ shotId: s.shotId, times: s.picks.map((p) => p.time) }));
+  const dropped = picks.length - used.length;
+  const countPath = dropped ? 'pickSetRevision' : 'pickSetId';
+  const counts = inversionDataProblems(byShot, 0).map((message) => ({ path: countPath, message: dropped ? `${message}; this revision excludes ${dropped}` : message }));
+  let ground = 0;
+  for (let i = 0; i < raster.active.length; i++) ground += raster.active[i];
+  const issues = counts.length ? counts : inversionDataProblems(byShot, ground).map((message) => ({ path: gridPath, message }));
+  if (issues.length) throw new HttpError(422, 'not_invertible', `${issues[0].path}: ${issues[0].message}.`, issues);
   const placed = placeShots(raster, groupPicksByShot(used));
   if (!placed.ok) {
     const first = placed.errors[0];
@@ -68,15 +72,4 @@ export function placeInversionPicks(raster: RasterModel, picks: readonly StoredP
   const rest = picks.filter((p) => excluded.has(p.index));
   const restPlaced = rest.length ? placeShots(raster, groupPicksByShot(rest)) : { ok: true as const, shots: [] };
   return { shots: placed.shots, excludedShots: restPlaced.ok ? restPlaced.shots : [], picks: used.length };
-}
-
-/** Placed shots as the engine takes them (SI: s). */
-export function toInversionShots(shots: readonly PlacedShot[]): InversionShot[] {
-  return shots.map((s) => ({
-    shotId: s.shotId,
-    source: s.source,
-    receivers: s.receivers,
-    times: Float64Array.from(s.picks, (p) => p.time),
-    sigmas: Float64Array.from(s.picks, (p) => p.sigma),
-  }));
 }

@@ -29,7 +29,7 @@ export async function startInversion(actorId: string, projectId: string, body: S
   const excluded = revision.exclusions.map((e) => e.index);
 
   const plan = body.start.kind === 'model' ? await modelStart(body.start.modelId, projectId, lineId) : await gradientStart(lineId, picks, excluded, body.start.spacing);
-  const placed = placeInversionPicks(plan.raster, picks, excluded);
+  const placed = placeInversionPicks(plan.raster, picks, excluded, body.start.kind === 'model' ? 'start.modelId' : 'start.spacing');
 
   const inversion = await dataSource.transaction(async (em) => {
     const saved = await em.save(

@@ -74,20 +74,20 @@ describe('starting an inversion', () => {
 
     cases.push({ what: 'bounds reversed', body: { pickSetId: world.pickSetA, start: { kind: 'gradient' }, settings: { vMin: 3000, vMax: 2000 } }, status: 400, error: 'validation_failed', path: 'settings.vMax', message: /greater than vMin/ });
 
-    // Too few picks: 8 picks from two shots (the rule: at least 10 picks, shared/inversion/input-rules.ts).
+    // Too few picks: 8 picks from two shots (the rule: at least 10 picks, shared/inversion/problem.ts).
     const few = await picksOf('few.picks.csv', [...[0, 6, 12, 18].map((x) => `F,0,,${x},,${(x / 0.6).toFixed(3)},0.5`), ...[0, 6, 12, 18].map((x) => `R,24,,${x},,${((24 - x) / 0.6).toFixed(3)},0.5`)]);
-    cases.push({ what: 'too few picks', body: { pickSetId: few, start: { kind: 'gradient' } }, status: 422, error: 'too_few_picks', path: 'pickSetId', message: /at least 10 picks/ });
+    cases.push({ what: 'too few picks', body: { pickSetId: few, start: { kind: 'gradient' } }, status: 422, error: 'not_invertible', path: 'pickSetId', message: /at least 10 picks \(there are 8\)/ });
 
     // Every pick from one shot: no crossing rays.
     const oneShot = await picksOf('one-shot.picks.csv', Array.from({ length: 12 }, (_, i) => `F,0,,${2 * (i + 1)},,${((2 * (i + 1)) / 0.6).toFixed(3)},0.5`));
-    cases.push({ what: 'one shot', body: { pickSetId: oneShot, start: { kind: 'gradient' } }, status: 422, error: 'one_shot', path: 'pickSetId', message: /one shot \(F\)/ });
+    cases.push({ what: 'one shot', body: { pickSetId: oneShot, start: { kind: 'gradient' } }, status: 422, error: 'not_invertible', path: 'pickSetId', message: /all picks belong to shot F/ });
 
     // A revision that excludes every pick.
     const excludedAll = await picksOf('excluded.picks.csv', WORLD_PICKS.split('\n').slice(1));
     const revision = await geo.post(`/api/picksets/${excludedAll}/revisions`).set('X-CSRF-Token', geo.csrf)
       .send({ exclusions: Array.from({ length: 10 }, (_, index) => ({ index, reason: 'noisy' })) });
     expect(revision.status).toBe(201);
-    cases.push({ what: 'all excluded', body: { pickSetId: excludedAll, start: { kind: 'gradient' } }, status: 422, error: 'too_few_picks', path: 'pickSetRevision', message: /every pick is excluded/ });
+    cases.push({ what: 'all excluded', body: { pickSetId: excludedAll, start: { kind: 'gradient' } }, status: 422, error: 'not_invertible', path: 'pickSetRevision', message: /there are 0\); this revision excludes 10/ });
     // Revision 0 of the same set still has its ten picks: allowed (checked below, after the refusals).
     cases.push({ what: 'revision missing', body: { pickSetId: excludedAll, pickSetRevision: 7, start: { kind: 'gradient' } }, status: 422, error: 'validation_failed', path: 'pickSetRevision', message: /revisions 0 to 1/ });
 
@@ -101,6 +101,8 @@ describe('starting an inversion', () => {
     // A grid past the node limit: 1 cm cells over the world line's 35 m × 12.5 m.
     cases.push({ what: 'grid too large', body: { pickSetId: world.pickSetA, start: { kind: 'gradient', spacing: 0.01 } }, status: 422, error: 'grid_too_large', path: 'start.spacing', message: new RegExp(`limit is ${MAX_GRID_NODES.toLocaleString('en-GB')}`) });
 
+    // Too few picks for the grid: the world's ten picks under 10 cm cells (some 35 000 ground nodes; at most 2 000 per pick).
+    cases.push({ what: 'too few picks for the grid', body: { pickSetId: world.pickSetA, start: { kind: 'gradient', spacing: 0.1 } }, status: 422, error: 'not_invertible', path: 'start.spacing', message: /too few picks for the grid/ });
     // A start model too short for the spread (receiver at 24 m off a 20 m grid), and one whose ground lies below a receiver.
     const short = (await saveModelVersion(world.users.geophysicist.id, world.projectA.id, world.lineA.id, { ...WORLD_MODEL, grid: { ...WORLD_MODEL.grid, nx: 41 } }, { name: 'short', comment: '', basedOn: null })).id;
     cases.push({ what: 'receiver off the grid', body: { pickSetId: world.pickSetA, start: { kind: 'model', modelId: short } }, status: 409, error: 'outside_model', message: /line 6 of the pick file, receiver at x 24 m/ });

@@ -1,15 +1,19 @@
 /**
- * Forward modellers for one inversion job. Until worker/threads/sensitivity-pool.ts is on this
- * branch, the shots run in this thread (shared/inversion/forward.ts).
+ * Forward modellers for one inversion job: every shot of a forward step on the thread pool
+ * (worker/threads/sensitivity-pool.ts), with as many threads as the solve job uses (WORKER_THREADS,
+ * default every core), so the worker's event loop stays free to keep its queue lock and notice a cancel.
  */
-import { inProcessModeller } from '../../shared/inversion';
 import type { ForwardModeller, InversionProblem } from '../../shared/inversion/types';
+import { SensitivityPool } from '../threads/sensitivity-pool';
+import { SOLVER_THREADS } from './solve';
 
 export interface Modellers {
   modeller(problem: InversionProblem): ForwardModeller;
   close(): Promise<void>;
 }
 
+/** A pool of its own per job: it holds one model per thread and goes when the job ends. */
 export async function openModellers(): Promise<Modellers> {
-  return { modeller: inProcessModeller, close: async () => undefined };
+  const pool = new SensitivityPool(SOLVER_THREADS);
+  return { modeller: (problem) => pool.modeller(problem), close: () => pool.close() };
 }

@@ -7,7 +7,7 @@
  * and the result is written once. A cancel is noticed within a second and stops the engine.
  */
 import type { Job } from 'bullmq';
-import { gradientStart, invert } from '../../shared/inversion';
+import { gradientStart, inversionShots, invert } from '../../shared/inversion';
 import type { InversionProblem, InversionResult, InversionSettings } from '../../shared/inversion/types';
 import { rasteriseModel } from '../../shared/model';
 import type { PlacedShot } from '../../shared/picks';
@@ -16,7 +16,7 @@ import type { Grid } from '../../shared/grid';
 import { dataSource } from '../../server/db/dataSource';
 import { updateReturning } from '../../server/db/returning';
 import { HttpError } from '../../server/http/errors';
-import { placeInversionPicks, surfaceRaster, toInversionShots } from '../../server/services/inversionInputs';
+import { placeInversionPicks, surfaceRaster } from '../../server/services/inversionInputs';
 import { loadModelVersion } from '../../server/services/models';
 import { listRevisions, loadPicks, type StoredPick } from '../../server/services/pickSets';
 import { openModellers } from './invert-modeller';
@@ -81,7 +81,7 @@ async function runInversion(row: InversionRow, job: Job): Promise<void> {
     });
     if (result.stopReason === 'cancelled' || stop.signal.aborted) return;
     // Excluded picks are not inverted, but their residuals against the final model are shown (flagged), as runs show them.
-    const excludedShots = toInversionShots(placed.excludedShots);
+    const excludedShots = inversionShots(placed.excludedShots);
     const excludedTimes = excludedShots.length ? (await modellers.modeller({ ...problem, shots: excludedShots }).forward(result.velocity)).times : new Float64Array(0);
     const residuals = [...residualRows(placed.shots, result.computed, false), ...residualRows(placed.excludedShots, excludedTimes, true)];
     const resumedSeconds = resumeFrom ? resumeFrom.history.reduce((s, r) => s + r.seconds, 0) : 0;
@@ -109,7 +109,7 @@ async function buildProblem(row: InversionRow) {
   if (!revision) throw new Error(`pick-set revision ${row.pick_set_revision} is missing`);
   const raster = row.start_kind === 'model' ? rasteriseModel((await loadModelVersion(row.start_model_id!)).model) : surfaceRaster(row.grid, row.surface);
   const placed = placeInversionPicks(raster, picks, revision.exclusions.map((e) => e.index));
-  const shots = toInversionShots(placed.shots);
+  const shots = inversionShots(placed.shots);
   let start = raster.velocity;
   if (row.start_kind === 'gradient') {
     const fit = gradientStart(raster.grid, raster.active, raster.surfaceZ, shots, row.settings);

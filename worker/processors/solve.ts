@@ -23,7 +23,8 @@ import { clearRunResults, finishRun, saveShotResults, type StoredShot } from './
 export class RunCancelled extends Error {}
 
 /** Solver threads of this worker: every core, or WORKER_THREADS to keep the worker's memory lower (README, "Memory"). */
-const THREADS = Math.max(1, Number(process.env.WORKER_THREADS) || availableParallelism());
+export const SOLVER_THREADS = Math.max(1, Number(process.env.WORKER_THREADS) || availableParallelism());
+const THREADS = SOLVER_THREADS;
 let pool: Piscina<RunShotTask, RunShotResult> | null = null;
 function threads(): Piscina<RunShotTask, RunShotResult> {
   pool ??= new Piscina({

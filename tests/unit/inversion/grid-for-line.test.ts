@@ -1,11 +1,10 @@
 /**
  * The automatic start's grid (issue 11 item 5: "grid spacing defaulting to something sensible for the
  * station spacing"; the rule stated for this work: half the median station spacing, taken to a round
- * spacing, coarsened until nx ≤ 600) and the pick-count rules of shared/inversion/input-rules.ts.
+ * spacing, coarsened until nx ≤ 600).
  */
 import { describe, expect, it } from 'vitest';
 import { gridForLine, MAX_DEFAULT_NX, medianStationSpacing } from '../../../shared/inversion/grid-for-line';
-import { checkInversionPicks, MIN_INVERSION_PICKS } from '../../../shared/inversion/input-rules';
 import { evalPolyline } from '../../../shared/model/polyline';
 
 const spread = (n: number, step: number, z: (x: number) => number = () => 100) => Array.from({ length: n }, (_, i) => ({ x: i * step, z: z(i * step) }));
@@ -44,16 +43,5 @@ describe('gridForLine', () => {
     expect(surface.at(-1)![0]).toBeCloseTo(xEnd(grid), 6);
     for (const s of stations) expect(evalPolyline(surface, s.x)).toBeCloseTo(s.z, 9);
     expect(grid.z0).toBeGreaterThanOrEqual(Math.max(...stations.map((s) => s.z)));
-  });
-});
-
-describe('checkInversionPicks', () => {
-  const shots = (counts: Record<string, number>) => Object.entries(counts).flatMap(([id, n]) => Array<string>(n).fill(id));
-  it(`needs ${MIN_INVERSION_PICKS} picks from at least two shots`, () => {
-    expect(checkInversionPicks(shots({ A: 5, B: 5 }), 0)).toBeNull();
-    expect(checkInversionPicks(shots({ A: 5, B: 4 }), 0)).toMatchObject({ code: 'too_few_picks', message: expect.stringMatching(/the pick set has 9 picks/) });
-    expect(checkInversionPicks(shots({ A: 1 }), 3)).toMatchObject({ code: 'too_few_picks', message: expect.stringMatching(/1 pick is left after 3 exclusions/) });
-    expect(checkInversionPicks([], 10)).toMatchObject({ code: 'too_few_picks', message: expect.stringMatching(/every pick is excluded/) });
-    expect(checkInversionPicks(shots({ A: 40 }), 0)).toMatchObject({ code: 'one_shot', message: expect.stringMatching(/All 40 picks belong to one shot \(A\)/) });
   });
 });
