@@ -5,8 +5,10 @@ export type ReportStatus = 'draft' | 'submitted' | 'returned' | 'approved' | 'sh
 export type RenderState = 'queued' | 'rendering' | 'ready' | 'failed';
 
 export interface ReportOptions {
-  /** Shot whose wavefronts and rays the velocity-section figure shows. */
-  shotId: string;
+  /** Shot whose wavefronts and rays the velocity-section figure shows (run reports). */
+  shotId?: string;
+  /** Inversion reports: metres of ray below which a node is greyed as not covered. */
+  coverageThreshold?: number;
   /** m/s: the iso-velocity surface whose depth is tabulated (e.g. top of rock). */
   isoVelocity: number;
   acquisitionNotes: string;
@@ -22,21 +24,28 @@ export interface ReportSnapshot {
   project: { name: string; site: string; clientOrganisation: string };
   line: { id: string; name: string; notes: string };
   stations: { station: number; x: number; z: number }[];
-  runId: string;
-  modelVersionId: string;
+  /** Exactly one of runId and inversionId names what the report is made from. */
+  runId: string | null;
+  inversionId?: string | null;
+  /** The run's model version; for an inversion, its starting model version (null: the automatic start). */
+  modelVersionId: string | null;
   pickSet: { file: string; revision: number };
   preparedBy: string;
   consultancy: { name: string; address: string };
 }
 
-/** A PDF summary of one run and its review. Every step is in the audit log (object_type 'report'). */
+/** A PDF summary of one run or inversion, and its review. Every step is in the audit log (object_type 'report'). */
 @Entity('reports')
 export class Report {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
-  @Column({ type: 'uuid', name: 'run_id' })
-  runId: string;
+  /** A report is made from a finished run or a finished inversion: exactly one of the two. */
+  @Column({ type: 'uuid', name: 'run_id', nullable: true })
+  runId: string | null;
+
+  @Column({ type: 'uuid', name: 'inversion_id', nullable: true })
+  inversionId: string | null;
 
   @Column({ type: 'uuid', name: 'project_id' })
   projectId: string;

@@ -17,6 +17,7 @@ export function presentReport(r: Report, history: ReportEvent[], forClient: bool
     return {
       id: r.id,
       runId: r.runId,
+      inversionId: r.inversionId,
       projectId: r.projectId,
       status: r.status,
       // Only the approved render exists for a client; a failed render is the staff's business.
@@ -30,6 +31,7 @@ export function presentReport(r: Report, history: ReportEvent[], forClient: bool
   return {
     id: r.id,
     runId: r.runId,
+    inversionId: r.inversionId,
     projectId: r.projectId,
     status: r.status,
     render: { state: r.renderState, error: r.renderError ?? undefined, renderedAt: r.pdfRenderedAt, approvedRenderedAt: r.approvedPdfRenderedAt },

@@ -1,16 +1,16 @@
 import { Router, type Request } from 'express';
 import type { Queue } from 'bullmq';
-import { reportStepBody, startReportBody } from '../../shared/schemas/reports';
+import { reportStepBody, startInversionReportBody, startReportBody } from '../../shared/schemas/reports';
 import { HttpError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { idempotent } from '../http/idempotency';
 import { parse } from '../http/parse';
 import { allows, authorize } from '../policies/authorize';
 import type { Action } from '../policies/table';
-import { projectFromParam, projectOfReport, projectOfRun } from '../policies/scopes';
+import { projectFromParam, projectOfInversion, projectOfReport, projectOfRun } from '../policies/scopes';
 import { presentReport } from '../presenters/report';
 import { getReport, listProjectReports, loadPdf, reportHistory } from '../services/reportQueries';
-import { startReport, stepReport, type ReportStep } from '../services/reports';
+import { startInversionReport, startReport, stepReport, type ReportStep } from '../services/reports';
 
 /** Clients (members without report.read_unshared) see only approved renders and a redacted history. */
 const isClientView = (req: Request) => !allows('report.read_unshared', req.access!.role, req.user!.globalRole === 'admin');
@@ -31,6 +31,12 @@ export function reportsRouter(queue: Queue, mailer: Mailer): Router {
 
   r.post('/runs/:runId/reports', authorize('reports.create', projectOfRun), idempotent(), async (req, res) => {
     const report = await startReport(req.user!.id, req.access!.projectId, req.params.runId as string, parse(startReportBody, req.body), queue);
+    res.status(202).json({ id: report.id });
+  });
+
+  r.post('/inversions/:inversionId/reports', authorize('reports.create', projectOfInversion), idempotent(), async (req, res) => {
+    const body = parse(startInversionReportBody, req.body);
+    const report = await startInversionReport(req.user!.id, req.access!.projectId, req.params.inversionId as string, body, queue);
     res.status(202).json({ id: report.id });
   });
 

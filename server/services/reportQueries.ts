@@ -29,12 +29,13 @@ export async function loadPdf(id: string, approvedOnly: boolean): Promise<Buffer
 /** Reports of a project, newest first; `sharedOnly` for clients. */
 export async function listProjectReports(projectId: string, sharedOnly: boolean) {
   const rows = await dataSource.query(
-    `SELECT r.id, r.status, r.render_state, r.created_at, r.run_id, l.name AS line, u.name AS created_by
-     FROM reports r JOIN runs x ON x.id = r.run_id JOIN survey_lines l ON l.id = x.line_id LEFT JOIN users u ON u.id = r.created_by
+    `SELECT r.id, r.status, r.render_state, r.created_at, r.run_id, r.inversion_id, l.name AS line, u.name AS created_by
+     FROM reports r LEFT JOIN runs x ON x.id = r.run_id LEFT JOIN inversions i ON i.id = r.inversion_id
+     JOIN survey_lines l ON l.id = COALESCE(x.line_id, i.line_id) LEFT JOIN users u ON u.id = r.created_by
      WHERE r.project_id = $1 ${sharedOnly ? `AND r.status = 'shared'` : ''} ORDER BY r.created_at DESC`,
     [projectId],
   );
   return rows.map((r: Record<string, never>) => ({
-    id: r.id, status: r.status, renderState: r.render_state, createdAt: r.created_at, runId: r.run_id, line: r.line, createdBy: sharedOnly ? null : r.created_by, // clients see no staff names
+    id: r.id, status: r.status, renderState: r.render_state, createdAt: r.created_at, runId: r.run_id, inversionId: r.inversion_id, line: r.line, createdBy: sharedOnly ? null : r.created_by, // clients see no staff names
   }));
 }

@@ -2,28 +2,38 @@ import type { EntityManager } from 'typeorm';
 import type { ReportSnapshot } from '../entities/Report';
 import { loadOrganisationText } from './organisation';
 
+/** What a report is made from: a finished forward run or a finished inversion. */
+export type ReportSource = { runId: string } | { inversionId: string };
+
+/** The report row's source columns as a ReportSource. */
+export const sourceOf = (r: { runId: string | null; inversionId: string | null }): ReportSource =>
+  r.runId ? { runId: r.runId } : { inversionId: r.inversionId! };
+
 /**
  * Copies what a report shows and what could change under it (stations, names, notes, the
- * consultancy's details); the run and model version are immutable and kept by id.
+ * consultancy's details); runs, inversions and model versions are immutable and kept by id.
  */
-export async function takeReportSnapshot(em: EntityManager, runId: string, preparedById: string | null): Promise<ReportSnapshot> {
+export async function takeReportSnapshot(em: EntityManager, source: ReportSource, preparedById: string | null): Promise<ReportSnapshot> {
+  const fromRun = 'runId' in source;
   const [r] = await em.query(
     `SELECT p.name AS project, p.site, p.client_organisation, l.id AS line_id, l.name AS line, l.notes AS line_notes,
-            run.model_id, run.pick_set_revision, s.file_name, author.name AS prepared_by
-     FROM runs run JOIN survey_lines l ON l.id = run.line_id JOIN projects p ON p.id = l.project_id
-     JOIN pick_sets s ON s.id = run.pick_set_id LEFT JOIN users author ON author.id = $2
-     WHERE run.id = $1`,
-    [runId, preparedById],
+            src.model_id, src.pick_set_revision, s.file_name, author.name AS prepared_by
+     FROM ${fromRun ? '(SELECT id, line_id, pick_set_id, pick_set_revision, model_id FROM runs)' : '(SELECT id, line_id, pick_set_id, pick_set_revision, start_model_id AS model_id FROM inversions)'} src
+     JOIN survey_lines l ON l.id = src.line_id JOIN projects p ON p.id = l.project_id
+     JOIN pick_sets s ON s.id = src.pick_set_id LEFT JOIN users author ON author.id = $2
+     WHERE src.id = $1`,
+    [fromRun ? source.runId : source.inversionId, preparedById],
   );
-  if (!r) throw new Error(`run ${runId} no longer exists`);
+  if (!r) throw new Error(`${fromRun ? `run ${source.runId}` : `inversion ${source.inversionId}`} no longer exists`);
   const stations: ReportSnapshot['stations'] = await em.query('SELECT station, x, z FROM stations WHERE line_id = $1 ORDER BY x', [r.line_id]);
   return {
     takenAt: new Date().toISOString(),
     project: { name: r.project, site: r.site, clientOrganisation: r.client_organisation },
     line: { id: r.line_id, name: r.line, notes: r.line_notes },
     stations: stations.map(({ station, x, z }) => ({ station: Number(station), x: Number(x), z: Number(z) })),
-    runId,
-    modelVersionId: r.model_id,
+    runId: fromRun ? source.runId : null,
+    inversionId: fromRun ? null : source.inversionId,
+    modelVersionId: r.model_id ?? null,
     pickSet: { file: r.file_name, revision: r.pick_set_revision },
     preparedBy: r.prepared_by ?? 'unknown',
     consultancy: await loadOrganisationText(em),

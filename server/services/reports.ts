@@ -5,10 +5,10 @@ import type { ReportStatus } from '../entities/Report';
 import { HttpError } from '../http/errors';
 import { addJob } from '../queue/queue';
 import type { Mailer } from '../mail/mailer';
-import type { StartReportBody } from '../../shared/schemas/reports';
+import type { StartInversionReportBody, StartReportBody } from '../../shared/schemas/reports';
 import { audit } from './audit';
 import { mailForStep } from './reportMail';
-import { takeReportSnapshot } from './reportSnapshot';
+import { sourceOf, takeReportSnapshot, type ReportSource } from './reportSnapshot';
 
 export type ReportStep = 'submit' | 'approve' | 'return' | 'share';
 
@@ -29,10 +29,23 @@ export async function startReport(actorId: string, projectId: string, runId: str
   if (!shotId || !shots.some((s) => s.shot_id === shotId)) {
     throw new HttpError(422, 'validation_failed', `shotId: this run has shots ${shots.map((s) => s.shot_id).join(', ')}`, [{ path: 'shotId', message: 'not a shot of this run' }]);
   }
+  return createDraft(actorId, projectId, { runId }, { shotId, isoVelocity: body.isoVelocity, acquisitionNotes: body.acquisitionNotes }, queue);
+}
+
+/** Starts a report of a finished inversion: a draft row, and a job that renders its PDF. */
+export async function startInversionReport(actorId: string, projectId: string, inversionId: string, body: StartInversionReportBody, queue: Queue): Promise<Report> {
+  const [inv] = await dataSource.query('SELECT status FROM inversions WHERE id = $1', [inversionId]);
+  if (inv?.status !== 'done') throw new HttpError(409, 'inversion_not_done', `Only a finished inversion can be reported; this one is ${inv?.status ?? 'missing'}.`);
+  return createDraft(actorId, projectId, { inversionId }, { isoVelocity: body.isoVelocity, acquisitionNotes: body.acquisitionNotes, coverageThreshold: body.coverageThreshold }, queue);
+}
+
+async function createDraft(actorId: string, projectId: string, source: ReportSource, options: Report['options'], queue: Queue): Promise<Report> {
+  const runId = 'runId' in source ? source.runId : null;
+  const inversionId = 'inversionId' in source ? source.inversionId : null;
   const report = await dataSource.transaction(async (em) => {
-    const snapshot = await takeReportSnapshot(em, runId, actorId);
-    const saved = await em.save(em.create(Report, { runId, projectId, status: 'draft', renderState: 'queued', options: { shotId, isoVelocity: body.isoVelocity, acquisitionNotes: body.acquisitionNotes }, snapshot, createdBy: actorId }));
-    await audit(em, { actorId, action: 'report.create', objectType: 'report', objectId: saved.id, projectId, detail: { runId } });
+    const snapshot = await takeReportSnapshot(em, source, actorId);
+    const saved = await em.save(em.create(Report, { runId, inversionId, projectId, status: 'draft', renderState: 'queued', options, snapshot, createdBy: actorId }));
+    await audit(em, { actorId, action: 'report.create', objectType: 'report', objectId: saved.id, projectId, detail: runId ? { runId } : { inversionId } });
     return saved;
   });
   try {
@@ -73,7 +86,7 @@ export async function stepReport(actor: Express.User, projectId: string, reportI
     }
     found.status = to;
     // What the reviewer approves is what was submitted: freeze the inputs now.
-    if (step === 'submit') found.snapshot = await takeReportSnapshot(em, found.runId, found.createdBy);
+    if (step === 'submit') found.snapshot = await takeReportSnapshot(em, sourceOf(found), found.createdBy);
     if (step === 'approve') found.reviewedBy = actor.id;
     if (step === 'submit' || step === 'approve') found.renderState = 'queued';
     await em.save(found);

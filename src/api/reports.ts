@@ -2,7 +2,7 @@ import { useSubmissionKey } from './submissionKey';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from './client';
 import { adminKeys, reportKeys } from './keys';
-import type { ReportDetail, ReportRenderState, ReportStep, ReportStepResult, ReportSummary, StartReportBody } from './types';
+import type { ReportDetail, ReportRenderState, ReportSource, ReportStep, ReportStepResult, ReportSummary, StartReportBody } from './types';
 
 const reportPath = (reportId: string) => `/api/reports/${encodeURIComponent(reportId)}`;
 
@@ -52,13 +52,13 @@ export function useReportStep(reportId: string) {
   });
 }
 
-/** Start a report of a finished run (geophysicist, lead); the worker renders its PDF. */
-export function useStartReport(runId: string) {
+/** Start a report of a finished run or inversion (geophysicist, lead); the worker renders its PDF. */
+export function useStartReport(source: ReportSource) {
   const queryClient = useQueryClient();
   const submission = useSubmissionKey();
+  const path = 'runId' in source ? `/api/runs/${encodeURIComponent(source.runId)}/reports` : `/api/inversions/${encodeURIComponent(source.inversionId)}/reports`;
   return useMutation({
-    mutationFn: (body: StartReportBody) =>
-      apiRequest<{ id: string }>(`/api/runs/${encodeURIComponent(runId)}/reports`, { method: 'POST', body, idempotencyKey: submission.current() }),
+    mutationFn: (body: StartReportBody) => apiRequest<{ id: string }>(path, { method: 'POST', body, idempotencyKey: submission.current() }),
     onSettled: submission.renew,
     // The new draft belongs to some project's list; refresh every list rather than guess which.
     onSuccess: () => queryClient.invalidateQueries({ predicate: (q) => q.queryKey[0] === 'projects' && q.queryKey[2] === 'reports' }),

@@ -350,7 +350,9 @@ export interface ReportSummary {
   status: ReportStatus;
   renderState: ReportRenderState;
   createdAt: string;
-  runId: string;
+  /** What the report was made from: exactly one of the two. */
+  runId: string | null;
+  inversionId: string | null;
   line: string;
   createdBy: string | null;
 }
@@ -367,12 +369,14 @@ export interface ReportEvent {
 /** GET /api/reports/:reportId */
 export interface ReportDetail {
   id: string;
-  runId: string;
+  /** What the report was made from: exactly one of the two. */
+  runId: string | null;
+  inversionId: string | null;
   projectId: string;
   status: ReportStatus;
   render: { state: ReportRenderState; error?: string; renderedAt: string | null; approvedRenderedAt?: string | null };
   pdfReady: boolean;
-  options: { shotId: string; isoVelocity: number; acquisitionNotes: string };
+  options: { shotId?: string; isoVelocity: number; acquisitionNotes: string; coverageThreshold?: number };
   createdAt: string;
   history: ReportEvent[];
 }
@@ -383,12 +387,18 @@ export interface ReportStepResult extends ReportDetail {
   mailError?: string;
 }
 
-/** POST /api/runs/:runId/reports (isoVelocity in m/s). */
+/** POST /api/runs/:runId/reports and POST /api/inversions/:inversionId/reports (isoVelocity in m/s). */
 export interface StartReportBody {
+  /** Runs only: the shot whose wavefronts the section shows. */
   shotId?: string;
   isoVelocity?: number;
   acquisitionNotes?: string;
+  /** Inversions only: metres of ray below which the section is greyed. */
+  coverageThreshold?: number;
 }
+
+/** What a report is made from. */
+export type ReportSource = { runId: string } | { inversionId: string };
 
 /** GET /api/outbox (admin): mail the local sink received, newest first. */
 export interface OutboxMessage {

@@ -14,6 +14,10 @@ import { SaveModelPanel } from '../components/inversion/SaveModelPanel';
 import { SettingsList } from '../components/inversion/SettingsList';
 import { TomographyCaution } from '../components/inversion/TomographyCaution';
 import { canCancelInversions, canRunInversions } from '../lib/permissions';
+import { canStartRuns } from '../components/run/StartRunForm';
+import { Disclosure } from '../components/Disclosure';
+import { StartReportForm } from '../components/reports/StartReportForm';
+import { DEFAULT_COVERAGE_THRESHOLD_M } from '../components/inversion/coverageMask';
 
 /**
  * One inversion (/lines/:lineId/inversions/:inversionId): live progress and convergence while it runs,
@@ -55,6 +59,13 @@ export function InversionPage() {
           <div className="mb-8">
             <SaveModelPanel inversion={inv} canSave={mayAct} />
           </div>
+          {canStartRuns(line.data?.myRole) && (
+            <div className="mb-8">
+              <Disclosure label="Make a report of this inversion" testId="make-inversion-report-toggle">
+                {() => <StartReportForm source={{ inversionId: inv.id, coverageThreshold: DEFAULT_COVERAGE_THRESHOLD_M }} />}
+              </Disclosure>
+            </div>
+          )}
           <Section title="Convergence">
             <div className="rounded-lg border border-stone-200 bg-white p-4">
               <ConvergenceChart history={inv.history} maxIterations={inv.settings.maxIterations} />

@@ -81,12 +81,16 @@ function ReportFacts({ report, summary, role }: { report: ReportDetail; summary:
       <Fact term="Started">{dateTime(report.createdAt)}</Fact>
       {team && (
         <>
-          <Fact term="Section drawn for shot">{report.options.shotId}</Fact>
+          {report.options.shotId && <Fact term="Section drawn for shot">{report.options.shotId}</Fact>}
           <Fact term="Depth surface at">{`${report.options.isoVelocity.toLocaleString('en-GB')} m/s`}</Fact>
           <Fact term="From">
-            <Link to={`/runs/${report.runId}`} data-testid="report-run-link">
-              the forward run
-            </Link>
+            {report.runId ? (
+              <Link to={`/runs/${report.runId}`} data-testid="report-run-link">
+                the forward run
+              </Link>
+            ) : (
+              'an inversion'
+            )}
           </Fact>
         </>
       )}

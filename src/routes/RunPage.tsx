@@ -34,7 +34,7 @@ export function RunPage() {
       {r.status === 'done' && r.stats && canStartRuns(line.data?.myRole) && (
         <div className="mb-6">
           <Disclosure label="Make a report of this run" testId="make-report-toggle">
-            {() => <StartReportForm runId={r.id} shotIds={r.stats!.by_shot.map((s) => s.shotId)} />}
+            {() => <StartReportForm source={{ runId: r.id, shotIds: r.stats!.by_shot.map((s) => s.shotId) }} />}
           </Disclosure>
         </div>
       )}

@@ -56,6 +56,8 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/inversions/:inversionId/residuals': STAFF_A,
   'POST /api/inversions/:inversionId/cancel': ['geophysicist', 'lead'],
   'POST /api/inversions/:inversionId/model': ['geophysicist'],
+  // Issue 11 item 7: leads report (as from runs); geophysicists make the report they submit.
+  'POST /api/inversions/:inversionId/reports': ['geophysicist', 'lead'],
   // A draft: the project's client may not read it yet (tests/api/reports.test.ts covers a shared one).
   'GET /api/reports/:reportId': STAFF_A,
   'GET /api/reports/:reportId/pdf': STAFF_A,
@@ -120,7 +122,7 @@ function bodyFor(key: string, w: World): object {
   if (key === 'POST /api/runs') return { modelId: w.modelA, pickSetId: w.pickSetA, order: 3 };
   if (key === 'POST /api/inversions') return { pickSetId: w.pickSetA, start: { kind: 'gradient' }, settings: { vMin: 5000, vMax: 100 } };
   if (/^POST \/api\/reports\/:reportId\//.test(key)) return { comment: 42 }; // not a string: 400 before any step
-  if (key === 'POST /api/runs/:runId/reports') return { isoVelocity: -1 };
+  if (key === 'POST /api/runs/:runId/reports' || key === 'POST /api/inversions/:inversionId/reports') return { isoVelocity: -1 };
   return {};
 }
 

@@ -286,8 +286,13 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
       await page.getByTestId('inversion-section-canvas').waitFor();
       expect(await page.getByTestId('save-inversion-model').count()).toBe(0);
       expect(await page.getByText('A geophysicist can save this section').count()).toBe(1);
+      // The button depends on the caller's role, which arrives with the line: wait for that answer.
+      const lineRead = page.waitForResponse((r) => new URL(r.url()).pathname === `/api/lines/${lineId}`);
       await page.goto(`${server.baseUrl}/lines/${lineId}/inversions/${running}`);
       await page.getByTestId('inversion-progress').waitFor();
+      await lineRead;
+      if (mayCancel) await page.getByTestId('cancel-inversion').waitFor();
+      else await page.waitForTimeout(300); // one render after the line arrived
       expect(await page.getByTestId('cancel-inversion').count()).toBe(mayCancel ? 1 : 0);
       await context.close();
     }

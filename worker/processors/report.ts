@@ -8,17 +8,18 @@ import { dataSource } from '../../server/db/dataSource';
 import { loadModelVersion } from '../../server/services/models';
 import { loadRays, loadResidualRows, loadFieldRow } from '../../server/services/runResults';
 import { takeReportSnapshot } from '../../server/services/reportSnapshot';
+import { renderInversionReportPdf } from '../report/inversion/render';
 import { loadLogo } from '../../server/services/organisation';
 import type { ReportOptions, ReportSnapshot } from '../../server/entities/Report';
 import { renderReportPdf } from '../report/render';
 import type { ReportInput, RunStatsJson } from '../report/types';
+import { gatherInversionReportInput, inversionRowOf } from './report-inversion';
 
 export async function reportJob(job: Job<{ reportId: string }>): Promise<{ reportId: string; bytes: number }> {
   const { reportId } = job.data;
   await dataSource.query(`UPDATE reports SET render_state = 'rendering', render_error = NULL WHERE id = $1`, [reportId]);
   try {
-    const input = await gatherReportInput(reportId);
-    const pdf = await renderReportPdf(input);
+    const { input, pdf } = await renderAnyReport(reportId);
     // An approved render goes to its own column: the draft file is never what a client receives.
     const approved = input.status === 'approved' || input.status === 'shared';
     const column = approved ? 'approved_pdf' : 'pdf';
@@ -30,6 +31,19 @@ export async function reportJob(job: Job<{ reportId: string }>): Promise<{ repor
     await dataSource.query(`UPDATE reports SET render_state = 'failed', render_error = $2 WHERE id = $1`, [reportId, `The PDF could not be made: ${(err as Error).message}`]);
     throw err;
   }
+}
+
+/** A report of an inversion or of a forward run, whichever the row names. */
+async function renderAnyReport(reportId: string): Promise<{ input: { status: string }; pdf: Buffer }> {
+  const inv = await inversionRowOf(reportId);
+  if (inv) {
+    const [row] = await dataSource.query('SELECT snapshot, created_by FROM reports WHERE id = $1', [reportId]);
+    const snap: ReportSnapshot = row.snapshot ?? (await takeReportSnapshot(dataSource.manager, { inversionId: inv.inversion_id }, row.created_by));
+    const input = await gatherInversionReportInput(reportId, inv, snap);
+    return { input, pdf: await renderInversionReportPdf(input) };
+  }
+  const input = await gatherReportInput(reportId);
+  return { input, pdf: await renderReportPdf(input) };
 }
 
 /**
@@ -46,7 +60,8 @@ export async function gatherReportInput(reportId: string): Promise<ReportInput> 
   );
   if (!r) throw new Error('the report no longer exists');
   const options = r.options as ReportOptions;
-  const snap: ReportSnapshot = r.snapshot ?? (await takeReportSnapshot(dataSource.manager, r.run_id, r.created_by));
+  const snap: ReportSnapshot = r.snapshot ?? (await takeReportSnapshot(dataSource.manager, { runId: r.run_id }, r.created_by));
+  if (!options.shotId || !snap.modelVersionId) throw new Error('the report names no shot or model version');
   const [model, residuals, field, rays, shots] = await Promise.all([
     loadModelVersion(snap.modelVersionId),
     loadResidualRows(r.run_id),

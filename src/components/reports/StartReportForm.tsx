@@ -13,20 +13,21 @@ const DEFAULT_ISO_VELOCITY = 2500;
 const MAX_ISO_VELOCITY = 10_000;
 
 interface StartReportFormProps {
-  runId: string;
-  /** The finished run's shots; the PDF's velocity section shows the wavefronts of one of them. */
-  shotIds: string[];
+  /** A finished run (with its shots: the PDF's section shows the wavefronts of one) or a finished inversion. */
+  source: { runId: string; shotIds: string[] } | { inversionId: string; coverageThreshold: number };
   /** Called with the new report's id; by default the browser goes to the report's page. */
   onStarted?: (reportId: string) => void;
 }
 
 /**
- * Start a PDF report of a finished run: which shot the section shows, the velocity whose depth
- * is tabulated along the line (m/s), and notes on the acquisition. The worker renders it.
+ * Start a PDF report of a finished run or inversion: which shot the section shows (runs), the
+ * velocity whose depth is tabulated along the line (m/s), and notes on the acquisition. An
+ * inversion's report greys the section where the page does (its coverage threshold). The worker renders it.
  */
-export function StartReportForm({ runId, shotIds, onStarted }: StartReportFormProps) {
+export function StartReportForm({ source, onStarted }: StartReportFormProps) {
   const navigate = useNavigate();
-  const start = useStartReport(runId);
+  const shotIds = 'runId' in source ? source.shotIds : [];
+  const start = useStartReport('runId' in source ? { runId: source.runId } : { inversionId: source.inversionId });
   const [shotId, setShotId] = useState(shotIds[0] ?? '');
   const [velocity, setVelocity] = useState(String(DEFAULT_ISO_VELOCITY));
   const [notes, setNotes] = useState('');
@@ -53,7 +54,12 @@ export function StartReportForm({ runId, shotIds, onStarted }: StartReportFormPr
       velocityRef.current?.focus();
       return;
     }
-    const body = { ...(shotId ? { shotId } : {}), isoVelocity: v, ...(notes.trim() ? { acquisitionNotes: notes.trim() } : {}) };
+    const body = {
+      ...(shotId ? { shotId } : {}),
+      ...('inversionId' in source ? { coverageThreshold: source.coverageThreshold } : {}),
+      isoVelocity: v,
+      ...(notes.trim() ? { acquisitionNotes: notes.trim() } : {}),
+    };
     start.mutate(body, { onSuccess: ({ id }) => (onStarted ? onStarted(id) : navigate(`/reports/${id}`)) });
   }
 
@@ -61,13 +67,15 @@ export function StartReportForm({ runId, shotIds, onStarted }: StartReportFormPr
     <form noValidate onSubmit={onSubmit} data-testid="start-report-form" className="flex flex-col gap-4">
       <FormAlert problems={problems} testId="start-report-error" />
       <div className="grid gap-4 md:grid-cols-2">
-        <SelectField label="Shot for the velocity section" name="shotId" value={shotId} onChange={(e) => (setShotId(e.target.value), start.reset())} error={errors.shotId} hint="The section shows this shot’s wavefronts and rays.">
-          {shotIds.map((s) => (
-            <option key={s} value={s}>
-              {s}
-            </option>
-          ))}
-        </SelectField>
+        {shotIds.length > 0 && (
+          <SelectField label="Shot for the velocity section" name="shotId" value={shotId} onChange={(e) => (setShotId(e.target.value), start.reset())} error={errors.shotId} hint="The section shows this shot’s wavefronts and rays.">
+            {shotIds.map((s) => (
+              <option key={s} value={s}>
+                {s}
+              </option>
+            ))}
+          </SelectField>
+        )}
         <TextField
           label="Depth surface velocity (m/s)"
           name="isoVelocity"

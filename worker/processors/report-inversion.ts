@@ -1,0 +1,62 @@
+/**
+ * The inputs of an inversion report (worker/report/inversion/): the report's frozen snapshot
+ * (stations, names, consultancy) and the inversion's stored result, which never changes once done.
+ */
+import { dataSource } from '../../server/db/dataSource';
+import type { ReportOptions, ReportSnapshot } from '../../server/entities/Report';
+import { loadInversionResiduals, loadInversionSection, loadInversionView } from '../../server/services/inversionReads';
+import { loadModelVersion } from '../../server/services/models';
+import { loadLogo } from '../../server/services/organisation';
+import { inversionReportInput } from '../report/inversion/from-views';
+import type { InversionReportInput } from '../report/inversion/types';
+
+export interface InversionReportRow {
+  status: string;
+  options: ReportOptions;
+  inversion_id: string;
+  reviewed_by: string | null;
+}
+
+export async function gatherInversionReportInput(reportId: string, r: InversionReportRow, snap: ReportSnapshot): Promise<InversionReportInput> {
+  const [view, section, residuals, logo] = await Promise.all([
+    loadInversionView(r.inversion_id),
+    loadInversionSection(r.inversion_id),
+    loadInversionResiduals(r.inversion_id),
+    loadLogo(),
+  ]);
+  const startModel = snap.modelVersionId ? await loadModelVersion(snap.modelVersionId) : null;
+  const input = inversionReportInput({
+    meta: {
+      reportId,
+      status: r.status,
+      date: new Date(),
+      consultancy: snap.consultancy.name,
+      consultancyAddress: snap.consultancy.address,
+      consultancyLogo: logo?.data ?? null,
+      project: snap.project,
+      line: { name: snap.line.name, notes: r.options.acquisitionNotes || snap.line.notes },
+      preparedBy: snap.preparedBy,
+      reviewedBy: r.reviewed_by ?? null,
+    },
+    view,
+    section,
+    pickSetFile: snap.pickSet.file,
+    startModelName: startModel?.name,
+    residuals: residuals.map((x: { shotId: string; receiverX: number; observedMs: number; computedMs: number; residualMs: number; sigmaMs: number; excluded: boolean }) => ({
+      shotId: x.shotId, receiverX: x.receiverX, observedMs: x.observedMs, computedMs: x.computedMs, residualMs: x.residualMs, sigmaMs: x.sigmaMs, excluded: x.excluded,
+    })),
+    isoVelocity: r.options.isoVelocity,
+    coverageThreshold: r.options.coverageThreshold,
+  });
+  // The stations as they were when the report was made or submitted, not as edited since.
+  return { ...input, stations: snap.stations };
+}
+
+export const inversionRowOf = async (reportId: string): Promise<InversionReportRow | undefined> =>
+  (
+    await dataSource.query(
+      `SELECT rep.status, rep.options, rep.inversion_id, reviewer.name AS reviewed_by
+       FROM reports rep LEFT JOIN users reviewer ON reviewer.id = rep.reviewed_by WHERE rep.id = $1 AND rep.inversion_id IS NOT NULL`,
+      [reportId],
+    )
+  )[0];
