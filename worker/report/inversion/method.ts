@@ -27,7 +27,7 @@ export function startText(input: InversionReportInput): string {
 export function smoothingText(input: InversionReportInput): string {
   const w = input.inversion.settings.smoothing;
   if (w !== null) return `fixed by the user at ${weight(w)} (relative to the data's sensitivity)`;
-  return `automatic: ${AUTO_SMOOTHING_START} for the first step, halved after every step that leaves χ² per datum above 1.1, doubled after one that falls below 0.9, never below ${AUTO_SMOOTHING_FLOOR}`;
+  return `automatic: ${AUTO_SMOOTHING_START} for the first step, halved after a step that leaves χ² per datum above 1.1 and did what its linearisation predicted, doubled after one that falls below 0.9 or failed, never below ${AUTO_SMOOTHING_FLOOR}`;
 }
 
 export function drawInversionMethod(ctx: InversionContext): void {
