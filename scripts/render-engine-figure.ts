@@ -4,8 +4,7 @@
  * traced back from surface geophones. Plotly in headless Chromium.
  *   npx tsx scripts/render-engine-figure.ts
  */
-import { readFileSync, writeFileSync } from 'node:fs';
-import { chromium } from 'playwright-core';
+import { writePlotlyPng } from './lib/plotly-png';
 import { rasteriseModel, type ModelFile } from '../shared/model';
 import { sampleTime, solveTravelTimes, traceRay } from '../shared/eikonal';
 
@@ -68,29 +67,7 @@ const layout = {
   plot_bgcolor: '#f4f4f4',
 };
 
-async function main(): Promise<void> {
-  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--no-sandbox', '--disable-background-networking', '--disable-gpu'] });
-  try {
-    const page = await browser.newPage({ viewport: { width: 1200, height: 520 } });
-    await page.setContent('<html><body style="margin:0"><div id="plot"></div></body></html>');
-    await page.addScriptTag({ content: readFileSync(new URL('../node_modules/plotly.js-dist-min/plotly.min.js', import.meta.url), 'utf8') });
-    const png = await page.evaluate(
-      async ([d, l]) => {
-        const P = (window as unknown as { Plotly: { newPlot: Function; toImage: Function } }).Plotly;
-        await P.newPlot('plot', d, l, { staticPlot: true });
-        return (await P.toImage('plot', { format: 'png', width: 1200, height: 520, scale: 1.5 })) as string;
-      },
-      [data, layout] as const,
-    );
-    const out = new URL('../docs/img/engine-field.png', import.meta.url);
-    writeFileSync(out, Buffer.from(png.replace(/^data:image\/png;base64,/, ''), 'base64'));
-    console.log(`wrote ${out.pathname}`);
-  } finally {
-    await browser.close();
-  }
-}
-
-main().catch((e) => {
+writePlotlyPng(new URL('../docs/img/engine-field.png', import.meta.url), data, layout).catch((e) => {
   console.error(e);
   process.exit(1);
 });

@@ -6,8 +6,7 @@
  * less than 1 m of ray passed, the depth of investigation, and the true interfaces dashed.
  *   npx tsx scripts/render-inversion-figure.ts
  */
-import { readFileSync, writeFileSync } from 'node:fs';
-import { chromium } from 'playwright-core';
+import { writePlotlyPng } from './lib/plotly-png';
 import { sampleTime, solveTravelTimes } from '../shared/eikonal';
 import { gradientStart, invert } from '../shared/inversion';
 import { normalDeviates } from '../shared/inversion/checkerboard';
@@ -110,22 +109,4 @@ const layout = {
   plot_bgcolor: '#ffffff',
 };
 
-const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--no-sandbox', '--disable-background-networking', '--disable-gpu'] });
-try {
-  const page = await browser.newPage({ viewport: { width: 1200, height: 520 } });
-  await page.setContent('<html><body style="margin:0"><div id="plot"></div></body></html>');
-  await page.addScriptTag({ content: readFileSync(new URL('../node_modules/plotly.js-dist-min/plotly.min.js', import.meta.url), 'utf8') });
-  const png = await page.evaluate(
-    async ([d, l]) => {
-      const P = (window as unknown as { Plotly: { newPlot: Function; toImage: Function } }).Plotly;
-      await P.newPlot('plot', d, l, { staticPlot: true });
-      return (await P.toImage('plot', { format: 'png', width: 1200, height: 520, scale: 1.5 })) as string;
-    },
-    [data, layout] as const,
-  );
-  const out = new URL('../docs/img/inversion-section.png', import.meta.url);
-  writeFileSync(out, Buffer.from(png.replace(/^data:image\/png;base64,/, ''), 'base64'));
-  console.log(`wrote ${out.pathname}`);
-} finally {
-  await browser.close();
-}
+await writePlotlyPng(new URL('../docs/img/inversion-section.png', import.meta.url), data, layout);
