@@ -119,7 +119,8 @@ export interface InversionSectionView {
   checkerboard: {
     size: number;
     amplitude: number;
-    correlation: number;
+    /** null when it cannot be computed (a flat recovered pattern, or fewer than two covered nodes). */
+    correlation: number | null;
     coverageThreshold: number;
     truePattern: (number | null)[];
     recovered: (number | null)[];

@@ -210,7 +210,7 @@ describe('inversions through the worker', () => {
     });
     expect(cb.correlation).toBeGreaterThan(-1);
     expect(cb.correlation).toBeLessThanOrEqual(1);
-    expect(v.stats!.checkerboardCorrelation).toBeCloseTo(cb.correlation, 9);
+    expect(v.stats!.checkerboardCorrelation).toBeCloseTo(cb.correlation!, 9);
     await geo.post(`/api/picksets/${pickSetId}/revisions`).set('X-CSRF-Token', geo.csrf).send({ exclusions: [] }).expect(201);
   }, 120_000);
 

@@ -56,7 +56,14 @@ export function CheckerboardPanel({ section, checkerboard }: { section: Inversio
       <p className="mb-3 max-w-prose text-stone-800">
         Squares of {checkerboard.size} m, ±{(checkerboard.amplitude * 100).toFixed(0)}% of the final velocities. Correlation of the recovered with the
         true pattern in the ground with at least {checkerboard.coverageThreshold} m of ray:{' '}
-        <strong data-testid="checkerboard-correlation">{checkerboard.correlation.toFixed(2)}</strong> — {correlationWords(checkerboard.correlation)}.
+        {checkerboard.correlation === null ? (
+          <strong data-testid="checkerboard-correlation">not computable</strong>
+        ) : (
+          <>
+            <strong data-testid="checkerboard-correlation">{checkerboard.correlation.toFixed(2)}</strong> — {correlationWords(checkerboard.correlation)}
+          </>
+        )}
+        .
       </p>
       <div className="grid gap-4 lg:grid-cols-2">
         <PatternChart title="Pattern put in" z={truth} section={section} limit={limit} testId="checkerboard-true" />
