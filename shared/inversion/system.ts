@@ -11,7 +11,8 @@
  * (s_k + δ), not on the step, so the result does not depend on how many steps led to it.
  * Unknowns are scaled by their column norms before LSQR (a diagonal preconditioner; Paige &
  * Saunders 1982 §7) so cells crossed by many rays and cells crossed by none converge alike.
- * The regularisation rows are applied without building a matrix.
+ * The regularisation rows are applied without building a matrix; the weights and the column
+ * scaling are folded into the data values and stencil coefficients once per step.
  */
 import { CsrMatrix } from './csr';
 import type { LsqrOperator } from './lsqr';
@@ -114,43 +115,56 @@ export function buildStep(inp: StepInputs, stencils: Stencils, Gu: CsrMatrix): S
   stencilRhs(stencils.vertical, alphaV, nd + nh);
   for (let j = 0; j < n; j++) rhs[nd + nh + nv + j] = -mu * (inp.current[j] - inp.start[j]);
 
-  const scaled = new Float64Array(n);
-  const dataOut = new Float64Array(nd);
+  // The scaled operator A·C with its weights folded in once per step, so LSQR's products do no
+  // scaling passes of their own: data rows w·G·C, stencil coefficients α·c·C, damping μ·C.
+  const dataVals = new Float32Array(Gu.nonZeros);
+  for (let r = 0; r < nd; r++) {
+    for (let k = Gu.rowPtr[r]; k < Gu.rowPtr[r + 1]; k++) dataVals[k] = weight[r] * Gu.vals[k] * columnScale[Gu.cols[k]];
+  }
+  const data = new CsrMatrix(nd, n, Gu.rowPtr, Gu.cols, dataVals);
+  const coefficients = (st: Int32Array, alpha: number) => {
+    const c = new Float64Array(st.length);
+    for (let r = 0; r < st.length; r += 3) {
+      c[r] = alpha * columnScale[st[r]];
+      c[r + 1] = -2 * alpha * columnScale[st[r + 1]];
+      c[r + 2] = alpha * columnScale[st[r + 2]];
+    }
+    return c;
+  };
+  const hc = coefficients(stencils.horizontal, alphaH);
+  const vc = coefficients(stencils.vertical, alphaV);
+  const damp = Float64Array.from(columnScale, (c) => mu * c);
   const operator: LsqrOperator = {
     m,
     n,
     apply(y, out) {
-      for (let j = 0; j < n; j++) scaled[j] = columnScale[j] * y[j];
-      Gu.multiply(scaled, dataOut);
-      for (let r = 0; r < nd; r++) out[r] = weight[r] * dataOut[r];
+      data.multiply(y, out); // writes out[0 … nd−1]
       let row = nd;
       const st1 = stencils.horizontal;
-      for (let r = 0; r < st1.length; r += 3) out[row++] = alphaH * (scaled[st1[r]] - 2 * scaled[st1[r + 1]] + scaled[st1[r + 2]]);
+      for (let r = 0; r < st1.length; r += 3) out[row++] = hc[r] * y[st1[r]] + hc[r + 1] * y[st1[r + 1]] + hc[r + 2] * y[st1[r + 2]];
       const st2 = stencils.vertical;
-      for (let r = 0; r < st2.length; r += 3) out[row++] = alphaV * (scaled[st2[r]] - 2 * scaled[st2[r + 1]] + scaled[st2[r + 2]]);
-      for (let j = 0; j < n; j++) out[row++] = mu * scaled[j];
+      for (let r = 0; r < st2.length; r += 3) out[row++] = vc[r] * y[st2[r]] + vc[r + 1] * y[st2[r + 1]] + vc[r + 2] * y[st2[r + 2]];
+      for (let j = 0; j < n; j++) out[row++] = damp[j] * y[j];
     },
     applyTranspose(u, out) {
-      out.fill(0);
-      for (let r = 0; r < nd; r++) dataOut[r] = weight[r] * u[r];
-      Gu.multiplyTransposeAdd(dataOut, out);
+      const base = nd + nh + nv;
+      for (let j = 0; j < n; j++) out[j] = damp[j] * u[base + j];
+      data.multiplyTransposeAdd(u, out); // reads u[0 … nd−1]
       let row = nd;
       const st1 = stencils.horizontal;
       for (let r = 0; r < st1.length; r += 3) {
-        const q = alphaH * u[row++];
-        out[st1[r]] += q;
-        out[st1[r + 1]] -= 2 * q;
-        out[st1[r + 2]] += q;
+        const q = u[row++];
+        out[st1[r]] += hc[r] * q;
+        out[st1[r + 1]] += hc[r + 1] * q;
+        out[st1[r + 2]] += hc[r + 2] * q;
       }
       const st2 = stencils.vertical;
       for (let r = 0; r < st2.length; r += 3) {
-        const q = alphaV * u[row++];
-        out[st2[r]] += q;
-        out[st2[r + 1]] -= 2 * q;
-        out[st2[r + 2]] += q;
+        const q = u[row++];
+        out[st2[r]] += vc[r] * q;
+        out[st2[r + 1]] += vc[r + 1] * q;
+        out[st2[r + 2]] += vc[r + 2] * q;
       }
-      for (let j = 0; j < n; j++) out[j] += mu * u[row++];
-      for (let j = 0; j < n; j++) out[j] *= columnScale[j];
     },
   };
   return { operator, rhs, columnScale };
