@@ -4,8 +4,7 @@
  * with the split between forward solves and rays, matrix build and LSQR. The picks are exact
  * times in v = 400 + 30·depth (asinh formula) with σ = 0.02 ms, so the misfit target is out of
  * reach and every iteration runs. Peak memory is the process's resident maximum (threads
- * included). Add `--queue` (with the services running, scripts/bench-services.sh) for the demo
- * line through the queue, POST to done.
+ * included). The demo line through the queue, POST to done, is `npm run bench:invert:queue`.
  */
 import { resourceUsage } from 'node:process';
 import { parseArgs } from 'node:util';
