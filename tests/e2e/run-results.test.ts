@@ -137,9 +137,14 @@ describe('forward runs: start, progress, results views, comparison', () => {
     await page.getByTestId('vertical-exaggeration').selectOption('1');
     await page.getByTestId('section-caption').filter({ hasText: 'every 2 ms' }).waitFor();
     // Pointing at the ground reads out velocity and first-arrival time there.
-    const box = (await page.getByTestId('section-canvas').boundingBox())!;
-    await page.mouse.move(box.x + box.width * 0.5, box.y + box.height * 0.7);
-    expect(await page.getByTestId('section-readout').textContent()).toMatch(/v \d+ m\/s · first arrival \d+\.\d ms/);
+    // The canvas may still be taking its new size after the exaggeration change: point again until it answers.
+    await expect
+      .poll(async () => {
+        const box = (await page.getByTestId('section-canvas').boundingBox())!;
+        await page.mouse.move(box.x + box.width * 0.5, box.y + box.height * 0.7);
+        return page.getByTestId('section-readout').textContent();
+      }, { timeout: 10_000 })
+      .toMatch(/v \d+ m\/s · first arrival \d+\.\d ms/);
     await page.getByTestId('section-view').screenshot({ path: path.join(SCREENSHOT_DIR, 'run-section-S4-true-scale.png') });
 
     // Back to S1: its field comes from the cache, not a second request.
