@@ -32,6 +32,8 @@ export function presentReport(r: Report, history: ReportEvent[], forClient: bool
     id: r.id,
     runId: r.runId,
     inversionId: r.inversionId,
+    /** The line the report is about (staff links to the run or inversion page). */
+    lineId: r.snapshot?.line.id ?? null,
     projectId: r.projectId,
     status: r.status,
     render: { state: r.renderState, error: r.renderError ?? undefined, renderedAt: r.pdfRenderedAt, approvedRenderedAt: r.approvedPdfRenderedAt },

@@ -372,6 +372,8 @@ export interface ReportDetail {
   /** What the report was made from: exactly one of the two. */
   runId: string | null;
   inversionId: string | null;
+  /** Staff only: the line the report is about. */
+  lineId?: string | null;
   projectId: string;
   status: ReportStatus;
   render: { state: ReportRenderState; error?: string; renderedAt: string | null; approvedRenderedAt?: string | null };

@@ -88,6 +88,10 @@ function ReportFacts({ report, summary, role }: { report: ReportDetail; summary:
               <Link to={`/runs/${report.runId}`} data-testid="report-run-link">
                 the forward run
               </Link>
+            ) : report.lineId ? (
+              <Link to={`/lines/${report.lineId}/inversions/${report.inversionId}`} data-testid="report-inversion-link">
+                the inversion
+              </Link>
             ) : (
               'an inversion'
             )}

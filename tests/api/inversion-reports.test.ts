@@ -72,6 +72,7 @@ describe('reports of inversions', () => {
     }, 90_000, 'the PDF');
     expect(ready.render.state, `${ready.render.error} ${worker.output.join('')}`).toBe('ready');
     expect(ready).toMatchObject({ inversionId, runId: null, status: 'draft', options: { isoVelocity: 700, coverageThreshold: 2 } });
+    expect(ready.lineId).toMatch(/^[0-9a-f-]{36}$/); // staff link back to the inversion's page
     const pdf = await lead.get(`/api/reports/${reportId}/pdf`).buffer(true).parse(binaryBody);
     expect(pdf.status).toBe(200);
     const file = join(mkdtempSync(join(tmpdir(), 'tf-invreport-')), 'report.pdf');
