@@ -4,12 +4,10 @@
  * settings, limitations and cautions. Same page, type and frame as the forward-run report; pure
  * apart from reading the font files.
  */
-import PDFDocument from 'pdfkit';
-import { COVER_TITLE, drawCoverPage } from '../cover';
-import { fontPath, FONT, registerFonts } from '../fonts';
+import { drawCoverPage } from '../cover';
+import { openReportDocument } from '../document';
 import { isoDate } from '../format';
 import { drawPageFrames } from '../frame';
-import { MARGIN } from '../style';
 import { drawInversionCautions } from './cautions';
 import { drawCheckerboard } from './checkerboard';
 import { InversionContext } from './context';
@@ -25,28 +23,7 @@ import { validateInversionReportInput } from './validate';
 export async function renderInversionReportPdf(input: InversionReportInput): Promise<Buffer> {
   validateInversionReportInput(input);
   const inv = input.inversion;
-  const doc = new PDFDocument({
-    size: 'A4',
-    margins: { ...MARGIN },
-    bufferPages: true,
-    font: fontPath(FONT.regular),
-    info: {
-      Title: `${COVER_TITLE}: ${input.project.name}, line ${input.line.name}`,
-      Author: input.preparedBy,
-      Subject: `Travel-time tomography, report ${input.reportId} (${input.status})`,
-      Creator: 'Timefield',
-      Producer: 'Timefield',
-      CreationDate: input.date,
-      ModDate: input.date,
-    },
-  });
-  const chunks: Buffer[] = [];
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('data', (c: Buffer) => chunks.push(c));
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
-  });
-  registerFonts(doc);
+  const { doc, done } = openReportDocument(input, 'Travel-time tomography');
 
   const ctx = new InversionContext(doc, input);
   drawCoverPage(ctx, input, {
