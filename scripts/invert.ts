@@ -5,7 +5,6 @@
  * 2 for usage errors. Messages go to stderr as sentences.
  */
 import { writeFile } from 'node:fs/promises';
-import { availableParallelism } from 'node:os';
 import { parseArgs } from 'node:util';
 import { validateSolveInput, EikonalInputError } from '../shared/eikonal';
 import { gradientStart, invert, inversionDataProblems, inversionShots, InversionInputError, type InversionResult } from '../shared/inversion';
@@ -15,7 +14,7 @@ import { rasteriseModel } from '../shared/model';
 import { groupPicksByShot, placeShots } from '../shared/picks';
 import { computeResiduals, formatResidualCsv, type ResidualInput } from '../shared/residuals';
 import { ForwardStepError, SensitivityPool } from '../worker/threads/sensitivity-pool';
-import { InputError, pickErrors, readModel, readPicks, runCli, UsageError } from './lib/cli-inputs';
+import { InputError, pickErrors, readModel, readPicks, runCli, threadCount, UsageError } from './lib/cli-inputs';
 
 const USAGE = `usage: npm run invert -- --model M.model.json --picks P.picks.csv [--start model|gradient] [--iterations N]
        [--smoothing W] [--vertical-weight R] [--damping D] [--vmin V] [--vmax V] [--order 1|2]
@@ -73,8 +72,7 @@ function readOptions(argv: string[]) {
     const flagOf = (key: PropertyKey) => Object.entries(NUMBER_OPTIONS).find(([, k]) => k === key)?.[0] ?? String(key);
     throw new UsageError(settings.error.issues.map((i) => `--${flagOf(i.path[0])}: ${i.message}`).join('; '));
   }
-  const threads = v.threads === undefined ? Math.max(1, availableParallelism()) : Number(v.threads);
-  if (!Number.isInteger(threads) || threads < 1 || threads > 256) throw new UsageError(`--threads must be a whole number from 1 to 256 (got ${v.threads})`);
+  const threads = threadCount(v.threads as string | undefined);
   return {
     model: v.model as string,
     picks: v.picks as string,

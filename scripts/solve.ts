@@ -11,8 +11,8 @@ import { rasteriseModel } from '../shared/model';
 import { groupPicksByShot, placeShots } from '../shared/picks';
 import { computeResiduals, formatResidualCsv, residualStats, statsByShot, type ResidualInput } from '../shared/residuals';
 import { sToMs } from '../shared/units';
-import { defaultThreadCount, ShotPool, ShotSolveError } from '../worker/threads/shot-pool';
-import { InputError, pickErrors, readModel, readPicks, runCli, UsageError } from './lib/cli-inputs';
+import { ShotPool, ShotSolveError } from '../worker/threads/shot-pool';
+import { InputError, pickErrors, readModel, readPicks, runCli, threadCount, UsageError } from './lib/cli-inputs';
 
 const USAGE = 'usage: npm run solve -- --model M.model.json --picks P.picks.csv [--order 1|2] [--residuals OUT.csv] [--json] [--threads N]';
 
@@ -49,8 +49,7 @@ function readOptions(argv: string[]): CliOptions {
   if (!values.model) throw new UsageError('--model is required');
   if (!values.picks) throw new UsageError('--picks is required');
   if (values.order !== '1' && values.order !== '2') throw new UsageError(`--order must be 1 or 2 (got ${values.order})`);
-  const threads = values.threads === undefined ? defaultThreadCount() : Number(values.threads);
-  if (!Number.isInteger(threads) || threads < 1 || threads > 256) throw new UsageError(`--threads must be a whole number from 1 to 256 (got ${values.threads})`);
+  const threads = threadCount(values.threads);
   return { model: values.model, picks: values.picks, order: values.order === '1' ? 1 : 2, residuals: values.residuals, json: values.json, threads };
 }
 

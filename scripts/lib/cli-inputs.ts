@@ -4,6 +4,7 @@
  */
 import { createReadStream } from 'node:fs';
 import { readFile } from 'node:fs/promises';
+import { availableParallelism } from 'node:os';
 import { formatModelIssues, parseModelFile } from '../../shared/model';
 import { createPickParser, formatPickError, type Pick, type PickError } from '../../shared/picks';
 
@@ -11,6 +12,13 @@ import { createPickParser, formatPickError, type Pick, type PickError } from '..
 export class UsageError extends Error {}
 /** Bad input files or positions: exit 1. */
 export class InputError extends Error {}
+
+/** `--threads N`: 1–256, default every core. */
+export function threadCount(text: string | undefined): number {
+  const threads = text === undefined ? Math.max(1, availableParallelism()) : Number(text);
+  if (!Number.isInteger(threads) || threads < 1 || threads > 256) throw new UsageError(`--threads must be a whole number from 1 to 256 (got ${text})`);
+  return threads;
+}
 
 export const indent = (text: string): string => text.split('\n').map((l) => `  ${l}`).join('\n');
 export const pickErrors = (path: string, what: string, errors: PickError[]): string =>
