@@ -134,8 +134,6 @@ describe('forward runs: start, progress, results views, comparison', () => {
     await page.getByTestId('section-caption').filter({ hasText: 'Shot S4 at' }).waitFor();
     expect(new URL(page.url()).searchParams.get('shot')).toBe('S4');
     await page.getByTestId('contour-interval').selectOption('2');
-    await page.getByTestId('vertical-exaggeration').selectOption('1');
-    await page.getByTestId('section-caption').filter({ hasText: 'every 2 ms' }).waitFor();
     // Pointing at the ground reads out velocity and first-arrival time there.
     // At true scale the section is a thin strip between the axes: point down the middle of the
     // canvas until a spot in the ground answers (a move to the same spot again sends no event).
@@ -151,6 +149,8 @@ describe('forward runs: start, progress, results views, comparison', () => {
         return 'no spot in the ground answered';
       }, { timeout: 10_000 })
       .toMatch(/v \d+ m\/s · first arrival \d+\.\d ms/);
+    await page.getByTestId('vertical-exaggeration').selectOption('1');
+    await page.getByTestId('section-caption').filter({ hasText: 'every 2 ms' }).waitFor();
     await page.getByTestId('section-view').screenshot({ path: path.join(SCREENSHOT_DIR, 'run-section-S4-true-scale.png') });
 
     // Back to S1: its field comes from the cache, not a second request.
