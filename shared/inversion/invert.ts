@@ -143,7 +143,7 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
     const Gu = toUnknownColumns(G, unknownOf, nu);
     if (!scale) scale = dataScale(Gu, weight, nu);
     const system = buildStep(
-      { nx: grid.nx, nz: grid.nz, unknownOf, nodeOf, G, weight, residual, current, start, alphaH: lambda * scale, alphaV: lambda * settings.verticalWeight * scale, mu: settings.damping * scale },
+      { nx: grid.nx, nz: grid.nz, unknownOf, nodeOf, G, weight, residual, current, start, alphaH: lambda * scale, alphaV: lambda * settings.verticalWeight * scale, mu: settings.damping * scale, smoothFrom: problem.smoothingActsOn === 'departure' ? start : null },
       stencils,
       Gu,
     );

@@ -46,6 +46,12 @@ export interface InversionProblem {
   start: Float32Array;
   shots: InversionShot[];
   settings: InversionSettings;
+  /**
+   * What the smoothing measures: the model itself ('model', default), or its departure from the
+   * start ('departure'), for a start that carries structure of its own (a saved model version:
+   * layers from the layer methods, a hand-built model), so that its contacts are kept.
+   */
+  smoothingActsOn?: 'model' | 'departure';
 }
 
 /** Travel times and ray sensitivities for every pick, in problem order (shot by shot). */

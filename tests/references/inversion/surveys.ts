@@ -31,13 +31,13 @@ export function gradientSurvey(v0: number, k: number, sigma: number, seed = 1): 
   return SHOT_XS.map((sx) => shotOf(sx, 0, () => 0, (rx) => gradientTime(Math.abs(rx - sx), v0, k), sigma, noise));
 }
 
-/** Flat layers under a flat surface at z = 0: `bases` are the depths of the interfaces (m). */
-export function layeredModel(velocities: number[], bases: number[], depth: number): ModelFile {
+/** Flat layers under a flat surface at z = 0: `bases` are the depths of the interfaces (m); nodes every `spacing` m. */
+export function layeredModel(velocities: number[], bases: number[], depth: number, spacing = 0.25): ModelFile {
   const x0 = -8, x1 = 104;
   const line = (z: number): [number, number][] => [[x0, z], [x1, z]];
   return {
     format: 'timefield-model/1',
-    grid: { x0, dx: 0.25, nx: (x1 - x0) / 0.25 + 1, z0: 0, dz: 0.25, nz: depth / 0.25 + 1 },
+    grid: { x0, dx: spacing, nx: (x1 - x0) / spacing + 1, z0: 0, dz: spacing, nz: depth / spacing + 1 },
     surface: line(0),
     layers: velocities.map((v, i) => ({ name: `layer ${i + 1}`, ...(i < bases.length ? { base: line(-bases[i]) } : {}), v_top: v, v_base: v })),
   } as ModelFile;
