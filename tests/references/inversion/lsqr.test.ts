@@ -41,6 +41,26 @@ const operatorOf = (A: CsrMatrix): LsqrOperator => ({
   },
 });
 
+describe('sparse products against the dense matrix (ml-matrix)', () => {
+  it('A·x, Aᵀ·y scattered and Aᵀ·y through the explicit transpose agree with dense products', () => {
+    const { csr, dense } = sparseRandom(70, 30, 0.2, 9);
+    const rand = normalDeviates(11);
+    const x = Float64Array.from({ length: 30 }, () => rand());
+    const y = Float64Array.from({ length: 70 }, () => rand());
+    const ax = dense.mmul(Matrix.columnVector(Array.from(x))).to1DArray();
+    const aty = dense.transpose().mmul(Matrix.columnVector(Array.from(y))).to1DArray();
+    const got = csr.multiply(x, new Float64Array(70));
+    const scattered = csr.multiplyTransposeAdd(y, new Float64Array(30));
+    const gathered = csr.transpose().multiplyAdd(y, new Float64Array(30).fill(1));
+    for (let r = 0; r < 70; r++) expect(got[r]).toBeCloseTo(ax[r], 10);
+    // The transpose stores Float32 values (as the ray-length matrix does): 6 digits, not 10.
+    for (let j = 0; j < 30; j++) {
+      expect(scattered[j]).toBeCloseTo(aty[j], 10);
+      expect(gathered[j] - 1).toBeCloseTo(aty[j], 5);
+    }
+  });
+});
+
 describe('LSQR (Paige & Saunders 1982)', () => {
   it.each([
     [60, 20, 0.3, 1],
