@@ -149,7 +149,14 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
     );
     timings.matrixSeconds += nowSeconds() - tm;
     const tl = nowSeconds();
-    const solution = lsqr(system.operator, system.rhs, { atol: 1e-4, btol: 1e-4, maxIterations: LSQR_ITERATIONS });
+    const products = modeller.products ? await modeller.products(system.data, system.dataT) : null;
+    if (products) system.useProducts(products);
+    let solution: ReturnType<typeof lsqr>;
+    try {
+      solution = lsqr(system.operator, system.rhs, { atol: 1e-4, btol: 1e-4, maxIterations: LSQR_ITERATIONS });
+    } finally {
+      products?.release();
+    }
     timings.lsqrSeconds += nowSeconds() - tl;
     const step = solution.x;
     for (let j = 0; j < nu; j++) step[j] *= system.columnScale[j];

@@ -19,6 +19,7 @@
  */
 import { CsrMatrix } from './csr';
 import type { LsqrOperator } from './lsqr';
+import type { MatrixProducts } from './types';
 
 export interface StepInputs {
   nx: number;
@@ -77,6 +78,11 @@ export function toUnknownColumns(G: CsrMatrix, unknownOf: Int32Array, unknowns: 
 
 export interface StepSystem {
   operator: LsqrOperator;
+  /** The scaled data block of the operator and its transpose (for a products backend). */
+  data: CsrMatrix;
+  dataT: CsrMatrix;
+  /** Runs the data block's products on `products` from now on (e.g. on more threads). */
+  useProducts(products: Pick<MatrixProducts, 'multiply' | 'multiplyTransposeAdd'>): void;
   rhs: Float64Array;
   /** δ = columnScale ⊙ y, y the LSQR solution. */
   columnScale: Float64Array;
@@ -134,6 +140,10 @@ export function buildStep(inp: StepInputs, stencils: Stencils, Gu: CsrMatrix): S
   // Aᵀ·u gathers along the rows of an explicit transpose: a third faster than scattering along
   // the rows of A (measured at 200 000 unknowns; the transpose costs one pass per step).
   const dataT = data.transpose();
+  let products: Pick<MatrixProducts, 'multiply' | 'multiplyTransposeAdd'> = {
+    multiply: (x, out) => void data.multiply(x, out),
+    multiplyTransposeAdd: (u, out) => void dataT.multiplyAdd(u, out),
+  };
   const coefficients = (st: Int32Array, alpha: number) => {
     const c = new Float64Array(st.length);
     for (let r = 0; r < st.length; r += 3) {
@@ -150,7 +160,7 @@ export function buildStep(inp: StepInputs, stencils: Stencils, Gu: CsrMatrix): S
     m,
     n,
     apply(y, out) {
-      data.multiply(y, out); // writes out[0 … nd−1]
+      products.multiply(y, out); // writes out[0 … nd−1]
       let row = nd;
       const st1 = stencils.horizontal;
       for (let r = 0; r < st1.length; r += 3) out[row++] = hc[r] * y[st1[r]] + hc[r + 1] * y[st1[r + 1]] + hc[r + 2] * y[st1[r + 2]];
@@ -161,7 +171,7 @@ export function buildStep(inp: StepInputs, stencils: Stencils, Gu: CsrMatrix): S
     applyTranspose(u, out) {
       const base = nd + nh + nv;
       for (let j = 0; j < n; j++) out[j] = damp[j] * u[base + j];
-      dataT.multiplyAdd(u, out); // reads u[0 … nd−1]
+      products.multiplyTransposeAdd(u, out); // reads u[0 … nd−1]
       let row = nd;
       const st1 = stencils.horizontal;
       for (let r = 0; r < st1.length; r += 3) {
@@ -179,5 +189,14 @@ export function buildStep(inp: StepInputs, stencils: Stencils, Gu: CsrMatrix): S
       }
     },
   };
-  return { operator, rhs, columnScale };
+  return {
+    operator,
+    rhs,
+    columnScale,
+    data,
+    dataT,
+    useProducts: (p) => {
+      products = p;
+    },
+  };
 }

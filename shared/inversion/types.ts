@@ -2,6 +2,7 @@
  * The inversion's inputs, hooks and outputs (shared/inversion/README.md). SI units inside
  * (m, s, m/s), like the engine; milliseconds only where a name says so.
  */
+import type { CsrMatrix } from './csr';
 import type { Grid } from '../grid';
 import type { Point } from '../eikonal';
 
@@ -69,6 +70,18 @@ export interface ForwardResult {
 /** Solves every shot on a velocity model (in this thread or on a pool of threads). */
 export interface ForwardModeller {
   forward(velocity: Float32Array): Promise<ForwardResult>;
+  /**
+   * Optional: the products with one step's data matrix A (and its transpose At) on more than one
+   * thread, for LSQR. Results must equal A.multiply and At.multiplyAdd's exactly. Absent: this thread.
+   */
+  products?(A: CsrMatrix, At: CsrMatrix): Promise<MatrixProducts>;
+}
+
+/** out = A·x over A's rows; out += Aᵀ·u over A's columns; release() when the step is solved. */
+export interface MatrixProducts {
+  multiply(x: Float64Array, out: Float64Array): void;
+  multiplyTransposeAdd(u: Float64Array, out: Float64Array): void;
+  release(): void;
 }
 
 export interface IterationRecord {

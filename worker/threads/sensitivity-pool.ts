@@ -8,6 +8,7 @@ import Piscina from 'piscina';
 import { joinShots } from '../../shared/inversion/forward';
 import type { ForwardModeller, InversionProblem } from '../../shared/inversion/types';
 import { workerExecArgv } from './exec-argv';
+import { MatrixProductThread } from './matrix-products';
 import type { SensitivityTask, SensitivityTaskResult } from './sensitivity-shot';
 
 export class ForwardStepError extends Error {
@@ -21,6 +22,8 @@ let nextModelKey = 1;
 
 export class SensitivityPool {
   private readonly pool: Piscina<SensitivityTask, SensitivityTaskResult>;
+  /** LSQR's matrix products on a second thread, made when first needed (two threads or more). */
+  private productThread: MatrixProductThread | null = null;
 
   constructor(readonly threads = Math.max(1, availableParallelism())) {
     this.pool = new Piscina({
@@ -57,10 +60,11 @@ export class SensitivityPool {
           }),
         );
       },
+      products: this.threads > 1 ? (A, At) => (this.productThread ??= new MatrixProductThread()).prepare(A, At) : undefined,
     };
   }
 
   async close(): Promise<void> {
-    await this.pool.destroy();
+    await Promise.all([this.pool.destroy(), this.productThread?.close()]);
   }
 }
