@@ -8,6 +8,7 @@
  */
 import { dippingCase, gradientCase, homogeneousCase, SIZES, twoLayerCase, twoLayerModelCase, type BenchCase } from './bench/cases';
 import { calibrate } from './bench/calibrate';
+import { buildCompiledReference, checksumAgreement, compareWithCompiled } from './bench/compiled-reference';
 import { runCase, type BenchResult } from './bench/measure';
 
 interface Args {
@@ -96,6 +97,7 @@ function main(): void {
 
 function printCalibration(quick: boolean): void {
   const c = gradientCase(...(quick ? SIZES[1] : SIZES[2]));
+  printCompiledComparison(c, quick);
   console.log(`\nCalibration on ${c.name}: engine and a plain first-order fast marcher (binary heap), timed alternately`);
   for (const order of [1, 2] as const) {
     const k = calibrate(c, order, quick ? 5 : 15);
@@ -103,6 +105,25 @@ function printCalibration(quick: boolean): void {
     console.log(
       `  order ${order}: engine ${(k.engineSeconds * 1000).toFixed(1)} ms, plain ${(k.plainSeconds * 1000).toFixed(1)} ms ` +
         `(${plainRate.toFixed(2)} Mnodes/s); engine costs ${k.costRatio.toFixed(2)}× the plain solve`,
+    );
+  }
+}
+
+/** The engine's speed as a fraction of a compiled C fast marcher's on the same grid (issue target: ≥ 0.7 at order 2). */
+function printCompiledComparison(c: BenchCase, quick: boolean): void {
+  const built = buildCompiledReference();
+  if ('error' in built) {
+    console.log(`\nCompiled reference skipped: ${built.error}`);
+    return;
+  }
+  const agreement = checksumAgreement(built.binary, c);
+  console.log(`\nCompiled reference on ${c.name}: scripts/bench/plain-fmm.c (gcc -O2, binary heap, one thread), timed alternately with the engine`);
+  console.log(`  its first-order times agree with the TypeScript plain marcher's to ${agreement.toExponential(1)} (sum over the grid)`);
+  for (const order of [1, 2] as const) {
+    const k = compareWithCompiled(built.binary, c, order, quick ? 3 : 9);
+    console.log(
+      `  order ${order}: engine ${(k.engineSeconds * 1000).toFixed(1)} ms, compiled ${(k.compiledSeconds * 1000).toFixed(1)} ms; ` +
+        `engine speed = ${k.speedRatio.toFixed(2)}× the compiled solver's`,
     );
   }
 }
