@@ -1,0 +1,6 @@
+/** Layer methods (intercept time, plus–minus, GRM) on a line's picks: shared/layers/README.md. */
+export type * from './types';
+export { LayerInputError } from './types';
+export { interpretLayers } from './interpret';
+export { assignRefractors } from './assign';
+export { layeredModelFromResult } from './to-model';
