@@ -15,6 +15,7 @@ import { CONTRAST_RATIO, DEFAULT_INTERFACE_RULE, type InterfaceRule } from './ce
 import { IndexedMinHeap } from './heap';
 import { ModelCells } from './model-cells';
 import { startTimes } from './source';
+import { sourceHorizon, surfaceTangents } from './surface';
 import { AIR, FAR, march, TRIAL } from './march';
 import type { Point, SolveOptions, VelocityField } from './types';
 import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
@@ -41,6 +42,9 @@ export class TravelTimeSolver {
 
   private heap: IndexedMinHeap;
   private cells = new ModelCells();
+  /** The surface's direction per column for the last ground mask (kept while the mask is the same array with the same count). */
+  private tangents: { active: Uint8Array; ground: number; cos: Float64Array; sin: Float64Array; top: Float64Array } | null = null;
+  private horizon: Float64Array;
 
   constructor(grid: Grid) {
     validateGrid(grid); // before allocating: an oversized grid is an input error, not a crash
@@ -52,6 +56,7 @@ export class TravelTimeSolver {
     this.state = new Uint8Array(bordered).fill(AIR); // the border stays AIR for good
     this.safe = new Float64Array(bordered);
     this.heap = new IndexedMinHeap(bordered);
+    this.horizon = new Float64Array(grid.nx);
   }
 
   /** Travel times (s) from `source`; Infinity at air nodes and ground not connected to the source. */
@@ -101,9 +106,20 @@ export class TravelTimeSolver {
       anyContrast: this.cells.anyContrast,
       F, state, cellS, cellC, heap,
       safe: this.safe,
+      ...this.tangentsFor(grid, active),
+      horizon: sourceHorizon(grid, this.tangents!.top, source, this.horizon),
     });
     copyTimes(F, T, nx);
     return T;
+  }
+
+  private tangentsFor(grid: Grid, active: Uint8Array): { surfaceCos: Float64Array; surfaceSin: Float64Array } {
+    const ground = countGround(active);
+    if (this.tangents?.active !== active || this.tangents?.ground !== ground) {
+      this.tangents = { active, ground, ...surfaceTangents(grid, active) };
+    }
+    const t = this.tangents!;
+    return { surfaceCos: t.cos, surfaceSin: t.sin };
   }
 }
 
@@ -149,4 +165,10 @@ export function solveTravelTimes(
   options?: SolveOptions,
 ): Float64Array {
   return new TravelTimeSolver(grid).solve(velocity, active, source, options);
+}
+
+function countGround(active: Uint8Array): number {
+  let n = 0;
+  for (let i = 0; i < active.length; i++) n += active[i];
+  return n;
 }

@@ -6,7 +6,12 @@
  * clamped to the range of the four cell corners so a kink (direct wave meeting a head wave)
  * cannot overshoot; bilinear when the block touches air. A cell with air corners (a geophone
  * on the ground surface) is handled by first-order Taylor extrapolation from each ground corner,
- * T(c) + ∇T(c)·(p − c), blended with the bilinear weights of those corners.
+ * T(c) + ∇T(c)·(p − c), blended with the bilinear weights of those corners. *
+ * Given the source, the time is sampled in factored form: U = T / r (r the distance to the
+ * source) is interpolated and multiplied by r at the point. U is smooth where T curves sharply —
+ * near the source and along a sloping surface, where T's own interpolation or extrapolation from
+ * the grid's staircase is off by up to a tenth of a millisecond at 0.5 m nodes — and constant in
+ * uniform ground, where the sample is then exact (the factored form of Fomel, Luo & Zhao 2009).
  */
 import type { Grid } from '../grid';
 import { EikonalInputError } from './errors';
@@ -24,7 +29,7 @@ function keys(t: number): number {
   return 0;
 }
 
-export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, p: Point): number {
+export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, p: Point, source?: Point): number {
   const { x0, dx, nx, z0, dz, nz } = grid;
   if (times.length !== nx * nz || active.length !== nx * nz) {
     throw new EikonalInputError(`travel times (${times.length}) and ground mask (${active.length}) must both have nx × nz = ${nx * nz} values`);
@@ -38,6 +43,7 @@ export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, 
   const cz = Math.min(nz - 2, Math.max(0, Math.floor(fz)));
   const ux = Math.min(1, Math.max(0, fx - cx));
   const uz = Math.min(1, Math.max(0, fz - cz));
+  if (source) return factoredSample(grid, times, active, p, source, cx, cz, ux, uz);
   const i = cz * nx + cx;
   const c00 = times[i];
   const c10 = times[i + 1];
@@ -84,4 +90,56 @@ export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, 
   if (finite > 0) return tsum / wsum;
   if (!anyActive) throw new EikonalInputError(`point x ${p.x} m, z ${p.z} m is in the air, above the ground surface`);
   return Infinity; // ground the wave cannot reach (cut off from the source by air)
+}
+
+/** T / r at node j (r its distance to the source); at the source itself, the mean of its finite neighbours' values. */
+function factoredValue(grid: Grid, times: Float64Array, j: number, source: Point): number {
+  const { x0, dx, nx, z0, dz } = grid;
+  const ix = j % nx;
+  const iz = (j - ix) / nx;
+  const r = Math.hypot(x0 + ix * dx - source.x, z0 - iz * dz - source.z);
+  if (r > 1e-9 * Math.max(dx, dz)) return times[j] / r;
+  let sum = 0, n = 0;
+  for (const k of [j - 1, j + 1, j - nx, j + nx]) {
+    if (k < 0 || k >= times.length || !Number.isFinite(times[k])) continue;
+    const kx = k % nx;
+    const kz = (k - kx) / nx;
+    sum += times[k] / Math.hypot(x0 + kx * dx - source.x, z0 - kz * dz - source.z);
+    n++;
+  }
+  return n ? sum / n : Number.NaN;
+}
+
+function factoredSample(grid: Grid, times: Float64Array, active: Uint8Array, p: Point, source: Point, cx: number, cz: number, ux: number, uz: number): number {
+  const { nx, nz } = grid;
+  const r = Math.hypot(p.x - source.x, p.z - source.z);
+  const i = cz * nx + cx;
+  const corners = [i, i + 1, i + nx, i + nx + 1];
+  const u = corners.map((j) => (Number.isFinite(times[j]) ? factoredValue(grid, times, j, source) : Number.NaN));
+  if (u.every(Number.isFinite)) {
+    const bilinear = (1 - uz) * ((1 - ux) * u[0] + ux * u[1]) + uz * ((1 - ux) * u[2] + ux * u[3]);
+    if (cx < 1 || cz < 1 || cx > nx - 3 || cz > nz - 3) return bilinear * r;
+    let sum = 0;
+    for (let kz = -1; kz <= 2; kz++) {
+      const wz = keys(uz - kz);
+      for (let kx = -1; kx <= 2; kx++) {
+        const j = i + kz * nx + kx;
+        if (!Number.isFinite(times[j])) return bilinear * r;
+        sum += wz * keys(ux - kx) * factoredValue(grid, times, j, source);
+      }
+    }
+    return Math.min(Math.max(...u), Math.max(Math.min(...u), sum)) * r;
+  }
+  // Some corners are air or unreached: U varies slowly, so the finite corners' values are blended.
+  let wsum = 0, usum = 0, anyActive = false;
+  corners.forEach((j, k) => {
+    if (active[j]) anyActive = true;
+    if (!Number.isFinite(u[k])) return;
+    const w = Math.max(((k & 1) ? ux : 1 - ux) * ((k >> 1) ? uz : 1 - uz), 1e-6);
+    wsum += w;
+    usum += w * u[k];
+  });
+  if (wsum > 0) return (usum / wsum) * r;
+  if (!anyActive) throw new EikonalInputError(`point x ${p.x} m, z ${p.z} m is in the air, above the ground surface`);
+  return Infinity;
 }

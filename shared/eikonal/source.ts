@@ -8,6 +8,12 @@
  * Fomel, Luo & Zhao (2009), "Fast sweeping method for the factored eikonal equation",
  * J. Comput. Phys. 228, 6440–6455; in a fast-marching order as Treister & Haber (2016),
  * "A fast marching algorithm for the factored eikonal equation", J. Comput. Phys. 324, 210–225.
+ *
+ * On sloping ground a ground node beside the source can be nearer to it than any of its ground
+ * neighbours (the next node up the slope, with air on the source's side): the march, which only
+ * moves outward from earlier nodes, would reach it late (measured: 0.45 ms late at 0.5 m on a
+ * 10° slope). So every ground node next to the air within two cells of the source that sees it
+ * through the ground also starts with its straight-ray time.
  */
 import { type Grid, nodeX, nodeZ } from '../grid';
 import { EikonalInputError } from './errors';
@@ -89,6 +95,7 @@ export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Arra
     nodes.push(c);
     times.push((r * (s0 + slowness[c])) / 2);
   }
+  if (!process.env.NOSTART) addSurfaceNeighbours(grid, slowness, active, source, s0, nodes, times);
   let gradX = 0;
   let gradZ = 0;
   if (corners.every((c) => active[c])) {
@@ -101,4 +108,45 @@ export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Arra
     }
   }
   return { nodes, times, slowness: s0, gradX, gradZ };
+}
+
+/** Ground nodes next to the air within two cells of the source that see it through the ground: straight-ray times. */
+function addSurfaceNeighbours(grid: Grid, slowness: Float64Array, active: Uint8Array, source: Point, s0: number, nodes: number[], times: number[]): void {
+  const { nx, nz, dx, dz } = grid;
+  const reach = 2 * Math.max(dx, dz);
+  const cx = Math.round((source.x - grid.x0) / dx);
+  const cz = Math.round((grid.z0 - source.z) / dz);
+  const top = new Map<number, number>(); // column → elevation of its top ground node
+  const topOf = (ix: number): number => {
+    let z = top.get(ix);
+    if (z === undefined) {
+      let iz = 0;
+      while (iz < nz && !active[iz * nx + ix]) iz++;
+      z = iz < nz ? nodeZ(grid, iz) : -Infinity;
+      top.set(ix, z);
+    }
+    return z;
+  };
+  // A point is in the ground when it lies no higher than a cell above the top ground nodes on either side of it.
+  const inGround = (x: number, z: number): boolean => {
+    const f = (x - grid.x0) / dx;
+    const a = Math.max(0, Math.min(nx - 1, Math.floor(f))), b = Math.max(0, Math.min(nx - 1, Math.ceil(f)));
+    return z <= Math.min(topOf(a), topOf(b)) + dz + 1e-9;
+  };
+  for (let iz = Math.max(0, cz - 2); iz <= Math.min(nz - 1, cz + 2); iz++) {
+    for (let ix = Math.max(0, cx - 2); ix <= Math.min(nx - 1, cx + 2); ix++) {
+      const c = iz * nx + ix;
+      if (!active[c] || nodes.includes(c)) continue;
+      const nextToAir = (ix > 0 && !active[c - 1]) || (ix < nx - 1 && !active[c + 1]) || (iz > 0 && !active[c - nx]) || iz === 0;
+      if (!nextToAir) continue;
+      const x = nodeX(grid, ix), z = nodeZ(grid, iz);
+      const r = Math.hypot(x - source.x, z - source.z);
+      if (r > reach) continue;
+      let seen = true;
+      for (let k = 1; k < 8 && seen; k++) seen = inGround(source.x + ((x - source.x) * k) / 8, source.z + ((z - source.z) * k) / 8);
+      if (!seen) continue;
+      nodes.push(c);
+      times.push((r * (s0 + slowness[c])) / 2);
+    }
+  }
 }

@@ -48,7 +48,7 @@ export default function runShot(task: RunShotTask): RunShotResult {
     const tolerance = 0.25 * Math.min(grid.dx, grid.dz);
     for (let i = 0; i < count; i++) {
       const receiver = { x: task.receivers[2 * i], z: task.receivers[2 * i + 1] };
-      times[i] = sampleTime(grid, T, active, receiver);
+      times[i] = sampleTime(grid, T, active, receiver, task.source);
       try {
         rays.push(simplifyPolyline(tracer.tracer.trace(T, receiver, task.source).points, tolerance));
       } catch {

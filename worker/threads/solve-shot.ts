@@ -49,7 +49,7 @@ export function solveShot(task: SolveShotTask): SolveShotResult {
     for (let i = 0; i < times.length; i++) {
       p.x = task.receivers[2 * i];
       p.z = task.receivers[2 * i + 1];
-      times[i] = sampleTime(grid, T, active, p);
+      times[i] = sampleTime(grid, T, active, p, task.source);
     }
     return { ok: true, times, solveSeconds };
   } catch (err) {
