@@ -29,7 +29,7 @@ export interface TracePick {
 
 export type PickOutcome = { ok: true; pick: TracePick } | { ok: false; reason: 'dead' | 'no_arrival' };
 
-const DEFAULTS = { shortWindow: 0.002, longWindow: 0.01, minRatio: 8, minSnr: 2, candidateFraction: 0.25 };
+const DEFAULTS = { shortWindow: 0.002, longWindow: 0.01, minRatio: 8, minSnr: 3, candidateFraction: 0.25 };
 
 /**
  * Picks the first break on one trace: the energy ratio (Allen 1978) finds the arrival, the AIC
@@ -75,11 +75,11 @@ export function isDead(samples: Float64Array): boolean {
   return !(max > min);
 }
 
+/** Removes a DC offset: the median, which oscillating arrivals hardly move (a mean would). */
 function demeaned(samples: Float64Array): Float64Array {
-  let sum = 0;
-  for (const v of samples) sum += v;
-  const mean = sum / samples.length;
-  return samples.map((v) => v - mean);
+  const sorted = Float64Array.from(samples).sort();
+  const median = sorted[sorted.length >> 1];
+  return samples.map((v) => v - median);
 }
 
 /** RMS of the `short·2` samples after the onset over the RMS of the `long` samples before it. */
