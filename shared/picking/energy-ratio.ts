@@ -9,12 +9,9 @@ export function energyRatio(x: Float64Array, from: number, short: number, long: 
   const n = x.length;
   const cum = new Float64Array(n + 1);
   for (let i = 0; i < n; i++) cum[i + 1] = cum[i] + x[i] * x[i];
-  // Floor under the trailing average: the quietest full long window of the trace. Near the start the
-  // trailing window holds only a few samples, and a chance lull there would fake an arrival.
-  let floor = Infinity;
-  for (let i = long; i <= n; i++) floor = Math.min(floor, (cum[i] - cum[i - long]) / long);
-  floor = Number.isFinite(floor) ? floor : cum[n] / Math.max(n, 1);
-  floor = Math.max(floor, (cum[n] / Math.max(n, 1)) * 1e-12, Number.MIN_VALUE); // keeps 0/0 out of silent stretches
+  // Floor under the trailing average: near the start the trailing window holds only a few samples,
+  // and a chance lull there would fake an arrival.
+  const floor = quietestEnergy(x, long);
   const ratio = new Float64Array(n);
   for (let i = Math.max(from, 1); i + short <= n; i++) {
     const lo = Math.max(0, i - long);
@@ -44,4 +41,22 @@ export function triggers(ratio: Float64Array, threshold: number, window: number,
     while (i < ratio.length && ratio[i] >= threshold) i++; // leave this crossing before looking for the next
   }
   return out;
+}
+
+/**
+ * Mean energy of the quietest full window of `long` samples: a floor for the noise level (never 0,
+ * so silent stretches do not divide by zero).
+ */
+export function quietestEnergy(x: Float64Array, long: number): number {
+  const n = x.length;
+  let sum = 0, total = 0;
+  for (let i = 0; i < n; i++) total += x[i] * x[i];
+  let floor = Infinity;
+  for (let i = 0; i < n; i++) {
+    sum += x[i] * x[i];
+    if (i >= long) sum -= x[i - long] * x[i - long];
+    if (i >= long - 1) floor = Math.min(floor, sum / long);
+  }
+  if (!Number.isFinite(floor)) floor = total / Math.max(n, 1);
+  return Math.max(floor, (total / Math.max(n, 1)) * 1e-12, Number.MIN_VALUE);
 }

@@ -1,5 +1,5 @@
 import { aicOnset } from './aic';
-import { energyRatio, triggers } from './energy-ratio';
+import { energyRatio, quietestEnergy, triggers } from './energy-ratio';
 
 export interface PickerOptions {
   /** Short (leading) energy window, s; at least 4 samples. */
@@ -51,9 +51,10 @@ export function pickTrace(samples: Float64Array, sampleInterval: number, delay: 
   // Every rise of the ratio is a candidate; each gets its AIC onset and the SNR around it. The first
   // break is the first candidate that stands out nearly as well as the best one (later arrivals are
   // often stronger; chance bursts of noise are weaker).
+  const noise = Math.sqrt(quietestEnergy(x, long));
   const candidates = triggers(ratio, o.minRatio, short).map((peak) => {
     const index = aicOnset(x, Math.max(shot, peak - long), Math.min(n, peak + short));
-    return { index, snr: localSnr(x, index, short, long) };
+    return { index, snr: localSnr(x, index, short, long, noise) };
   });
   if (!candidates.length) return { ok: false, reason: 'no_arrival' };
   const best = Math.max(...candidates.map((c) => c.snr));
@@ -82,14 +83,14 @@ function demeaned(samples: Float64Array): Float64Array {
   return samples.map((v) => v - median);
 }
 
-/** RMS of the `short·2` samples after the onset over the RMS of the `long` samples before it. */
-function localSnr(x: Float64Array, index: number, short: number, long: number): number {
+/** RMS of the `short·2` samples after the onset over the RMS of the `long` samples before it (at least `noise`, the quietest stretch's RMS). */
+function localSnr(x: Float64Array, index: number, short: number, long: number, noise: number): number {
   const rms = (a: number, b: number) => {
     let s = 0;
     for (let i = a; i < b; i++) s += x[i] * x[i];
     return Math.sqrt(s / Math.max(1, b - a));
   };
-  const before = rms(Math.max(0, index - long), index);
+  const before = Math.max(noise, rms(Math.max(0, index - long), index));
   const after = rms(index, Math.min(x.length, index + 2 * short));
   return before > 0 ? after / before : Infinity;
 }
