@@ -18,10 +18,11 @@ export interface PickerAccuracy {
 
 const quantile = (sorted: number[], p: number): number => sorted[Math.min(sorted.length - 1, Math.ceil(p * sorted.length) - 1)];
 
+const SEED = Number(process.env.PICKER_SEED ?? 1);
 export function measurePicker(snr: number): PickerAccuracy {
   const errors: number[] = [];
   let traces = 0, unpicked = 0, deadPicked = 0;
-  for (const gather of syntheticGathers(snr)) {
+  for (const gather of syntheticGathers(snr, SEED)) {
     for (const trace of gather) {
       traces++;
       const r = pickTrace(trace.samples, SAMPLE_INTERVAL, 0);

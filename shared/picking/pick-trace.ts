@@ -60,7 +60,11 @@ export function pickTrace(samples: Float64Array, sampleInterval: number, delay: 
   const best = Math.max(...candidates.map((c) => c.snr));
   const chosen = candidates.find((c) => c.snr >= Math.max(o.minSnr, best * o.candidateFraction));
   if (!chosen) return { ok: false, reason: 'no_arrival' };
-  const { index, snr } = chosen;
+  const { snr } = chosen;
+  // Refine: the AIC of the first difference within ±1 ms of the onset. A causal arrival starts
+  // at zero amplitude but with a jump in slope, so the difference has a sharper onset than the samples.
+  const near = Math.max(2, Math.round(0.001 / sampleInterval)); // ±1 ms: a refinement, not a new search
+  const index = aicOnset(difference(x), Math.max(shot, chosen.index - near), Math.min(n, chosen.index + near));
   const quality = qualityOf(snr);
   // The onset lies between the last noise sample and the first signal sample: take the midpoint.
   return { ok: true, pick: { time: delay + (index - 0.5) * sampleInterval, index, quality, sigma: sigmaOf(quality, sampleInterval), snr } };
@@ -74,6 +78,12 @@ export function isDead(samples: Float64Array): boolean {
     if (v > max) max = v;
   }
   return !(max > min);
+}
+
+function difference(x: Float64Array): Float64Array {
+  const d = new Float64Array(x.length);
+  for (let i = 1; i < x.length; i++) d[i] = x[i] - x[i - 1];
+  return d;
 }
 
 /** Removes a DC offset: the median, which oscillating arrivals hardly move (a mean would). */
