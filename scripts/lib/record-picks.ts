@@ -62,9 +62,12 @@ function receiverOf(trace: RecordTrace, stations: StationMap | null): { x: numbe
   return trace.receiver ? { x: trace.receiver.x, z: null } : null;
 }
 
+/** A shot id from a file name may hold a comma or a quote: quote it then (FORMATS.md §2 allows quoted fields). */
+const csvField = (text: string): string => (/[",]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
+
 export function formatPickRows(rows: PickRow[]): string {
   const lines = ['shot_id,source_x,source_z,receiver_x,receiver_z,time_ms,sigma_ms'];
-  for (const r of rows) lines.push(`${r.shotId},${r.sourceX},,${r.receiverX},${r.receiverZ ?? ''},${r.timeMs},${r.sigmaMs}`);
+  for (const r of rows) lines.push(`${csvField(r.shotId)},${r.sourceX},,${r.receiverX},${r.receiverZ ?? ''},${r.timeMs},${r.sigmaMs}`);
   return `${lines.join('\n')}\n`;
 }
 

@@ -121,6 +121,16 @@ describe('npm run pick', () => {
     expect(existsSync(out)).toBe(false);
   });
 
+  it('quotes a shot id taken from a file name with a comma or a quote', () => {
+    const odd = join(dir, 'shot "A",1.sg2');
+    writeFileSync(odd, readFileSync(seg2));
+    const r = pick('--records', odd);
+    expect(r.code).toBe(0);
+    const parsed = parsePickText(r.stdout);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    expect(new Set(parsed.picks.map((p) => p.shotId))).toEqual(new Set(['shot "A",1']));
+  });
+
   it('usage errors exit 2', () => {
     expect(pick().code).toBe(2);
     expect(pick('--records', seg2, '--bogus').code).toBe(2);
