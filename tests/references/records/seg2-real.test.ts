@@ -1,5 +1,5 @@
 /**
- * A real SEG-2 file from a recording instrument (../shared/data/seg2-real/, from the test data of a
+ * A real SEG-2 file from a recording instrument (fixtures/records/seg2-real/, a copy of ../shared/data/seg2-real/, from the test data of a
  * general-purpose open-source seismology library, LGPL-3.0, its io/seg2/tests/data/
  * 20130107_103041000.CET.3c.cont.0.*): the published reference values equal stored sample ×
  * DESCALING_FACTOR × 1000 (that library's test compares with relative and absolute tolerance 1e-7).
@@ -9,7 +9,7 @@ import { gunzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { readRecord, scaledSamples } from '../../../shared/records';
 
-const dir = new URL('../../../../shared/data/seg2-real/', import.meta.url);
+const dir = new URL('../../../fixtures/records/seg2-real/', import.meta.url);
 
 describe('a real instrument SEG-2 file', () => {
   const rec = readRecord(new Uint8Array(readFileSync(new URL('three-component-int32.sg2', dir))), 'x.sg2');
