@@ -70,3 +70,22 @@ export function outOfRange(value: number, range: NumberRange): string | null {
  * one 10 km off a 100 m spread is a typo. Common practice, no source.
  */
 export const FAR_FROM_STATIONS_SPACINGS = 3;
+
+/**
+ * FIELD RECORDS (SEG-2 / SEG-Y shot records). One record is one shot on one spread: 12–96 channels
+ * of a few thousand samples in the field (common practice, no source). The limits stop hostile or
+ * corrupt headers (huge counts, pointers past the end) before anything is allocated; a reader never
+ * allocates more samples than the file's bytes can hold.
+ */
+/** Bytes in one record file (a SEG-Y file of many shots may be read too). */
+export const MAX_RECORD_BYTES = 256 * 1024 * 1024;
+/** Traces in one record file. */
+export const MAX_RECORD_TRACES = 10_000;
+/** Samples in one trace (250 s at 0.25 ms). */
+export const MAX_TRACE_SAMPLES = 1_000_000;
+/** Samples in one record file, all traces together (128 MB as Float64). */
+export const MAX_RECORD_SAMPLES = 16_000_000;
+/** Sample intervals (s): 1 µs … 1 s; engineering seismographs record at 0.02–2 ms (common practice, no source). */
+export const SAMPLE_INTERVAL_RANGE: NumberRange = { min: 1e-6, max: 1, unit: 's' };
+/** Recording delays (s), negative for a pre-trigger: well beyond any refraction record. */
+export const RECORD_DELAY_RANGE: NumberRange = { min: -100, max: 100, unit: 's' };

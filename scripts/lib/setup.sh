@@ -28,6 +28,8 @@ ensure_system_packages() {
     case "$extra" in
       chromium) command -v chromium >/dev/null || missing+=(chromium) ;;
       poppler-utils) command -v pdftotext >/dev/null || missing+=(poppler-utils) ;;
+      # Only the SEG-Y reference tests use it (a writer to check our reader against); the product never does.
+      python3-segyio) /usr/bin/python3 -c 'import segyio' 2>/dev/null || missing+=(python3-segyio) ;;
     esac
   done
   if [ ${#missing[@]} -gt 0 ]; then apt_install "${missing[@]}"; fi

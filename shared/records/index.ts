@@ -1,0 +1,10 @@
+export { RecordFormatError } from './errors';
+export type { RecordPoint, RecordTrace, SeismicRecord } from './types';
+export { readRecord, scaledSamples, sampleTime } from './read-record';
+export { readSeg2, looksLikeSeg2 } from './seg2-reader';
+export { writeSeg2, type Seg2TraceInput, type Seg2WriteOptions } from './seg2-writer';
+export type { Seg2FormatCode } from './seg2-samples';
+export { readSegy } from './segy-reader';
+export { writeSegy, type SegyTraceInput, type SegyWriteOptions } from './segy-writer';
+export { ibmToNumber, numberToIbm } from './ibm-float';
+export { ebcdicToText, textToEbcdic } from './ebcdic';
