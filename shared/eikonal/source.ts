@@ -95,7 +95,7 @@ export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Arra
     nodes.push(c);
     times.push((r * (s0 + slowness[c])) / 2);
   }
-  if (!process.env.NOSTART) addSurfaceNeighbours(grid, slowness, active, source, s0, nodes, times);
+  addSurfaceNeighbours(grid, slowness, active, source, s0, nodes, times);
   let gradX = 0;
   let gradZ = 0;
   if (corners.every((c) => active[c])) {
