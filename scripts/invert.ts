@@ -4,7 +4,6 @@
  * worker's inversion job runs, shots on all cores. Exit 0 on success, 1 for bad input files,
  * 2 for usage errors. Messages go to stderr as sentences.
  */
-import { writeFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { validateSolveInput, EikonalInputError } from '../shared/eikonal';
 import { gradientStart, invert, inversionDataProblems, inversionShots, InversionInputError, type InversionResult } from '../shared/inversion';
@@ -14,7 +13,7 @@ import { rasteriseModel } from '../shared/model';
 import { groupPicksByShot, placeShots } from '../shared/picks';
 import { computeResiduals, formatResidualCsv, type ResidualInput } from '../shared/residuals';
 import { ForwardStepError, SensitivityPool } from '../worker/threads/sensitivity-pool';
-import { InputError, pickErrors, readModel, readPicks, runCli, threadCount, UsageError } from './lib/cli-inputs';
+import { InputError, pickErrors, readModel, readPicks, runCli, threadCount, UsageError, writeOutput } from './lib/cli-inputs';
 
 const USAGE = `usage: npm run invert -- --model M.model.json --picks P.picks.csv [--start model|gradient] [--iterations N]
        [--smoothing W] [--vertical-weight R] [--damping D] [--vmin V] [--vmax V] [--order 1|2]
@@ -87,14 +86,6 @@ function readOptions(argv: string[]) {
 
 const round = (v: number, digits: number): number => +v.toFixed(digits);
 
-async function write(path: string, text: string, what: string): Promise<void> {
-  try {
-    await writeFile(path, text);
-  } catch (err) {
-    throw new InputError(`${path}: cannot write the ${what} (${(err as NodeJS.ErrnoException).code ?? (err as Error).message})`);
-  }
-}
-
 async function main(argv: string[]): Promise<void> {
   const t0 = performance.now();
   const opts = readOptions(argv);
@@ -136,7 +127,7 @@ async function main(argv: string[]): Promise<void> {
     await pool.close();
   }
 
-  if (opts.out) await write(opts.out, outModel(model, result), 'model file');
+  if (opts.out) await writeOutput(opts.out, outModel(model, result), 'model file');
   if (opts.residuals) {
     const inputs: ResidualInput[] = [];
     let at = 0;
@@ -146,7 +137,7 @@ async function main(argv: string[]): Promise<void> {
         if (Number.isFinite(computed)) inputs.push({ shotId: shot.shotId, receiverX: p.receiverX, receiverZ: shot.receivers[2 * i + 1], observed: p.time, computed, sigma: p.sigma });
       });
     }
-    await write(opts.residuals, formatResidualCsv(computeResiduals(inputs)), 'residual file');
+    await writeOutput(opts.residuals, formatResidualCsv(computeResiduals(inputs)), 'residual file');
   }
 
   const last = result.history[result.history.length - 1];

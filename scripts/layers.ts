@@ -4,14 +4,14 @@
  * pages use, and no database. M gives the grid and ground surface only. Exit 0 on success,
  * 1 for bad input, 2 for usage errors; messages go to stderr as sentences.
  */
-import { readFile, writeFile } from 'node:fs/promises';
+import { readFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { inversionShots } from '../shared/inversion/problem';
 import { interpretLayers, layeredModelFromResult, LayerInputError, assignRefractors, type LayerMethod, type LayerResult } from '../shared/layers';
 import { median } from '../shared/layers/robust-line';
 import { rasteriseModel } from '../shared/model';
 import { groupPicksByShot, placeShots, type PlacedShot } from '../shared/picks';
-import { InputError, pickErrors, readModel, readPicks, runCli, UsageError } from './lib/cli-inputs';
+import { InputError, pickErrors, readModel, readPicks, runCli, UsageError, writeOutput } from './lib/cli-inputs';
 import { readAssignment } from './lib/assignment-file';
 
 const USAGE = `usage: npm run layers -- --picks P.picks.csv --model M.model.json [--method grm|plus-minus|intercept]
@@ -66,14 +66,6 @@ function readOptions(argv: string[]) {
   };
 }
 
-async function write(path: string, text: string, what: string): Promise<void> {
-  try {
-    await writeFile(path, text);
-  } catch (err) {
-    throw new InputError(`${path}: cannot write the ${what} (${(err as NodeJS.ErrnoException).code ?? (err as Error).message})`);
-  }
-}
-
 const round = (v: number, digits: number): number => +v.toFixed(digits);
 
 function depthsCsv(result: LayerResult): string {
@@ -107,8 +99,8 @@ async function main(argv: string[]): Promise<void> {
   if (!result.depths.length) throw new InputError(`${opts.picks}: no geophone has a depth: no geophone lies between reversed shots on the refractor`);
   if (result.velocities.some((v) => !Number.isFinite(v))) throw new InputError(`${opts.picks}: a layer velocity could not be found from these picks`);
 
-  if (opts.depths) await write(opts.depths, depthsCsv(result), 'depth table');
-  if (opts.out) await write(opts.out, `${JSON.stringify(layeredModelFromResult(result, model), null, 1)}\n`, 'model file');
+  if (opts.depths) await writeOutput(opts.depths, depthsCsv(result), 'depth table');
+  if (opts.out) await writeOutput(opts.out, `${JSON.stringify(layeredModelFromResult(result, model), null, 1)}\n`, 'model file');
 
   const deepest = result.depths.filter((d) => d.refractor === result.velocities.length - 1).map((d) => d.depth);
   for (const w of result.warnings) process.stderr.write(`layers: warning: ${w}\n`);

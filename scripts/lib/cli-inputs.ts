@@ -3,7 +3,7 @@
  * messages FORMATS.md promises: the file name, then the JSON path or the line and column.
  */
 import { createReadStream } from 'node:fs';
-import { readFile } from 'node:fs/promises';
+import { readFile, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import { formatModelIssues, parseModelFile } from '../../shared/model';
 import { createPickParser, formatPickError, type Pick, type PickError } from '../../shared/picks';
@@ -42,6 +42,15 @@ export async function readModel(path: string) {
   const parsed = parseModelFile(json);
   if (!parsed.ok) throw new InputError(`${path}: the model file has errors:\n${indent(formatModelIssues(parsed.issues))}`);
   return parsed.model;
+}
+
+/** Writes an output file; a failure is an input error naming the file and what it was to hold. */
+export async function writeOutput(path: string, text: string, what: string): Promise<void> {
+  try {
+    await writeFile(path, text);
+  } catch (err) {
+    throw new InputError(`${path}: cannot write the ${what} (${reason(err)})`);
+  }
 }
 
 /** Streams the file through the chunked parser (never holds more than one chunk of text plus the picks). */
