@@ -6,11 +6,14 @@
  * clamped to the range of the four cell corners so a kink (direct wave meeting a head wave)
  * cannot overshoot; bilinear when the block touches air. A cell with air corners (a geophone
  * on the ground surface) is handled by first-order Taylor extrapolation from each ground corner,
- * T(c) + ∇T(c)·(p − c), blended with the bilinear weights of those corners.
+ * T(c) + ∇T(c)·(p − c), blended with the bilinear weights of those corners. Given the source, it
+ * extrapolates the factored time τ = T/r instead (r the distance to the source) and returns r·τ:
+ * τ is smooth where T is a cone, so a geophone a metre from a shot on sloping ground is not
+ * bent by the cone's curvature (factored form as in source.ts; exact in uniform ground).
  */
 import type { Grid } from '../grid';
 import { EikonalInputError } from './errors';
-import { nodeGradient } from './gradient';
+import { nodeGradient, oneAxis } from './gradient';
 import type { Point } from './types';
 
 const EDGE_TOLERANCE = 1e-9;
@@ -24,7 +27,7 @@ function keys(t: number): number {
   return 0;
 }
 
-export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, p: Point): number {
+export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, p: Point, source?: Point): number {
   const { x0, dx, nx, z0, dz, nz } = grid;
   if (times.length !== nx * nz || active.length !== nx * nz) {
     throw new EikonalInputError(`travel times (${times.length}) and ground mask (${active.length}) must both have nx × nz = ${nx * nz} values`);
@@ -75,8 +78,7 @@ export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, 
     const t = times[j];
     if (!Number.isFinite(t)) continue;
     finite++;
-    nodeGradient(grid, times, cx + kx, cz + kz, grad);
-    const est = t + grad.gx * (ux - kx) * dx + grad.gd * (uz - kz) * dz;
+    const est = source ? factoredEstimate(grid, times, cx + kx, cz + kz, p, source) : taylorEstimate(grid, times, cx + kx, cz + kz, ux - kx, uz - kz);
     const w = Math.max((kx ? ux : 1 - ux) * (kz ? uz : 1 - uz), 1e-6);
     wsum += w;
     tsum += w * Math.max(est, 0);
@@ -84,4 +86,27 @@ export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, 
   if (finite > 0) return tsum / wsum;
   if (!anyActive) throw new EikonalInputError(`point x ${p.x} m, z ${p.z} m is in the air, above the ground surface`);
   return Infinity; // ground the wave cannot reach (cut off from the source by air)
+}
+
+function taylorEstimate(grid: Grid, times: Float64Array, ix: number, iz: number, du: number, dv: number): number {
+  nodeGradient(grid, times, ix, iz, grad);
+  return times[iz * grid.nx + ix] + grad.gx * du * grid.dx + grad.gd * dv * grid.dz;
+}
+
+/** r(p)·(τ(c) + ∇τ(c)·(p − c)) with τ = T/r; plain Taylor when c sits on the source. */
+function factoredEstimate(grid: Grid, times: Float64Array, ix: number, iz: number, p: Point, s: Point): number {
+  const { x0, dx, nx, nz, z0, dz } = grid;
+  const tau = (jx: number, jz: number): number => {
+    if (jx < 0 || jx >= nx || jz < 0 || jz >= nz) return Infinity;
+    const r = Math.hypot(x0 + jx * dx - s.x, z0 - jz * dz - s.z);
+    return times[jz * nx + jx] / r; // Infinity for air or an unreached node
+  };
+  const xc = x0 + ix * dx;
+  const zc = z0 - iz * dz;
+  const rc = Math.hypot(xc - s.x, zc - s.z);
+  if (rc < 1e-9 * Math.max(dx, dz)) return taylorEstimate(grid, times, ix, iz, (p.x - xc) / dx, (zc - p.z) / dz);
+  const t = tau(ix, iz);
+  const gx = oneAxis(tau(ix - 1, iz), t, tau(ix + 1, iz), dx);
+  const gd = oneAxis(tau(ix, iz - 1), t, tau(ix, iz + 1), dz);
+  return Math.hypot(p.x - s.x, p.z - s.z) * (t + gx * (p.x - xc) + gd * (zc - p.z));
 }
