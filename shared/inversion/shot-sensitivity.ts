@@ -70,7 +70,7 @@ export function shotSensitivity(
   for (let i = 0; i < count; i++) {
     p.x = receivers[2 * i];
     p.z = receivers[2 * i + 1];
-    times[i] = sampleTime(grid, T, active, p);
+    times[i] = sampleTime(grid, T, active, p, source);
     let row: { cols: Int32Array; vals: Float32Array } | null = null;
     if (Number.isFinite(times[i])) {
       try {

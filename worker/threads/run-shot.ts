@@ -30,14 +30,14 @@ let tracer: { key: string; tracer: RayTracer } | null = null;
 export default function runShot(task: RunShotTask): RunShotResult {
   const { grid } = task;
   const n = grid.nx * grid.nz;
-  const { velocity, active, cellSlowness } = viewModel(grid, task);
+  const { velocity, active, cellSlowness, surface } = viewModel(grid, task);
   if (!solver || solver.grid.nx !== grid.nx || solver.grid.nz !== grid.nz || solver.grid.dx !== grid.dx || solver.grid.dz !== grid.dz || solver.grid.x0 !== grid.x0 || solver.grid.z0 !== grid.z0) {
     solver = new TravelTimeSolver(grid);
     buffer = new Float64Array(n);
   }
   try {
     const t0 = performance.now();
-    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness }, buffer!);
+    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness, surface }, buffer!);
     const solveSeconds = (performance.now() - t0) / 1000;
 
     if (tracer?.key !== task.modelKey) tracer = { key: task.modelKey, tracer: new RayTracer(grid, velocity, active) };
@@ -48,7 +48,7 @@ export default function runShot(task: RunShotTask): RunShotResult {
     const tolerance = 0.25 * Math.min(grid.dx, grid.dz);
     for (let i = 0; i < count; i++) {
       const receiver = { x: task.receivers[2 * i], z: task.receivers[2 * i + 1] };
-      times[i] = sampleTime(grid, T, active, receiver);
+      times[i] = sampleTime(grid, T, active, receiver, task.source);
       try {
         rays.push(simplifyPolyline(tracer.tracer.trace(T, receiver, task.source).points, tolerance));
       } catch {

@@ -35,21 +35,21 @@ let field: Float64Array | null = null;
 export function solveShot(task: SolveShotTask): SolveShotResult {
   const { grid } = task;
   const n = grid.nx * grid.nz;
-  const { velocity, active, cellSlowness } = viewModel(grid, task);
+  const { velocity, active, cellSlowness, surface } = viewModel(grid, task);
   if (!solver || !sameGrid(solver.grid, grid)) {
     solver = new TravelTimeSolver(grid);
     field = new Float64Array(n);
   }
   try {
     const t0 = performance.now();
-    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness }, field!);
+    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness, surface }, field!);
     const solveSeconds = (performance.now() - t0) / 1000;
     const times = new Float64Array(task.receivers.length / 2);
     const p = { x: 0, z: 0 };
     for (let i = 0; i < times.length; i++) {
       p.x = task.receivers[2 * i];
       p.z = task.receivers[2 * i + 1];
-      times[i] = sampleTime(grid, T, active, p);
+      times[i] = sampleTime(grid, T, active, p, task.source);
     }
     return { ok: true, times, solveSeconds };
   } catch (err) {
