@@ -16,7 +16,8 @@ import { IndexedMinHeap } from './heap';
 import { ModelCells } from './model-cells';
 import { startTimes } from './source';
 import { surfaceStart } from './surface-start';
-import { AIR, FAR, march, TRIAL } from './march';
+import { AIR, FAR, march, TRIAL, type MarchState } from './march';
+import { surfaceLinks } from './surface-links';
 import type { Point, SolveOptions, VelocityField } from './types';
 import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
 
@@ -94,7 +95,7 @@ export class TravelTimeSolver {
       heap.pushOrDecrease(b, startTimesAll[k]);
       state[b] = TRIAL;
     }
-    march({
+    const st: MarchState = {
       nx, nz, stride: nx + 2, dx, dz, x0, z0, xs, zs,
       s0: start.slowness,
       vs: 1 / start.slowness,
@@ -106,7 +107,9 @@ export class TravelTimeSolver {
       anyContrast: this.cells.anyContrast,
       F, state, cellS, cellC, heap,
       safe: this.safe,
-    });
+    };
+    if (options.surface && options.surface.length >= 2) st.afterAccept = surfaceLinks(grid, S, active, options.surface, () => st);
+    march(st);
     copyTimes(F, T, nx);
     return T;
   }

@@ -28,20 +28,32 @@ function surfaceAt(s: readonly Point[], x: number): number {
   return s[lo].z + ((x - s[lo].x) / (s[hi].x - s[lo].x)) * (s[hi].z - s[lo].z);
 }
 
+/** Index of the first vertex with x > `x` (binary search; the polyline is sorted in x). */
+function firstAfter(s: readonly Point[], x: number): number {
+  let lo = 0;
+  let hi = s.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (s[mid].x <= x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
 /** The segment a–b lies at or under the surface polyline (surface minus segment is linear between vertices). */
-function underSurface(s: readonly Point[], a: Point, b: Point): boolean {
+export function segmentInGround(s: readonly Point[], a: Point, b: Point): boolean {
   if (a.z > surfaceAt(s, a.x) + EPS || b.z > surfaceAt(s, b.x) + EPS) return false;
   const l = a.x <= b.x ? a : b;
   const r = a.x <= b.x ? b : a;
-  for (const v of s) {
-    if (v.x <= l.x || v.x >= r.x) continue;
+  for (let k = firstAfter(s, l.x); k < s.length && s[k].x < r.x; k++) {
+    const v = s[k];
     if (l.z + ((v.x - l.x) / (r.x - l.x)) * (r.z - l.z) > v.z + EPS) return false;
   }
   return true;
 }
 
 /** Every node the segment passes within a cell of has the source's slowness (ground, same medium). */
-function uniformAlong(grid: Grid, slowness: Float64Array, active: Uint8Array, a: Point, b: Point, s0: number): boolean {
+export function uniformAlong(grid: Grid, slowness: Float64Array, active: Uint8Array, a: Point, b: Point, s0: number): boolean {
   const { x0, dx, nx, z0, dz, nz } = grid;
   const steps = Math.ceil(2 * Math.max(Math.abs(b.x - a.x) / dx, Math.abs(b.z - a.z) / dz)) + 1;
   for (let k = 0; k <= steps; k++) {
@@ -75,7 +87,7 @@ export function surfaceStart(grid: Grid, slowness: Float64Array, active: Uint8Ar
       if (!active[i]) continue;
       const p = { x: x0 + ix * dx, z: z0 - iz * dz };
       const r = Math.hypot(p.x - source.x, p.z - source.z);
-      if (r > R || !underSurface(surface, source, p) || !uniformAlong(grid, slowness, active, source, p, s0)) continue;
+      if (r > R || !segmentInGround(surface, source, p) || !uniformAlong(grid, slowness, active, source, p, s0)) continue;
       nodes.push(i);
       times.push(r * s0);
     }

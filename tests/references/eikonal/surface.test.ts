@@ -59,3 +59,19 @@ describe('the start region never takes a time through air', () => {
     expect(e.earliestMs).toBeGreaterThan(-0.01);
   });
 });
+
+describe('uniform ground under a hill and a valley (issue 14 targets: max ≤ 0.05 ms, RMS ≤ 0.02 ms)', () => {
+  // 0.5 m grid, surface shots, geophones every 2.5 m; exact = shortest in-ground path / v.
+  it('Gaussian hill', async () => {
+    const { hillCase } = await import('../../../scripts/bench/surface-cases');
+    const e = measureSurfaceCase(hillCase());
+    expect(e.maxMs).toBeLessThanOrEqual(0.05);
+    expect(e.rmsMs).toBeLessThanOrEqual(0.02);
+  });
+  it('V-shaped valley', async () => {
+    const { valleyCase } = await import('../../../scripts/bench/surface-cases');
+    const e = measureSurfaceCase(valleyCase());
+    expect(e.maxMs).toBeLessThanOrEqual(0.05);
+    expect(e.rmsMs).toBeLessThanOrEqual(0.02);
+  });
+});
