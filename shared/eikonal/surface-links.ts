@@ -41,6 +41,7 @@ export function surfaceLinks(grid: Grid, slowness: Float64Array, active: Uint8Ar
       for (let qix = Math.max(0, pix - LINK_RADIUS); qix <= Math.min(nx - 1, pix + LINK_RADIUS); qix++) {
         const qi = qiz * nx + qix;
         if (!near[qi] || (Math.abs(qix - pix) <= 1 && Math.abs(qiz - piz) <= 1)) continue; // neighbours: the march's own stencil
+        if (slowness[qi] !== sp) continue; // cheap first test of "one slowness" (uniformAlong checks the whole segment)
         const qb = (qiz + 1) * stride + qix + 1;
         const kind = state[qb] & KIND;
         if (kind === DONE || kind > DONE) continue;
