@@ -10,6 +10,7 @@ import { dippingCase, gradientCase, homogeneousCase, SIZES, twoLayerCase, twoLay
 import { calibrate } from './bench/calibrate';
 import { buildCompiledReference, checksumAgreement, compareWithCompiled } from './bench/compiled-reference';
 import { runCase, type BenchResult } from './bench/measure';
+import { hillCase, measureSurfaceCase, slopeCase, valleyCase } from './bench/surface-cases';
 
 interface Args {
   json: boolean;
@@ -92,7 +93,20 @@ function main(): void {
       }
     }
   }
+  if (!args.json) printSurfaceTable(args.filter);
   if (!args.json && !args.filter) printCalibration(args.quick);
+}
+
+/** Uniform ground under topography, surface shots and geophones, exact in-ground path times (issue 14). */
+function printSurfaceTable(filter: string): void {
+  const list = [hillCase, valleyCase, () => slopeCase(10), () => slopeCase(25)].map((f) => f()).filter((c) => !filter || c.name.includes(filter));
+  if (list.length === 0) return;
+  console.log('\nGround surface: uniform 1500 m/s, 0.5 m grid, order 2, geophones read with sampleTime');
+  console.log(['case'.padEnd(24), 'max ms'.padStart(9), 'rms ms'.padStart(9), 'max rel'.padStart(10), 'earliest ms'.padStart(12), 'geophones'.padStart(10)].join(' '));
+  for (const c of list) {
+    const e = measureSurfaceCase(c);
+    console.log([c.name.padEnd(24), e.maxMs.toFixed(4).padStart(9), e.rmsMs.toFixed(4).padStart(9), pct(e.maxRel).padStart(10), e.earliestMs.toFixed(4).padStart(12), String(e.count).padStart(10)].join(' '));
+  }
 }
 
 function printCalibration(quick: boolean): void {

@@ -16,7 +16,9 @@ import { IndexedMinHeap } from './heap';
 import { ModelCells } from './model-cells';
 import { startTimes } from './source';
 import { sourceHorizon, surfaceTangents } from './surface';
-import { AIR, FAR, march, TRIAL } from './march';
+import { surfaceStart } from './surface-start';
+import { AIR, FAR, march, TRIAL, type MarchState } from './march';
+import { surfaceLinks } from './surface-links';
 import type { Point, SolveOptions, VelocityField } from './types';
 import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
 
@@ -84,17 +86,21 @@ export class TravelTimeSolver {
     const xs = source.x;
     const zs = source.z;
     const start = startTimes(grid, S, active, source, ratio);
-    for (let k = 0; k < start.nodes.length; k++) {
-      const i = start.nodes[k];
+    const near = options.surface ? surfaceStart(grid, S, active, source, start.slowness, options.surface) : { nodes: [], times: [] };
+    const startNodes = start.nodes.concat(near.nodes);
+    const startTimesAll = start.times.concat(near.times);
+    for (let k = 0; k < startNodes.length; k++) {
+      const i = startNodes[k];
       const ix = i % nx;
       const iz = (i - ix) / nx;
       const b = (iz + 1) * (nx + 2) + ix + 1; // on the bordered grid
-      F[3 * b] = start.times[k];
+      if (state[b] === TRIAL && F[3 * b] <= startTimesAll[k]) continue; // a node in both lists keeps the earlier time
+      F[3 * b] = startTimesAll[k];
       F[3 * b + 1] = Math.hypot(x0 + ix * dx - xs, z0 - iz * dz - zs); // r, as march keeps it
-      heap.pushOrDecrease(b, start.times[k]);
+      heap.pushOrDecrease(b, startTimesAll[k]);
       state[b] = TRIAL;
     }
-    march({
+    const st: MarchState = {
       nx, nz, stride: nx + 2, dx, dz, x0, z0, xs, zs,
       s0: start.slowness,
       vs: 1 / start.slowness,
@@ -108,7 +114,9 @@ export class TravelTimeSolver {
       safe: this.safe,
       ...this.tangentsFor(grid, active),
       horizon: sourceHorizon(grid, this.tangents!.top, source, this.horizon),
-    });
+    };
+    if (options.surface && options.surface.length >= 2) st.afterAccept = surfaceLinks(grid, S, active, options.surface, () => st);
+    march(st);
     copyTimes(F, T, nx);
     return T;
   }

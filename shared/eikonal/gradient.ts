@@ -19,7 +19,7 @@ export function nodeGradient(grid: Grid, times: Float64Array, ix: number, iz: nu
   out.gd = oneAxis(u, t, d, dz);
 }
 
-function oneAxis(before: number, at: number, after: number, h: number): number {
+export function oneAxis(before: number, at: number, after: number, h: number): number {
   const fb = Number.isFinite(before);
   const fa = Number.isFinite(after);
   if (fb && fa) return (after - before) / (2 * h);

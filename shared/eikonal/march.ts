@@ -57,6 +57,8 @@ export interface MarchState {
   surfaceSin: Float64Array;
   /** Per column, the steepest rise from the source that still sees it through the ground (surface.ts sourceHorizon). */
   horizon: Float64Array;
+  /** Optional extra updates after a node's acceptance (surface-links.ts); off when absent. */
+  afterAccept?: (p: number) => void;
 }
 
 /** Node kinds in the low two bits of `state`. */
@@ -64,9 +66,9 @@ export const FAR = 0;
 export const TRIAL = 1;
 export const DONE = 2;
 export const AIR = 3;
-const KIND = 3;
+export const KIND = 3;
 /** Flag: the node's key is a provisional near-axis value (its safe minimum is in `safe`). */
-const PROVISIONAL = 4;
+export const PROVISIONAL = 4;
 /** Flag: the node has had a causal two-axis candidate. */
 const HAS_TWO = 8;
 
@@ -92,6 +94,7 @@ export function march(m: MarchState): void {
       F[3 * p + 1] = Tp;
     }
     const Up = F[3 * p + 1];
+    if (m.afterAccept) m.afterAccept(p);
 
     for (let dir = 0; dir < 4; dir++) {
       const alongX = dir < 2;

@@ -14,6 +14,12 @@ export interface SolveOptions {
    * interface lies.
    */
   cellSlowness?: Float32Array | Float64Array;
+  /**
+   * The ground surface polyline (x increasing; the model's surface, RasterModel.surface). With it,
+   * ground nodes near the source that see it through ground get exact straight-ray times
+   * (surface-start.ts), so shots on sloping ground are not late along the surface.
+   */
+  surface?: readonly Point[];
 }
 
 /** Node velocities as either precision; solves always run in Float64. */

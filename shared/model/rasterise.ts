@@ -40,6 +40,8 @@ export interface RasterModel {
    * it where it sees a velocity contrast, so an interface between node rows acts where it is drawn.
    */
   cellSlowness?: Float32Array;
+  /** The surface polyline as points, when the file has one (the solver's start region follows it: SolveOptions.surface). */
+  surface?: { x: number; z: number }[];
 }
 
 export function rasteriseModel(model: ModelFile): RasterModel {
@@ -68,7 +70,7 @@ export function rasteriseModel(model: ModelFile): RasterModel {
   }
   fillAirFromBelow(grid, active, velocity);
   const cellSlowness = model.layers ? interfaceCellSlowness(grid, model.layers, surfaceZ, layerOf, active) : undefined;
-  return { grid, velocity, active, surfaceZ, cellSlowness };
+  return { grid, velocity, active, surfaceZ, cellSlowness, ...(surface ? { surface: surface.map(([x, z]) => ({ x, z })) } : {}) };
 }
 
 /**

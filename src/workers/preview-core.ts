@@ -16,6 +16,8 @@ export interface ShotInput {
   active: Uint8Array;
   /** Layered models: slowness of the cells an interface crosses (RasterModel.cellSlowness). */
   cellSlowness?: Float32Array;
+  /** Ground surface polyline (RasterModel.surface): the solver's start region follows it. */
+  surface?: Point[];
   source: Point;
   receivers: Float64Array;
   order: 1 | 2;
@@ -43,7 +45,7 @@ export class PreviewEngine {
     const { grid, velocity, active } = input;
     if (!this.solver || !sameGrid(this.solver.grid, grid)) this.solver = new TravelTimeSolver(grid);
     const t0 = performance.now();
-    const times = this.solver.solve(velocity, active, input.source, { order: input.order, cellSlowness: input.cellSlowness });
+    const times = this.solver.solve(velocity, active, input.source, { order: input.order, cellSlowness: input.cellSlowness, surface: input.surface });
     const receiverTimes = receiverTimesOf(grid, times, active, input.receivers, input.source);
     const t1 = performance.now();
     let tMax = 0;
@@ -55,7 +57,7 @@ export class PreviewEngine {
 }
 
 /** sampleTime at each receiver; a receiver the wave cannot reach (or that lies off the model) gets Infinity. */
-export function receiverTimesOf(grid: Grid, times: Float64Array, active: Uint8Array, receivers: Float64Array, source?: { x: number; z: number }): Float64Array {
+export function receiverTimesOf(grid: Grid, times: Float64Array, active: Uint8Array, receivers: Float64Array, source?: Point): Float64Array {
   const out = new Float64Array(receivers.length / 2);
   const p = { x: 0, z: 0 };
   for (let i = 0; i < out.length; i++) {

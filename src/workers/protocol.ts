@@ -9,6 +9,8 @@ export interface PreviewRequest {
   active: Uint8Array;
   /** Layered models: slowness of the cells an interface crosses (RasterModel.cellSlowness). */
   cellSlowness?: Float32Array;
+  /** Ground surface polyline (RasterModel.surface): the solver's start region follows it. */
+  surface?: { x: number; z: number }[];
   source: Point;
   /** Receiver positions, interleaved x, z. */
   receivers: Float64Array;

@@ -30,14 +30,14 @@ let tracer: { key: string; tracer: RayTracer } | null = null;
 export default function runShot(task: RunShotTask): RunShotResult {
   const { grid } = task;
   const n = grid.nx * grid.nz;
-  const { velocity, active, cellSlowness } = viewModel(grid, task);
+  const { velocity, active, cellSlowness, surface } = viewModel(grid, task);
   if (!solver || solver.grid.nx !== grid.nx || solver.grid.nz !== grid.nz || solver.grid.dx !== grid.dx || solver.grid.dz !== grid.dz || solver.grid.x0 !== grid.x0 || solver.grid.z0 !== grid.z0) {
     solver = new TravelTimeSolver(grid);
     buffer = new Float64Array(n);
   }
   try {
     const t0 = performance.now();
-    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness }, buffer!);
+    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness, surface }, buffer!);
     const solveSeconds = (performance.now() - t0) / 1000;
 
     if (tracer?.key !== task.modelKey) tracer = { key: task.modelKey, tracer: new RayTracer(grid, velocity, active) };

@@ -35,14 +35,14 @@ let field: Float64Array | null = null;
 export function solveShot(task: SolveShotTask): SolveShotResult {
   const { grid } = task;
   const n = grid.nx * grid.nz;
-  const { velocity, active, cellSlowness } = viewModel(grid, task);
+  const { velocity, active, cellSlowness, surface } = viewModel(grid, task);
   if (!solver || !sameGrid(solver.grid, grid)) {
     solver = new TravelTimeSolver(grid);
     field = new Float64Array(n);
   }
   try {
     const t0 = performance.now();
-    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness }, field!);
+    const T = solver.solve(velocity, active, task.source, { order: task.order, cellSlowness, surface }, field!);
     const solveSeconds = (performance.now() - t0) / 1000;
     const times = new Float64Array(task.receivers.length / 2);
     const p = { x: 0, z: 0 };

@@ -60,6 +60,7 @@ class PreviewLink {
       velocity: job.raster.velocity.slice(),
       active: job.raster.active.slice(),
       cellSlowness: job.raster.cellSlowness?.slice(),
+      surface: job.raster.surface,
       source: job.shot.source,
       receivers: job.shot.receivers.slice(),
       order: 2,
