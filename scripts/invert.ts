@@ -111,7 +111,7 @@ async function main(argv: string[]): Promise<void> {
   const { grid, active } = raster;
   const start = opts.start === 'gradient' ? gradientStart(grid, active, raster.surfaceZ, shots, opts.settings).velocity : raster.velocity;
   // A saved model's own structure (its layers) is kept: the smoothing measures the change from it.
-  const problem = { grid, active, start, shots, settings: opts.settings, smoothingActsOn: opts.start === 'model' ? ('departure' as const) : ('model' as const) };
+  const problem = { grid, active, start, shots, settings: opts.settings, surface: raster.surface, smoothingActsOn: opts.start === 'model' ? ('departure' as const) : ('model' as const) };
   const pool = new SensitivityPool(opts.threads);
   let result: InversionResult;
   try {

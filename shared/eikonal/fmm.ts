@@ -85,7 +85,7 @@ export class TravelTimeSolver {
 
     const xs = source.x;
     const zs = source.z;
-    const start = startTimes(grid, S, active, source, ratio);
+    const start = startTimes(grid, S, active, source, ratio, !options.surface);
     const near = options.surface ? surfaceStart(grid, S, active, source, start.slowness, options.surface) : { nodes: [], times: [] };
     const startNodes = start.nodes.concat(near.nodes);
     const startTimesAll = start.times.concat(near.times);
@@ -116,6 +116,8 @@ export class TravelTimeSolver {
       horizon: sourceHorizon(grid, this.tangents!.top, source, this.horizon),
     };
     if (options.surface && options.surface.length >= 2) st.afterAccept = surfaceLinks(grid, S, active, options.surface, () => st);
+    // Given the surface line, the start region and links follow it exactly; the mask-based candidates stand down.
+    if (options.surface) st.noStaircase = true;
     march(st);
     copyTimes(F, T, nx);
     return T;

@@ -6,16 +6,14 @@
  * clamped to the range of the four cell corners so a kink (direct wave meeting a head wave)
  * cannot overshoot; bilinear when the block touches air. A cell with air corners (a geophone
  * on the ground surface) is handled by first-order Taylor extrapolation from each ground corner,
- * T(c) + ∇T(c)·(p − c), blended with the bilinear weights of those corners. *
- * Given the source, the time is sampled in factored form: U = T / r (r the distance to the
- * source) is interpolated and multiplied by r at the point. U is smooth where T curves sharply —
- * near the source and along a sloping surface, where T's own interpolation or extrapolation from
- * the grid's staircase is off by up to a tenth of a millisecond at 0.5 m nodes — and constant in
- * uniform ground, where the sample is then exact (the factored form of Fomel, Luo & Zhao 2009).
+ * T(c) + ∇T(c)·(p − c), blended with the bilinear weights of those corners. Given the source, it
+ * extrapolates the factored time τ = T/r instead (r the distance to the source) and returns r·τ:
+ * τ is smooth where T is a cone, so a geophone a metre from a shot on sloping ground is not
+ * bent by the cone's curvature (factored form as in source.ts; exact in uniform ground).
  */
 import type { Grid } from '../grid';
 import { EikonalInputError } from './errors';
-import { nodeGradient } from './gradient';
+import { nodeGradient, oneAxis } from './gradient';
 import type { Point } from './types';
 
 const EDGE_TOLERANCE = 1e-9;
@@ -43,7 +41,6 @@ export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, 
   const cz = Math.min(nz - 2, Math.max(0, Math.floor(fz)));
   const ux = Math.min(1, Math.max(0, fx - cx));
   const uz = Math.min(1, Math.max(0, fz - cz));
-  if (source) return factoredSample(grid, times, active, p, source, cx, cz, ux, uz);
   const i = cz * nx + cx;
   const c00 = times[i];
   const c10 = times[i + 1];
@@ -81,8 +78,7 @@ export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, 
     const t = times[j];
     if (!Number.isFinite(t)) continue;
     finite++;
-    nodeGradient(grid, times, cx + kx, cz + kz, grad);
-    const est = t + grad.gx * (ux - kx) * dx + grad.gd * (uz - kz) * dz;
+    const est = source ? factoredEstimate(grid, times, cx + kx, cz + kz, p, source) : taylorEstimate(grid, times, cx + kx, cz + kz, ux - kx, uz - kz);
     const w = Math.max((kx ? ux : 1 - ux) * (kz ? uz : 1 - uz), 1e-6);
     wsum += w;
     tsum += w * Math.max(est, 0);
@@ -92,54 +88,25 @@ export function sampleTime(grid: Grid, times: Float64Array, active: Uint8Array, 
   return Infinity; // ground the wave cannot reach (cut off from the source by air)
 }
 
-/** T / r at node j (r its distance to the source); at the source itself, the mean of its finite neighbours' values. */
-function factoredValue(grid: Grid, times: Float64Array, j: number, source: Point): number {
-  const { x0, dx, nx, z0, dz } = grid;
-  const ix = j % nx;
-  const iz = (j - ix) / nx;
-  const r = Math.hypot(x0 + ix * dx - source.x, z0 - iz * dz - source.z);
-  if (r > 1e-9 * Math.max(dx, dz)) return times[j] / r;
-  let sum = 0, n = 0;
-  for (const k of [j - 1, j + 1, j - nx, j + nx]) {
-    if (k < 0 || k >= times.length || !Number.isFinite(times[k])) continue;
-    const kx = k % nx;
-    const kz = (k - kx) / nx;
-    sum += times[k] / Math.hypot(x0 + kx * dx - source.x, z0 - kz * dz - source.z);
-    n++;
-  }
-  return n ? sum / n : Number.NaN;
+function taylorEstimate(grid: Grid, times: Float64Array, ix: number, iz: number, du: number, dv: number): number {
+  nodeGradient(grid, times, ix, iz, grad);
+  return times[iz * grid.nx + ix] + grad.gx * du * grid.dx + grad.gd * dv * grid.dz;
 }
 
-function factoredSample(grid: Grid, times: Float64Array, active: Uint8Array, p: Point, source: Point, cx: number, cz: number, ux: number, uz: number): number {
-  const { nx, nz } = grid;
-  const r = Math.hypot(p.x - source.x, p.z - source.z);
-  const i = cz * nx + cx;
-  const corners = [i, i + 1, i + nx, i + nx + 1];
-  const u = corners.map((j) => (Number.isFinite(times[j]) ? factoredValue(grid, times, j, source) : Number.NaN));
-  if (u.every(Number.isFinite)) {
-    const bilinear = (1 - uz) * ((1 - ux) * u[0] + ux * u[1]) + uz * ((1 - ux) * u[2] + ux * u[3]);
-    if (cx < 1 || cz < 1 || cx > nx - 3 || cz > nz - 3) return bilinear * r;
-    let sum = 0;
-    for (let kz = -1; kz <= 2; kz++) {
-      const wz = keys(uz - kz);
-      for (let kx = -1; kx <= 2; kx++) {
-        const j = i + kz * nx + kx;
-        if (!Number.isFinite(times[j])) return bilinear * r;
-        sum += wz * keys(ux - kx) * factoredValue(grid, times, j, source);
-      }
-    }
-    return Math.min(Math.max(...u), Math.max(Math.min(...u), sum)) * r;
-  }
-  // Some corners are air or unreached: U varies slowly, so the finite corners' values are blended.
-  let wsum = 0, usum = 0, anyActive = false;
-  corners.forEach((j, k) => {
-    if (active[j]) anyActive = true;
-    if (!Number.isFinite(u[k])) return;
-    const w = Math.max(((k & 1) ? ux : 1 - ux) * ((k >> 1) ? uz : 1 - uz), 1e-6);
-    wsum += w;
-    usum += w * u[k];
-  });
-  if (wsum > 0) return (usum / wsum) * r;
-  if (!anyActive) throw new EikonalInputError(`point x ${p.x} m, z ${p.z} m is in the air, above the ground surface`);
-  return Infinity;
+/** r(p)·(τ(c) + ∇τ(c)·(p − c)) with τ = T/r; plain Taylor when c sits on the source. */
+function factoredEstimate(grid: Grid, times: Float64Array, ix: number, iz: number, p: Point, s: Point): number {
+  const { x0, dx, nx, nz, z0, dz } = grid;
+  const tau = (jx: number, jz: number): number => {
+    if (jx < 0 || jx >= nx || jz < 0 || jz >= nz) return Infinity;
+    const r = Math.hypot(x0 + jx * dx - s.x, z0 - jz * dz - s.z);
+    return times[jz * nx + jx] / r; // Infinity for air or an unreached node
+  };
+  const xc = x0 + ix * dx;
+  const zc = z0 - iz * dz;
+  const rc = Math.hypot(xc - s.x, zc - s.z);
+  if (rc < 1e-9 * Math.max(dx, dz)) return taylorEstimate(grid, times, ix, iz, (p.x - xc) / dx, (zc - p.z) / dz);
+  const t = tau(ix, iz);
+  const gx = oneAxis(tau(ix - 1, iz), t, tau(ix + 1, iz), dx);
+  const gd = oneAxis(tau(ix, iz - 1), t, tau(ix, iz + 1), dz);
+  return Math.hypot(p.x - s.x, p.z - s.z) * (t + gx * (p.x - xc) + gd * (zc - p.z));
 }

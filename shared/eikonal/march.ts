@@ -59,6 +59,8 @@ export interface MarchState {
   horizon: Float64Array;
   /** Optional extra updates after a node's acceptance (surface-links.ts); off when absent. */
   afterAccept?: (p: number) => void;
+  /** The exact surface is handled by afterAccept and the start region: skip the mask-based candidates. */
+  noStaircase?: boolean;
 }
 
 /** Node kinds in the low two bits of `state`. */
@@ -74,6 +76,7 @@ const HAS_TWO = 8;
 
 export function march(m: MarchState): void {
   const { nx, nz, stride, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, F, state, cellS, cellC, heap, safe, vs, gx, gz, surfaceCos, surfaceSin, horizon } = m;
+  const noStaircase = m.noStaircase === true;
   const nearAxisOn = factored;
   const ncx = nx - 1;
   const invStride = 1 / stride;
@@ -190,7 +193,7 @@ export function march(m: MarchState): void {
       //    share along the surface's tangent; steps along x where the surface dips under 45°, and
       //    up a step of the staircase.
       if (
-        sEdge === sq &&
+        !noStaircase && sEdge === sq &&
         // Air above (the grid's top row counts: with no surface given the ground starts there) or beside, inside the grid.
         ((state[q - stride] & KIND) === AIR || (qix > 0 && (state[q - 1] & KIND) === AIR) || (qix < nx - 1 && (state[q + 1] & KIND) === AIR))
       ) {

@@ -64,7 +64,7 @@ export interface SourceStart {
 }
 
 /** Straight-ray times to the active corners of the source cell. `slowness` is per node (s/m). */
-export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Array, source: Point, contrastRatio: number): SourceStart {
+export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Array, source: Point, contrastRatio: number, nearSurface = true): SourceStart {
   const { cx, cz, ux, uz } = locateSourceCell(grid, active, source);
   const nx = grid.nx;
   const base = cz * nx + cx;
@@ -95,7 +95,7 @@ export function startTimes(grid: Grid, slowness: Float64Array, active: Uint8Arra
     nodes.push(c);
     times.push((r * (s0 + slowness[c])) / 2);
   }
-  addSurfaceNeighbours(grid, slowness, active, source, s0, nodes, times);
+  if (nearSurface) addSurfaceNeighbours(grid, slowness, active, source, s0, nodes, times);
   let gradX = 0;
   let gradZ = 0;
   if (corners.every((c) => active[c])) {

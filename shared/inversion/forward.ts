@@ -39,7 +39,7 @@ export function inProcessModeller(problem: InversionProblem): ForwardModeller {
     async forward(velocity) {
       const key = {};
       const parts = problem.shots.map((shot) =>
-        shotSensitivity(ws, velocity, problem.active, shot.source, shot.receivers, problem.settings.order, key),
+        shotSensitivity(ws, velocity, problem.active, shot.source, shot.receivers, problem.settings.order, key, problem.surface),
       );
       return joinShots(problem.grid.nx, parts);
     },

@@ -53,9 +53,10 @@ export function shotSensitivity(
   receivers: Float64Array,
   order: 1 | 2,
   modelKey: unknown,
+  surface?: Point[],
 ): ShotSensitivity {
   const { grid } = ws;
-  const T = ws.solver.solve(velocity, active, source, { order }, ws.field);
+  const T = ws.solver.solve(velocity, active, source, { order, surface }, ws.field);
   if (ws.tracer?.key !== modelKey) ws.tracer = { key: modelKey, tracer: new RayTracer(grid, velocity, active) };
   const tracer = ws.tracer!.tracer;
 

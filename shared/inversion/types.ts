@@ -53,6 +53,8 @@ export interface InversionProblem {
    * layers from the layer methods, a hand-built model), so that its contacts are kept.
    */
   smoothingActsOn?: 'model' | 'departure';
+  /** The ground surface line (RasterModel.surface): the solver then follows it exactly near the surface. */
+  surface?: Point[];
 }
 
 /** Travel times and ray sensitivities for every pick, in problem order (shot by shot). */

@@ -117,7 +117,7 @@ async function buildProblem(row: InversionRow) {
     if (row.start_v0 === null) await dataSource.query('UPDATE inversions SET start_v0 = $2, start_k = $3 WHERE id = $1', [row.id, fit.v0, fit.k]);
   }
   // A saved model's own structure (its layers) is kept: the smoothing measures the change from it.
-  const problem: InversionProblem = { grid: raster.grid, active: raster.active, start, shots, settings: row.settings, smoothingActsOn: row.start_kind === 'model' ? 'departure' : 'model' };
+  const problem: InversionProblem = { grid: raster.grid, active: raster.active, start, shots, settings: row.settings, surface: raster.surface, smoothingActsOn: row.start_kind === 'model' ? 'departure' : 'model' };
   return { problem, placed };
 }
 

@@ -49,7 +49,7 @@ export class SensitivityPool {
         const modelKey = nextModelKey++;
         const parts = await Promise.all(
           shots.map((shot) =>
-            this.pool.run({ grid, velocity, active, modelKey, source: shot.source, receivers: shot.receivers, order: problem.settings.order }),
+            this.pool.run({ grid, velocity, active, modelKey, source: shot.source, receivers: shot.receivers, order: problem.settings.order, surface: problem.surface }),
           ),
         );
         return joinShots(

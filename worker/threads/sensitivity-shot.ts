@@ -16,6 +16,8 @@ export interface SensitivityTask {
   source: Point;
   receivers: Float64Array;
   order: 1 | 2;
+  /** The ground surface line, when the model has one. */
+  surface?: Point[];
 }
 
 export type SensitivityTaskResult = ({ ok: true } & ShotSensitivity) | { ok: false; message: string };
@@ -29,7 +31,7 @@ export default function run(task: SensitivityTask): SensitivityTaskResult {
   try {
     const velocity = new Float32Array(task.velocity, 0, n);
     const active = new Uint8Array(task.active, 0, n);
-    return { ok: true, ...shotSensitivity(ws, velocity, active, task.source, task.receivers, task.order, task.modelKey) };
+    return { ok: true, ...shotSensitivity(ws, velocity, active, task.source, task.receivers, task.order, task.modelKey, task.surface) };
   } catch (err) {
     return { ok: false, message: (err as Error).message };
   }

@@ -52,7 +52,7 @@ function errors(surface: Line, shots: number[], receivers: (sx: number) => numbe
   const rel: number[] = [];
   for (const sx of shots) {
     const source = { x: sx, z: f(sx) };
-    const T = solveTravelTimes(r.grid, r.velocity, r.active, source);
+    const T = solveTravelTimes(r.grid, r.velocity, r.active, source, { surface: r.surface });
     for (const rx of receivers(sx)) {
       const exact = groundPathLength(f, sx, rx) / V;
       const e = sampleTime(r.grid, T, r.active, { x: rx, z: f(rx) }, source) - exact;

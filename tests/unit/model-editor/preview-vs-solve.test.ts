@@ -68,7 +68,7 @@ describe('live preview against the solve command', () => {
       const placed = placePreviewShot(raster, picks.picks, shotId);
       if (!placed.ok) throw new Error(placed.message);
       const { shot } = placed;
-      const field = engine.solveField({ grid: raster.grid, velocity: raster.velocity, active: raster.active, cellSlowness: raster.cellSlowness, source: shot.source, receivers: shot.receivers, order: 2 });
+      const field = engine.solveField({ grid: raster.grid, velocity: raster.velocity, active: raster.active, cellSlowness: raster.cellSlowness, surface: raster.surface, source: shot.source, receivers: shot.receivers, order: 2 });
       shot.picks.forEach((p, i) => {
         expect(ms(field.receiverTimes[i]), `${shotId} at x ${p.receiverX} m`).toBe(cli.get(`${shotId}@${+p.receiverX.toFixed(6)}`));
         compared++;
