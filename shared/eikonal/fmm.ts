@@ -112,25 +112,27 @@ export class TravelTimeSolver {
       anyContrast: this.cells.anyContrast,
       F, state, cellS, cellC, heap,
       safe: this.safe,
-      ...this.tangentsFor(grid, active),
-      horizon: sourceHorizon(grid, this.tangents!.top, source, this.horizon),
+      // Given the surface line, the start region and links follow it exactly; the mask-based
+      // candidates stand down and their per-shot inputs are not worked out.
+      ...(options.surface ? NO_STAIRCASE : this.staircaseInputs(grid, active, source)),
+      noStaircase: options.surface !== undefined,
     };
     if (options.surface && options.surface.length >= 2) st.afterAccept = surfaceLinks(grid, S, active, options.surface, () => st);
-    // Given the surface line, the start region and links follow it exactly; the mask-based candidates stand down.
-    if (options.surface) st.noStaircase = true;
     march(st);
     copyTimes(F, T, nx);
     return T;
   }
 
-  private tangentsFor(grid: Grid, active: Uint8Array): { surfaceCos: Float64Array; surfaceSin: Float64Array } {
+  /** The mask-based surface candidates' inputs: the surface's direction per column (kept per mask) and the shot's horizon. */
+  private staircaseInputs(grid: Grid, active: Uint8Array, source: Point): Pick<MarchState, 'surfaceCos' | 'surfaceSin' | 'horizon'> {
     const ground = countGround(active);
     if (this.tangents?.active !== active || this.tangents?.ground !== ground) {
       this.tangents = { active, ground, ...surfaceTangents(grid, active) };
     }
-    const t = this.tangents!;
-    return { surfaceCos: t.cos, surfaceSin: t.sin };
+    const t = this.tangents;
+    return { surfaceCos: t.cos, surfaceSin: t.sin, horizon: sourceHorizon(grid, t.top, source, this.horizon) };
   }
+
 }
 
 // The per-node passes live in their own small functions: a loop inside solve() itself is compiled
@@ -176,6 +178,8 @@ export function solveTravelTimes(
 ): Float64Array {
   return new TravelTimeSolver(grid).solve(velocity, active, source, options);
 }
+
+const NO_STAIRCASE = { surfaceCos: new Float64Array(0), surfaceSin: new Float64Array(0), horizon: new Float64Array(0) };
 
 function countGround(active: Uint8Array): number {
   let n = 0;
