@@ -105,4 +105,18 @@ describe('npm run layers', () => {
     expect(outside.code).toBe(1);
     expect(outside.stderr).toMatch(/outside the model/);
   }, 60_000);
+
+  it('takes a hand assignment from a file, and refuses a bad one whole with line and column', () => {
+    // Leave every pick of the shot at 23 m out: the answer still comes from the other shots.
+    const good = write('hand.csv', ['shot_id,receiver_x,layer', ...Array.from({ length: 48 }, (_, i) => 2 * i).filter((x) => x !== 23).map((x) => `S23,${x},-1`)].join('\n') + '\n');
+    const ok = layers('--picks', picks, '--model', model, '--assignment', good, '--json');
+    expect(ok.code).toBe(0);
+    expect(Math.abs(JSON.parse(ok.stdout.trim().split('\n').at(-1)!).depth_m.median / 10 - 1)).toBeLessThan(0.05);
+    const bad = write('bad-hand.csv', 'shot_id,receiver_x,layer\nNOPE,2,1\nS23,abc,1\nS23,2,7\n');
+    const r = layers('--picks', picks, '--model', model, '--assignment', bad);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/line 2, shot_id: no shot "NOPE"/);
+    expect(r.stderr).toMatch(/line 3, receiver_x: "abc" is not a number/);
+    expect(r.stderr).toMatch(/line 4, layer: must be a whole number from -1 to 1/);
+  }, 60_000);
 });
