@@ -17,7 +17,7 @@ import { ModelCells } from './model-cells';
 import { startTimes } from './source';
 import { sourceHorizon, surfaceTangents } from './surface';
 import { surfaceStart } from './surface-start';
-import { AIR, FAR, march, TRIAL, type MarchState } from './march';
+import { AIR, airNeighbours, FAR, KIND, march, TRIAL, type MarchState } from './march';
 import { surfaceLinks } from './surface-links';
 import type { Point, SolveOptions, VelocityField } from './types';
 import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
@@ -45,7 +45,7 @@ export class TravelTimeSolver {
   private heap: IndexedMinHeap;
   private cells = new ModelCells();
   /** The surface's direction per column for the last ground mask (kept while the mask is the same array with the same count). */
-  private tangents: { active: Uint8Array; ground: number; cos: Float64Array; sin: Float64Array; top: Float64Array } | null = null;
+  private tangents: { active: Uint8Array; ground: number; cos: Float64Array; sin: Float64Array; top: Float64Array; nearAir: Uint8Array } | null = null;
   private horizon: Float64Array;
 
   constructor(grid: Grid) {
@@ -75,7 +75,10 @@ export class TravelTimeSolver {
     const S = this.slow;
     const F = this.packed;
     const state = this.state;
-    const sameSlowness = resetNodes(velocity, active, nx, S, F, state);
+    // Given the surface line, the start region and links follow it exactly; the mask-based
+    // candidates stand down and their per-shot inputs are not worked out.
+    const staircase = options.surface ? null : this.staircaseInputs(grid, active, source);
+    const sameSlowness = resetNodes(velocity, active, nx, S, F, state, staircase?.nearAir ?? null);
 
     const cells = this.cells.update(grid, S, active, sameSlowness, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, options.cellSlowness);
     const cellS = cells.value;
@@ -94,11 +97,11 @@ export class TravelTimeSolver {
       const ix = i % nx;
       const iz = (i - ix) / nx;
       const b = (iz + 1) * (nx + 2) + ix + 1; // on the bordered grid
-      if (state[b] === TRIAL && F[3 * b] <= startTimesAll[k]) continue; // a node in both lists keeps the earlier time
+      if ((state[b] & KIND) === TRIAL && F[3 * b] <= startTimesAll[k]) continue; // a node in both lists keeps the earlier time
       F[3 * b] = startTimesAll[k];
       F[3 * b + 1] = Math.hypot(x0 + ix * dx - xs, z0 - iz * dz - zs); // r, as march keeps it
       heap.pushOrDecrease(b, startTimesAll[k]);
-      state[b] = TRIAL;
+      state[b] = (state[b] & ~KIND) | TRIAL;
     }
     const st: MarchState = {
       nx, nz, stride: nx + 2, dx, dz, x0, z0, xs, zs,
@@ -112,9 +115,9 @@ export class TravelTimeSolver {
       anyContrast: this.cells.anyContrast,
       F, state, cellS, cellC, heap,
       safe: this.safe,
-      // Given the surface line, the start region and links follow it exactly; the mask-based
-      // candidates stand down and their per-shot inputs are not worked out.
-      ...(options.surface ? NO_STAIRCASE : this.staircaseInputs(grid, active, source)),
+      surfaceCos: staircase?.surfaceCos ?? NONE,
+      surfaceSin: staircase?.surfaceSin ?? NONE,
+      horizon: staircase?.horizon ?? NONE,
       noStaircase: options.surface !== undefined,
     };
     if (options.surface && options.surface.length >= 2) st.afterAccept = surfaceLinks(grid, S, active, options.surface, () => st);
@@ -123,14 +126,14 @@ export class TravelTimeSolver {
     return T;
   }
 
-  /** The mask-based surface candidates' inputs: the surface's direction per column (kept per mask) and the shot's horizon. */
-  private staircaseInputs(grid: Grid, active: Uint8Array, source: Point): Pick<MarchState, 'surfaceCos' | 'surfaceSin' | 'horizon'> {
+  /** The mask-based surface candidates' inputs: per mask the surface's direction per column and the nodes next to the air; per shot the horizon. */
+  private staircaseInputs(grid: Grid, active: Uint8Array, source: Point): Pick<MarchState, 'surfaceCos' | 'surfaceSin' | 'horizon'> & { nearAir: Uint8Array } {
     const ground = countGround(active);
     if (this.tangents?.active !== active || this.tangents?.ground !== ground) {
-      this.tangents = { active, ground, ...surfaceTangents(grid, active) };
+      this.tangents = { active, ground, ...surfaceTangents(grid, active), nearAir: airNeighbours(active, grid.nx, grid.nz) };
     }
     const t = this.tangents;
-    return { surfaceCos: t.cos, surfaceSin: t.sin, horizon: sourceHorizon(grid, t.top, source, this.horizon) };
+    return { surfaceCos: t.cos, surfaceSin: t.sin, nearAir: t.nearAir, horizon: sourceHorizon(grid, t.top, source, this.horizon) };
   }
 
 }
@@ -140,10 +143,11 @@ export class TravelTimeSolver {
 // rest of the solve to the interpreter (seen with node --trace-deopt).
 
 /**
- * Slowness per node and the march's start state: every ground node far, air inactive. Returns
+ * Slowness per node and the march's start state: every ground node far (with its NEAR_AIR flag
+ * when the mask-based surface candidates are on), air inactive. Returns
  * whether every slowness is what `S` already held (the same model as the last solve).
  */
-function resetNodes(velocity: VelocityField, active: Uint8Array, nx: number, S: Float64Array, F: Float64Array, state: Uint8Array): boolean {
+function resetNodes(velocity: VelocityField, active: Uint8Array, nx: number, S: Float64Array, F: Float64Array, state: Uint8Array, nearAir: Uint8Array | null): boolean {
   let same = true;
   for (let i = 0; i < S.length; i++) {
     const si = active[i] ? 1 / velocity[i] : Infinity;
@@ -155,7 +159,7 @@ function resetNodes(velocity: VelocityField, active: Uint8Array, nx: number, S: 
     const b = i + 2 * ((i - ix) / nx) + nx + 3; // (iz + 1)·(nx + 2) + ix + 1
     F[3 * b] = Infinity;
     F[3 * b + 2] = si;
-    state[b] = active[i] ? FAR : AIR;
+    state[b] = active[i] ? FAR | (nearAir === null ? 0 : nearAir[b]) : AIR;
   }
   return same;
 }
@@ -179,7 +183,7 @@ export function solveTravelTimes(
   return new TravelTimeSolver(grid).solve(velocity, active, source, options);
 }
 
-const NO_STAIRCASE = { surfaceCos: new Float64Array(0), surfaceSin: new Float64Array(0), horizon: new Float64Array(0) };
+const NONE = new Float64Array(0);
 
 function countGround(active: Uint8Array): number {
   let n = 0;

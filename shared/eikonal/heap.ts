@@ -14,8 +14,10 @@ export class IndexedMinHeap {
   size = 0;
 
   constructor(nodeCount: number) {
-    this.keys = new Float64Array(nodeCount);
-    this.nodes = new Int32Array(nodeCount);
+    // One slot more than nodes: pop() parks +Infinity past the last entry, so the smaller child
+    // is chosen without testing whether the right one exists.
+    this.keys = new Float64Array(nodeCount + 1);
+    this.nodes = new Int32Array(nodeCount + 1);
     this.pos = new Int32Array(nodeCount).fill(-1);
   }
 
@@ -41,6 +43,27 @@ export class IndexedMinHeap {
     const keys = this.keys;
     const nodes = this.nodes;
     const pos = this.pos;
+    while (k > 0) {
+      const parent = (k - 1) >> 1;
+      const pk = keys[parent];
+      if (pk <= key) break;
+      keys[k] = pk;
+      const pn = nodes[parent];
+      nodes[k] = pn;
+      pos[pn] = k;
+      k = parent;
+    }
+    keys[k] = key;
+    nodes[k] = node;
+    pos[node] = k;
+  }
+
+  /** Insert a node known not to be in the heap. */
+  insert(node: number, key: number): void {
+    const keys = this.keys;
+    const nodes = this.nodes;
+    const pos = this.pos;
+    let k = this.size++;
     while (k > 0) {
       const parent = (k - 1) >> 1;
       const pk = keys[parent];
@@ -101,16 +124,15 @@ export class IndexedMinHeap {
     if (n === 0) return top;
     const key = keys[n];
     const node = nodes[n];
+    keys[n] = Infinity; // the sentinel: a right child at n is never the smaller
     let k = 0;
     for (;;) {
       let child = 2 * k + 1;
       if (child >= n) break;
-      let ck = keys[child];
-      const right = child + 1;
-      if (right < n && keys[right] < ck) {
-        child = right;
-        ck = keys[right];
-      }
+      // The smaller child as arithmetic, not a branch: which side wins is a coin toss, and a
+      // mispredicted branch per level was a fifth of the heap's time (replayed solve, docs/engine.md).
+      child += (keys[child + 1] < keys[child]) as unknown as number;
+      const ck = keys[child];
       if (ck >= key) break;
       keys[k] = ck;
       const cn = nodes[child];

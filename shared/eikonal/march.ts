@@ -73,10 +73,16 @@ export const KIND = 3;
 export const PROVISIONAL = 4;
 /** Flag: the node has had a causal two-axis candidate. */
 const HAS_TWO = 8;
+/**
+ * Flag, set before the march and kept: a ground node with air above it (the grid's top row counts:
+ * with no surface given the ground starts there) or beside it, inside the grid (airNeighbours).
+ */
+export const NEAR_AIR = 16;
 
 export function march(m: MarchState): void {
   const { nx, nz, stride, dx, dz, x0, z0, xs, zs, s0, factored, second, ratio, anyContrast, F, state, cellS, cellC, heap, safe, vs, gx, gz, surfaceCos, surfaceSin, horizon } = m;
   const noStaircase = m.noStaircase === true;
+  const afterAccept = m.afterAccept;
   const nearAxisOn = factored;
   const ncx = nx - 1;
   const invStride = 1 / stride;
@@ -97,7 +103,7 @@ export function march(m: MarchState): void {
       F[3 * p + 1] = Tp;
     }
     const Up = F[3 * p + 1];
-    if (m.afterAccept) m.afterAccept(p);
+    if (afterAccept !== undefined) afterAccept(p);
 
     for (let dir = 0; dir < 4; dir++) {
       const alongX = dir < 2;
@@ -108,7 +114,8 @@ export function march(m: MarchState): void {
       else qiz += sgn;
       const step = alongX ? sgn : sgn * stride; // index offset p → q (off the grid: a border node, AIR)
       const q = p + step;
-      const kindQ = state[q] & KIND;
+      const stq = state[q];
+      const kindQ = stq & KIND;
       if (kindQ >= DONE) continue;
 
       const xq = x0 + qix * dx;
@@ -195,7 +202,7 @@ export function march(m: MarchState): void {
       if (
         !noStaircase && sEdge === sq &&
         // Air above (the grid's top row counts: with no surface given the ground starts there) or beside, inside the grid.
-        ((state[q - stride] & KIND) === AIR || (qix > 0 && (state[q - 1] & KIND) === AIR) || (qix < nx - 1 && (state[q + 1] & KIND) === AIR))
+        (stq & NEAR_AIR) !== 0
       ) {
         const run = Math.abs(xq - xs);
         const rise = zq - zs;
@@ -272,17 +279,11 @@ export function march(m: MarchState): void {
       // the rays in a velocity gradient). It holds only while the node has no two-axis candidate,
       // since farther out it could undershoot.
       let tau = Infinity;
-      // Cheap pre-check without the logarithm: the reference's across slope vanishes where
-      // e_across = r²·G_across/(2v) (v the reference velocity at q), so only nodes within a few
-      // cells of that line go on to the exact test.
-      const oAcross = alongX ? zq - zs : xq - xs;
-      const hAcross = alongX ? dz : dx;
-      const vq = vs + gx * (xq - xs) + gz * (zq - zs); // reference velocity at q (> 0 near the source)
-      if (nearAxisOn && !two && (state[q] & HAS_TWO) === 0 && sEdge === sq && Math.abs(2 * oAcross * vq - rq * rq * (alongX ? gz : gx)) <= 6 * hAcross * vq) {
+      if (nearAxisOn && !two && (stq & HAS_TWO) === 0 && sEdge === sq && nearReferenceAxis(alongX ? zq - zs : xq - xs, alongX ? dz : dx, vs + gx * (xq - xs) + gz * (zq - zs), rq, alongX ? gz : gx)) {
         // Slope of ln T₀ across the axis; small means q sits within about a cell of the reference's
         // own axis (the line where the across slope vanishes), where no upwind neighbour exists.
         const kappa = referenceLogSlope(xq - xs, zq - zs, gx, gz, vs, alongX);
-        if (Math.abs(kappa) * rq * rq <= hAcross) {
+        if (Math.abs(kappa) * rq * rq <= (alongX ? dz : dx)) {
           const a = aP * aP + kappa * kappa;
           const b = aP * bP;
           const c = bP * bP - sq * sq;
@@ -296,7 +297,7 @@ export function march(m: MarchState): void {
 
       // Key = least safe candidate; a provisional one counts while the node has no two-axis
       // candidate. T holds the key; `safe` keeps the safe minimum only while the key is provisional.
-      let st2 = state[q];
+      let st2 = stq;
       if (two) st2 |= HAS_TWO;
       let key: number;
       if ((st2 & PROVISIONAL) !== 0) {
@@ -328,4 +329,29 @@ export function march(m: MarchState): void {
       state[q] = (st2 & ~KIND) | TRIAL;
     }
   }
+}
+
+/**
+ * Cheap pre-check for the near-axis candidate, without the logarithm: the reference's across slope
+ * vanishes where e_across = r²·G_across/(2v) (v the reference velocity at q, > 0 near the source),
+ * so only nodes within a few cells of that line go on to the exact test.
+ */
+function nearReferenceAxis(oAcross: number, hAcross: number, vq: number, rq: number, gAcross: number): boolean {
+  return Math.abs(2 * oAcross * vq - rq * rq * gAcross) <= 6 * hAcross * vq;
+}
+
+/** NEAR_AIR per node of the bordered grid (0 elsewhere), from the ground mask. */
+export function airNeighbours(active: Uint8Array, nx: number, nz: number): Uint8Array {
+  const stride = nx + 2;
+  const out = new Uint8Array(stride * (nz + 2));
+  for (let iz = 0; iz < nz; iz++) {
+    for (let ix = 0; ix < nx; ix++) {
+      const i = iz * nx + ix;
+      if (!active[i]) continue;
+      const airAbove = iz === 0 || !active[i - nx];
+      const airBeside = (ix > 0 && !active[i - 1]) || (ix < nx - 1 && !active[i + 1]);
+      if (airAbove || airBeside) out[(iz + 1) * stride + ix + 1] = NEAR_AIR;
+    }
+  }
+  return out;
 }
