@@ -81,15 +81,29 @@ export class IndexedMinHeap {
 
   /** Set a node's key up or down (inserting it when absent). */
   update(node: number, key: number): void {
-    const k = this.pos[node];
-    if (k < 0 || key <= this.keys[k]) {
-      this.pushOrDecrease(node, key);
-      return;
-    }
-    // Raise: sift down from slot k.
     const keys = this.keys;
     const nodes = this.nodes;
     const pos = this.pos;
+    let k = pos[node];
+    if (k < 0 || key <= keys[k]) {
+      // Insert (at the end) or lower: sift up from slot k.
+      if (k < 0) k = this.size++;
+      while (k > 0) {
+        const parent = (k - 1) >> 1;
+        const pk = keys[parent];
+        if (pk <= key) break;
+        keys[k] = pk;
+        const pn = nodes[parent];
+        nodes[k] = pn;
+        pos[pn] = k;
+        k = parent;
+      }
+      keys[k] = key;
+      nodes[k] = node;
+      pos[node] = k;
+      return;
+    }
+    // Raise: sift down from slot k.
     const n = this.size;
     let j = k;
     for (;;) {

@@ -103,6 +103,7 @@ export function march(m: MarchState): void {
       F[3 * p + 1] = Tp;
     }
     const Up = F[3 * p + 1];
+    const sp = F[3 * p + 2];
     if (afterAccept !== undefined) afterAccept(p);
 
     for (let dir = 0; dir < 4; dir++) {
@@ -148,7 +149,7 @@ export function march(m: MarchState): void {
       if (second) {
         const p2 = p - step;
         if ((state[p2] & KIND) === DONE && F[3 * p2] <= Tp) {
-          const s1 = F[3 * p + 2];
+          const s1 = sp;
           const s2 = F[3 * p2 + 2];
           let lo = sq < s1 ? sq : s1;
           let hi = sq < s1 ? s1 : sq;
@@ -257,10 +258,13 @@ export function march(m: MarchState): void {
             }
           }
         }
-        const cell = alongX
-          ? (side < 0 ? biz : qiz) * ncx + (qix < pix ? qix : pix)
-          : (qiz < piz ? qiz : piz) * ncx + (side < 0 ? bix : qix);
-        const sc = anyContrast && cellC[cell] !== 0 ? cellS[cell] : sq;
+        let sc = sq;
+        if (anyContrast) {
+          const cell = alongX
+            ? (side < 0 ? biz : qiz) * ncx + (qix < pix ? qix : pix)
+            : (qiz < piz ? qiz : piz) * ncx + (side < 0 ? bix : qix);
+          if (cellC[cell] !== 0) sc = cellS[cell];
+        }
         const a = aP * aP + aB * aB;
         const bb = aP * bP + aB * bB;
         const c = bP * bP + bB * bB - sc * sc;
