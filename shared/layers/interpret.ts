@@ -8,10 +8,11 @@ import { strippedDepth, verticalDepths } from './depth';
 import { grm } from './grm';
 import { interceptRefractor, type BranchLine } from './intercept';
 import { directVelocity } from './overburden';
+import { pairFunctions } from './functions';
 import { plusMinus, type RefractorTimes } from './plus-minus';
 import { median } from './robust-line';
 import { shotSides } from './sides';
-import { LayerInputError, type GeophoneDepth, type LayerOptions, type LayerResult, type LayerShot } from './types';
+import { LayerInputError, type GeophoneDepth, type LayerOptions, type LayerResult, type LayerShot, type RefractorFunctions } from './types';
 
 export function interpretLayers(shots: readonly LayerShot[], surfaceZ: (x: number) => number, options: LayerOptions): LayerResult {
   const layers = options.layers;
@@ -34,6 +35,7 @@ export function interpretLayers(shots: readonly LayerShot[], surfaceZ: (x: numbe
   const interceptLines: BranchLine[][] = [];
   let xy: number | null = null;
   let xyScan: { xy: number; rms: number }[] = [];
+  const functions: RefractorFunctions[] = [];
   for (let n = 1; n < layers; n++) {
     const branches = refractorBranches(shots, assignment, n);
     if (!branches.length) {
@@ -49,17 +51,20 @@ export function interpretLayers(shots: readonly LayerShot[], surfaceZ: (x: numbe
     const pairs = reversedPairs(branches, geophones);
     if (!pairs.length) throw reversedError(n, branches);
     let times: RefractorTimes = plusMinus(pairs);
+    let usedXY = 0;
     if (options.method === 'grm') {
       const depthGuess = median([...times.timeDepth.values()]) / Math.sqrt(Math.max(1e-12, 1 / velocities[n - 1] ** 2 - 1 / times.velocity ** 2));
       const theory = 2 * depthGuess * velocities[n - 1] / Math.sqrt(Math.max(1e-9, times.velocity ** 2 - velocities[n - 1] ** 2));
       const g = grm(pairs, geophones, options.xy !== undefined ? { xy: options.xy } : { maxXY: Math.min(spread / 4, Math.max(2 * spacing, 1.5 * theory)), step: spacing / 2 });
       if (g.timeDepth.size) {
         times = g;
+        usedXY = g.xy;
         if (n === layers - 1) [xy, xyScan] = [g.xy, g.scan];
       }
     }
     velocities.push(times.velocity);
     timeDepths.push(times.timeDepth);
+    functions.push({ refractor: n, xy: usedXY, pairs: pairFunctions(pairs, geophones, usedXY, times.velocity, shots) });
   }
 
   for (let n = 1; n < layers; n++) {
@@ -70,7 +75,7 @@ export function interpretLayers(shots: readonly LayerShot[], surfaceZ: (x: numbe
   warnings.push(...assignmentWarnings(shots, layers));
 
   const depths = options.method === 'intercept' ? interceptDepths(geophones, surfaceZ, velocities, interceptLines, shots) : delayDepths(geophones, surfaceZ, velocities, timeDepths);
-  return { method: options.method, velocities, xy, xyScan, depths, assignment, warnings };
+  return { method: options.method, velocities, xy, xyScan, depths, assignment, warnings, functions };
 }
 
 function reversedError(n: number, branches: { direction: number }[]): LayerInputError {

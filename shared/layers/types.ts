@@ -51,6 +51,26 @@ export interface LayerResult {
   depths: GeophoneDepth[];
   assignment: Assignment;
   warnings: string[];
+  /** Plus–minus and GRM: per refractor, the velocity-analysis and time-depth curves of every reversed pair (for drawing). */
+  functions: RefractorFunctions[];
+}
+
+/** One reversed pair's curves at the XY used (s), per geophone x (m). */
+export interface PairFunctions {
+  forwardShot: string;
+  reverseShot: string;
+  x: number[];
+  /** t_V: slope 1/V along the line. */
+  velocityFn: number[];
+  /** t_G: the delay (time-depth) under the geophone. */
+  timeDepth: number[];
+}
+
+export interface RefractorFunctions {
+  refractor: number;
+  /** The XY the curves are drawn at (0 for plus–minus), m. */
+  xy: number;
+  pairs: PairFunctions[];
 }
 
 export class LayerInputError extends Error {

@@ -72,3 +72,24 @@ describe.each(['grm', 'plus-minus'] as const)('%s on an undulating refractor, en
     expect(quantile(errors, 0.9)).toBeLessThan(0.12);
   });
 });
+
+describe('the drawn curves of a delay-time interpretation (functions.ts)', () => {
+  // Flat two-layer ground, exact times: along the refractor the velocity-analysis function rises
+  // at 1/V2 and every time-depth equals the delay h·cos(i_c)/V1 = h·√(1/V1² − 1/V2²)
+  // (Palmer 1980; Hagedoorn 1959; Telford, Geldart & Sheriff 1990, §4.3): 10 m → 19.365 ms.
+  const survey = planarSurvey(500, 2000, 10, 0, 0);
+  const delay = 10 * Math.sqrt(1 / 500 ** 2 - 1 / 2000 ** 2);
+  for (const method of ['plus-minus', 'grm'] as const) {
+    it(`${method}: t_V has slope 1/V2 and t_G is the delay time under every geophone`, () => {
+      const r = interpretLayers(survey.shots, survey.surfaceZ, { method, layers: 2 });
+      expect(r.functions).toHaveLength(1);
+      const f = r.functions[0];
+      expect(f.xy).toBe(method === 'grm' ? r.xy : 0);
+      expect(f.pairs.length).toBeGreaterThan(0);
+      for (const p of f.pairs) {
+        for (let i = 1; i < p.x.length; i++) expect((p.velocityFn[i] - p.velocityFn[i - 1]) / (p.x[i] - p.x[i - 1])).toBeCloseTo(1 / 2000, 7);
+        for (const t of p.timeDepth) expect(t * 1000).toBeCloseTo(delay * 1000, 1);
+      }
+    });
+  }
+});
