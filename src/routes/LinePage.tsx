@@ -7,6 +7,7 @@ import { ChecksTab } from '../components/line/checks/ChecksTab';
 import { ModelVersionsPanel } from '../components/line/models/ModelVersionsPanel';
 import { LineRunsPanel } from '../components/run/line/LineRunsPanel';
 import { LineInversionsPanel } from '../components/inversion/LineInversionsPanel';
+import { InterpretationTab } from '../components/interpretation/InterpretationTab';
 import { LineTabs, TabPanel, type TabDef } from '../components/line/LineTabs';
 import { PickSetsTab } from '../components/line/picksets/PickSetsTab';
 import { StationsTab } from '../components/line/stations/StationsTab';
@@ -14,15 +15,15 @@ import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
 import { formatDate, ROLE_LABELS } from '../lib/format';
 
-type TabKey = 'stations' | 'picks' | 'checks' | 'models' | 'runs' | 'inversions';
-const TAB_KEYS: TabKey[] = ['stations', 'picks', 'checks', 'models', 'runs', 'inversions'];
+type TabKey = 'stations' | 'picks' | 'checks' | 'layers' | 'models' | 'runs' | 'inversions';
+const TAB_KEYS: TabKey[] = ['stations', 'picks', 'checks', 'layers', 'models', 'runs', 'inversions'];
 
 /** Who may change field data on a line (the server's policy table decides; this only picks the view). */
 const FIELD_EDITORS: ProjectRole[] = ['geophysicist', 'field_tech'];
 
 /**
- * A survey line in six tabs: its stations, its pick sets, the quality checks of one pick set,
- * its velocity model versions, its forward runs and its inversions. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
+ * A survey line in tabs: its stations, its pick sets, the quality checks of one pick set, the
+ * layer methods on a pick set, its velocity model versions, its forward runs and its inversions. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
  * so a link or a reload brings back the same view.
  */
 export function LinePage() {
@@ -67,6 +68,7 @@ export function LinePage() {
     { key: 'stations', label: 'Stations', badge: l.stations.length },
     { key: 'picks', label: 'Pick sets', badge: l.pickSets.length },
     { key: 'checks', label: 'Checks' },
+    { key: 'layers', label: 'Layer methods' },
     { key: 'models', label: 'Models', badge: l.models.length },
     { key: 'runs', label: 'Runs', badge: l.runs.length },
     { key: 'inversions', label: 'Inversions' },
@@ -110,6 +112,11 @@ export function LinePage() {
       {visited.has('checks') && (
         <TabPanel idPrefix={idPrefix} tabKey="checks" hidden={tab !== 'checks'}>
           <ChecksTab line={l} pickSetId={pickSetId} revision={revision} canExclude={canExclude} onChoose={(id, rev) => setParams(checksSearch(id, rev))} />
+        </TabPanel>
+      )}
+      {visited.has('layers') && (
+        <TabPanel idPrefix={idPrefix} tabKey="layers" hidden={tab !== 'layers'}>
+          <InterpretationTab line={l} canSave={l.myRole === 'geophysicist'} />
         </TabPanel>
       )}
       {visited.has('models') && (

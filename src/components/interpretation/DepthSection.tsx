@@ -1,0 +1,58 @@
+import { memo, useMemo } from 'react';
+import type { LayerResult } from '../../../shared/layers';
+import { LazyPlot } from '../plot/LazyPlot';
+import { axisStyle, CHART_FONT } from '../line/plot/chartTheme';
+import { LAYER_COLOURS } from './layerColours';
+
+const CONFIG = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'select2d', 'autoScale2d'] };
+
+/**
+ * The depth section at true scale (1:1): the ground under the geophones and each refractor at its
+ * interpreted elevation, one point per geophone, shots marked on the ground.
+ */
+export const DepthSection = memo(function DepthSection({ result, ground, shots }: { result: LayerResult; ground: { x: number[]; z: number[] }; shots: { x: number; z: number; id: string }[] }) {
+  const data = useMemo(() => {
+    const refractors = [...new Set(result.depths.map((d) => d.refractor))].sort((a, b) => a - b);
+    return [
+      { type: 'scatter', mode: 'lines', name: 'Ground', x: ground.x, y: ground.z, line: { color: '#57534e', width: 2 }, hovertemplate: 'ground at %{x:.2f} m: %{y:.2f} m<extra></extra>' },
+      ...refractors.map((n) => {
+        const pts = result.depths.filter((d) => d.refractor === n).sort((a, b) => a.x - b.x);
+        return {
+          type: 'scatter',
+          mode: 'lines+markers',
+          name: `Refractor ${n} (${Math.round(result.velocities[n])} m/s)`,
+          x: pts.map((d) => d.x),
+          y: pts.map((d) => d.refractorZ),
+          customdata: pts.map((d) => d.depth),
+          marker: { size: 6, color: LAYER_COLOURS[n] },
+          line: { color: LAYER_COLOURS[n], width: 2 },
+          hovertemplate: `refractor ${n} at %{x:.2f} m: elevation %{y:.2f} m, depth %{customdata:.2f} m<extra></extra>`,
+        };
+      }),
+      {
+        type: 'scatter',
+        mode: 'markers',
+        name: 'Shots',
+        x: shots.map((s) => s.x),
+        y: shots.map((s) => s.z),
+        text: shots.map((s) => s.id),
+        marker: { symbol: 'star', size: 11, color: '#292524' },
+        hovertemplate: 'shot %{text} at %{x:.2f} m<extra></extra>',
+      },
+    ];
+  }, [result, ground, shots]);
+  const layout = useMemo(
+    () => ({
+      font: CHART_FONT,
+      margin: { l: 64, r: 16, t: 24, b: 56 },
+      paper_bgcolor: 'white',
+      plot_bgcolor: 'white',
+      hovermode: 'closest',
+      legend: { orientation: 'h', xanchor: 'left', x: 0, yanchor: 'bottom', y: 1.02 },
+      xaxis: { ...axisStyle, title: { text: 'x along the line (m)' } },
+      yaxis: { ...axisStyle, title: { text: 'elevation (m)' }, scaleanchor: 'x', scaleratio: 1 },
+    }),
+    [],
+  );
+  return <LazyPlot height={380} data={data} layout={layout} config={CONFIG} />;
+});
