@@ -4,3 +4,4 @@ export { LayerInputError } from './types';
 export { interpretLayers } from './interpret';
 export { assignRefractors } from './assign';
 export { layeredModelFromResult } from './to-model';
+export { interpretationRecord, readInterpretationRecord, type InterpretationRecord } from './record';

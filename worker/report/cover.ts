@@ -17,7 +17,7 @@ export function drawCover(ctx: ReportContext): void {
   const { input } = ctx;
   drawCoverPage(ctx, input, {
     subtitle: `Forward travel-time model of line ${input.line.name}`,
-    cautions: `${sectionNumber('cautions')}, ${sectionTitle('cautions', input)}`,
+    cautions: `${sectionNumber('cautions', input)}, ${sectionTitle('cautions', input)}`,
     provenance: `Produced with Timefield from run ${input.run.id} (${isoDate(input.run.createdAt)}), model "${input.model.name}" version ${input.model.version}, pick set ${input.run.pickSetFile} revision ${input.run.pickSetRevision}.`,
   });
 }

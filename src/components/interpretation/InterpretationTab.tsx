@@ -4,7 +4,7 @@ import { errorMessage } from '../../api/errors';
 import { lineModelVersions, useModelVersion, useSaveModel } from '../../api/models';
 import { usePickSet } from '../../api/picksets';
 import type { LineDetail } from '../../api/types';
-import { layeredModelFromResult, type LayerMethod, type LayerResult } from '../../../shared/layers';
+import { interpretationRecord, layeredModelFromResult, type LayerMethod, type LayerResult } from '../../../shared/layers';
 import type { ModelFile } from '../../../shared/model';
 import { Button } from '../Button';
 import { SelectField, TextField } from '../Field';
@@ -225,7 +225,7 @@ function Result({ result, line, model, modelId, pickSetName, lineId, canSave, ha
           </div>
         ))}
       <DepthTable result={result} />
-      <SaveAsModel result={result} model={model} modelId={modelId} lineId={lineId} canSave={canSave} comment={`${result.method} on ${pickSetName}${handChanges ? `, ${handChanges} picks assigned by hand` : ''}`} />
+      <SaveAsModel result={result} model={model} modelId={modelId} lineId={lineId} canSave={canSave} picks={pickSetName} handChanges={handChanges} />
     </section>
   );
 }
@@ -263,7 +263,10 @@ function DepthTable({ result }: { result: LayerResult }) {
   );
 }
 
-function SaveAsModel({ result, model, modelId, lineId, canSave, comment }: { result: LayerResult; model: ModelFile; modelId: string; lineId: string; canSave: boolean; comment: string }) {
+function SaveAsModel({ result, model, modelId, lineId, canSave, picks, handChanges }: { result: LayerResult; model: ModelFile; modelId: string; lineId: string; canSave: boolean; picks: string; handChanges: number }) {
+  const comment = `${result.method} on ${picks}${handChanges ? `, ${handChanges} picks assigned by hand` : ''}`;
+  // The record of how it was made travels in the model file, so a report on the model can show it.
+  const layered = () => ({ ...layeredModelFromResult(result, model), interpretation: interpretationRecord(result, picks, handChanges) });
   const save = useSaveModel(lineId);
   const [name, setName] = useState('layers');
   if (!canSave) return <p className="mt-6 text-stone-600">A geophysicist can save this interpretation as a layered model version of the line.</p>;
@@ -282,7 +285,7 @@ function SaveAsModel({ result, model, modelId, lineId, canSave, comment }: { res
     <div className="mt-6 flex flex-wrap items-end gap-4 rounded-lg border border-stone-200 bg-white px-5 py-4">
       <TextField label="Model name" value={name} onChange={(e) => setName(e.target.value)} maxLength={80} data-testid="layers-model-name" />
       <Button
-        onClick={() => save.mutate({ model: layeredModelFromResult(result, model), name: name.trim() || 'layers', comment, basedOn: modelId })}
+        onClick={() => save.mutate({ model: layered(), name: name.trim() || 'layers', comment, basedOn: modelId })}
         busy={save.isPending}
         busyLabel="Saving…"
         data-testid="layers-save"

@@ -12,6 +12,8 @@ import { smallReportInput } from '../../../fixtures/report/small';
 import { renderReportPdf } from '../../../worker/report/render';
 import type { ReportInput } from '../../../worker/report/types';
 import { normalisedLines, pageTexts, pdfInfo } from './poppler';
+import { interpretationRecord, interpretLayers } from '../../../shared/layers';
+import { planarSurvey } from '../../references/layers/surveys';
 
 const dir = mkdtempSync(join(tmpdir(), 'timefield-report-variants-'));
 
@@ -100,3 +102,30 @@ describe('PDF summary variants', () => {
     await expect(renderReportPdf({ ...base, stations: [{ station: 1, x: Number.POSITIVE_INFINITY, z: 50 }] })).rejects.toThrow(/^stations\[0\]\.x/);
   }, 120_000);
 });
+
+describe('PDF summary of a model saved from the layer methods', () => {
+  it('adds the layer interpretation (method named, layer table, depths, limits) and renumbers the sections after it', async () => {
+    // Exact two-layer times (Telford, Geldart & Sheriff 1990, §4.3): V1 500, V2 2000 m/s, refractor 10 m deep.
+    const survey = planarSurvey(500, 2000, 10, 0, 0);
+    const result = interpretLayers(survey.shots, survey.surfaceZ, { method: 'grm', layers: 2 });
+    const base = smallReportInput();
+    const file = { ...base.model.file, interpretation: interpretationRecord(result, 'exact.picks.csv revision 0', 3) };
+    const { flow } = await textOf({ ...base, model: { ...base.model, file } }, 'layers');
+    expect(flow).toContain('4 Layer interpretation behind the model');
+    expect(flow).toContain('generalized reciprocal method (Palmer 1980, 1981)');
+    expect(flow).toContain(`XY = ${plainNumber(result.xy!)} m`);
+    expect(flow).toContain('3 picks were assigned to a refractor by hand');
+    expect(flow).toMatch(/1 \(top\) 500 10\.0 – 10\.0/);
+    expect(flow).toMatch(/2 \(below refractor 1\) 2000 —/);
+    for (const d of result.depths.slice(0, 5)) expect(flow).toContain(`${d.x.toFixed(2)} 1 10.00`);
+    expect(flow).toContain('8 Limitations and cautions');
+    expect(flow).toContain('section 8, Limitations and cautions');
+    expect(flow).not.toMatch(/NaN|Infinity|undefined/);
+
+    const plain = await textOf(base, 'no-layers');
+    expect(plain.flow).not.toContain('Layer interpretation');
+    expect(plain.flow).toContain('7 Limitations and cautions');
+  }, 120_000);
+});
+
+const plainNumber = (v: number) => String(+v.toFixed(2));
