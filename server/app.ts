@@ -11,6 +11,7 @@ import { config } from './config';
 import { passport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import { checkBodyShape } from './http/body-shape';
+import { serveClient } from './http/clientAssets';
 import { errorHandler, notFoundApi } from './http/errors';
 import { smallJsonBody } from './http/json-body';
 import type { Mailer } from './mail/mailer';
@@ -59,8 +60,7 @@ export function createApp({ redis, pgPool, queue, mailer, clientDir = path.resol
   app.use('/api', api);
 
   if (existsSync(path.join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+    serveClient(app, clientDir);
   }
   app.use(errorHandler);
   return app;

@@ -117,6 +117,7 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
     // The stub moves on one iteration per poll: the chart grows while it runs.
     await page.locator('[data-testid="inversion-status"][data-status="running"]').waitFor();
     await page.locator('[data-testid="convergence-chart"][data-points="3"]').waitFor({ timeout: 30_000 });
+    await page.getByTestId('convergence-chart').scrollIntoViewIfNeeded(); // charts load when they come near the screen
     await page.locator('#root .main-svg, .main-svg').first().waitFor({ timeout: 60_000 });
     expect(await page.getByTestId('inversion-progress').textContent()).toMatch(/Iteration \d of at most 15 done/);
     await shot(page, 'inversion-running');
@@ -166,6 +167,7 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
     await page.getByTestId('checkerboard').waitFor();
     expect(await page.getByTestId('checkerboard-correlation').textContent()).toBe('0.71');
     expect(await page.getByTestId('checkerboard').textContent()).toMatch(/Squares of 10 m, ±7%.*partly recovered/s);
+    await page.getByTestId('checkerboard-recovered').scrollIntoViewIfNeeded(); // charts load when they come near the screen
     await page.getByTestId('checkerboard-recovered').locator('.main-svg').first().waitFor({ timeout: 60_000 });
     await page.getByTestId('checkerboard').screenshot({ path: path.join(SCREENSHOT_DIR, 'inversion-checkerboard.png') });
 

@@ -54,8 +54,10 @@ describe('layer methods tab: assignment, result, save as model, roles', () => {
     // Give five refractor picks to the direct wave: the result must change, and the count shows.
     await page.getByTestId('layers-brush-0').click();
     // Where plotly drew the refractor-1 picks, from the chart's own axes (the click goes through its hover logic).
+    // Charts load when they come near the screen, and the mouse reaches only what is on it.
+    await page.getByText('Which layer each pick travelled in').scrollIntoViewIfNeeded();
     await page.locator('.js-plotly-plot .scatterlayer').first().waitFor();
-    await page.locator('.js-plotly-plot').first().scrollIntoViewIfNeeded(); // the mouse reaches only what is on screen
+    await page.locator('.js-plotly-plot').first().scrollIntoViewIfNeeded();
     const points = await page.evaluate(() => {
       type Axis = { _offset: number; l2p: (v: number) => number };
       const gd = document.querySelector('.js-plotly-plot') as unknown as HTMLElement & { data: { name?: string; x: number[]; y: number[] }[]; _fullLayout: { xaxis: Axis; yaxis: Axis } };
@@ -105,6 +107,11 @@ describe('layer methods tab: assignment, result, save as model, roles', () => {
     // Each layer of the saved model carries the velocity found for it (rounded to the m/s shown).
     layers.forEach((l, k) => expect(Math.round((l.v_top + l.v_base) / 2)).toBe(shown[k]));
     expect(saved.body.comment).toMatch(/^grm on /);
+    // How it was made travels with the model, for the report (shared/layers/record.ts).
+    const record = (saved.body.model as { interpretation?: { method: string; velocities: number[]; depths: unknown[] } }).interpretation;
+    expect(record?.method).toBe('grm');
+    expect(record?.velocities).toEqual(shown);
+    expect(record?.depths.length).toBeGreaterThan(10);
     await shot(page, 'layers-three-saved');
     await page.close();
   });

@@ -91,6 +91,7 @@ describe('line page: stations, pick uploads and checks in the browser', () => {
     expect(uploadedId).not.toBe('');
     await page.getByTestId('pickset-checks').waitFor();
     // The chart is drawn by plotly (loaded on demand): one curve per shot in the file.
+    await page.getByTestId('traveltime-chart').scrollIntoViewIfNeeded(); // charts load when they come near the screen
     await page.getByTestId('traveltime-chart').locator('.main-svg').first().waitFor({ timeout: 60_000 });
     const shotIds = new Set(readFileSync(DEMO_PICKS, 'utf8').split('\n').filter((l) => /^[^#\s]/.test(l)).slice(1).map((l) => l.split(',')[0]));
     expect(await page.getByTestId('shot-row').count()).toBe(shotIds.size);

@@ -1,4 +1,4 @@
-import { Component, lazy, Suspense, type ComponentProps, type ReactNode } from 'react';
+import { Component, lazy, Suspense, useEffect, useRef, useState, type ComponentProps, type ReactNode } from 'react';
 
 const loadChart = () => import('./PlotlyChart');
 const PlotlyChart = lazy(loadChart);
@@ -32,19 +32,37 @@ class ChartBoundary extends Component<{ children: ReactNode }, { failed: boolean
   }
 }
 
-/** A plotly chart that loads the library on first use and shows a calm placeholder meanwhile. */
+/**
+ * A plotly chart that loads the library when the chart first comes near the screen (a page whose
+ * charts are all further down never fetches the ~1 MB of compressed script), with a calm
+ * placeholder of the chart's height meanwhile.
+ */
 export function LazyPlot({ height, ...props }: PlotProps & { height: number }) {
+  const [near, setNear] = useState(() => typeof IntersectionObserver === 'undefined');
+  const box = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    const el = box.current;
+    if (near || !el) return;
+    const seen = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setNear(true), { rootMargin: '400px 0px' });
+    seen.observe(el);
+    return () => seen.disconnect();
+  }, [near]);
+  const placeholder = (
+    <div role="status" style={{ height }} className="flex items-center justify-center rounded-lg border border-stone-200 bg-white text-stone-600">
+      Loading the chart…
+    </div>
+  );
   return (
-    <ChartBoundary>
-      <Suspense
-        fallback={
-          <div role="status" style={{ height }} className="flex items-center justify-center rounded-lg border border-stone-200 bg-white text-stone-600">
-            Loading the chart…
-          </div>
-        }
-      >
-        <PlotlyChart useResizeHandler style={{ width: '100%', height }} {...props} />
-      </Suspense>
-    </ChartBoundary>
+    <div ref={box}>
+      {near ? (
+        <ChartBoundary>
+          <Suspense fallback={placeholder}>
+            <PlotlyChart useResizeHandler style={{ width: '100%', height }} {...props} />
+          </Suspense>
+        </ChartBoundary>
+      ) : (
+        placeholder
+      )}
+    </div>
   );
 }
