@@ -14,7 +14,7 @@ import { importPicks } from '../services/importPicks';
 import { listPickSetSummaries } from '../services/lineSummary';
 import { listModelVersions } from '../services/models';
 import { listLineRuns } from '../services/runResults';
-import { listStations, replaceStations } from '../services/stations';
+import { listStationRevisions, listStations, replaceStations, stationRevision } from '../services/stations';
 
 const STATION_FILE_BYTES = 1024 * 1024;
 
@@ -65,6 +65,21 @@ export function linesRouter(): Router {
     }
     await replaceStations(req.user!.id, req.access!.projectId, req.params.lineId as string, stations);
     res.json({ stations: await listStations(req.params.lineId as string) });
+  });
+
+  // Earlier station tables (each save keeps the one it replaced), newest first.
+  r.get('/lines/:lineId/stations/revisions', authorize('line.read', projectOfLine), async (req, res) => {
+    res.json(await listStationRevisions(req.params.lineId as string));
+  });
+
+  // Bring back an earlier table; the current one is kept as a revision in turn.
+  r.post('/lines/:lineId/stations/revisions/:number/restore', authorize('line.stations.write', projectOfLine), async (req, res) => {
+    const lineId = req.params.lineId as string;
+    const number = Number(req.params.number);
+    const stations = Number.isInteger(number) && number >= 1 ? await stationRevision(lineId, number) : null;
+    if (!stations) throw new HttpError(404, 'revision_not_found', `This line has no station revision ${req.params.number}.`);
+    await replaceStations(req.user!.id, req.access!.projectId, lineId, stations, number);
+    res.json({ stations: await listStations(lineId) });
   });
 
   r.post('/lines/:lineId/picksets', authorize('line.picksets.create', projectOfLine), idempotent(), singleFile(MAX_PICK_FILE_BYTES), async (req, res) => {

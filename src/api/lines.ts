@@ -40,3 +40,29 @@ export function useSaveStations(lineId: string) {
     },
   });
 }
+
+/** An earlier station table of a line (each save keeps the one it replaced). */
+export interface StationRevisionSummary {
+  number: number;
+  stations: number;
+  replacedAt: string;
+  replacedBy: { id: string; name: string } | null;
+}
+
+export function useStationRevisions(lineId: string) {
+  return useQuery({
+    queryKey: [...queryKeys.line(lineId), 'station-revisions'] as const,
+    queryFn: ({ signal }) => apiRequest<StationRevisionSummary[]>(`${linePath(lineId)}/stations/revisions`, { signal }),
+  });
+}
+
+export function useRestoreStations(lineId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (number: number) => apiRequest<{ stations: Station[] }>(`${linePath(lineId)}/stations/revisions/${number}/restore`, { method: 'POST' }),
+    onSuccess: ({ stations }) => {
+      queryClient.setQueryData<LineDetail>(queryKeys.line(lineId), (old) => (old ? { ...old, stations } : old));
+      return queryClient.invalidateQueries({ queryKey: queryKeys.line(lineId) });
+    },
+  });
+}

@@ -4,6 +4,7 @@ import { useUpdateUser } from '../api/users';
 import type { User, UserPatch } from '../api/types';
 import { formatDate } from '../lib/format';
 import { Button } from './Button';
+import { ConfirmButton } from './ConfirmButton';
 import { ResetPasswordForm } from './forms/ResetPasswordForm';
 import { DataTable, Td, Th, Tr } from './Table';
 
@@ -74,24 +75,37 @@ export function AccountsTable({ users, myId }: { users: User[]; myId: string }) 
                       >
                         New password
                       </Button>
-                      <Button
-                        variant="secondary"
-                        size="sm"
+                      <ConfirmButton
+                        label={u.globalRole === 'admin' ? 'Make standard' : 'Make administrator'}
+                        confirmLabel={u.globalRole === 'admin' ? 'Confirm: make standard' : 'Confirm: make administrator'}
+                        warning={
+                          u.globalRole === 'admin'
+                            ? `${u.name} will no longer manage accounts; their project roles stay as they are.`
+                            : `${u.name} will be able to create, change and deactivate every account, and see every project.`
+                        }
                         disabled={update.isPending}
-                        aria-busy={busy || undefined}
-                        onClick={() => change(u.id, { globalRole: u.globalRole === 'admin' ? null : 'admin' })}
-                      >
-                        {u.globalRole === 'admin' ? 'Make standard' : 'Make administrator'}
-                      </Button>
-                      <Button
-                        variant={u.active ? 'danger' : 'secondary'}
-                        size="sm"
-                        disabled={update.isPending}
-                        aria-busy={busy || undefined}
-                        onClick={() => change(u.id, { active: !u.active })}
-                      >
-                        {u.active ? 'Deactivate' : 'Reactivate'}
-                      </Button>
+                        busy={busy && update.variables?.patch.globalRole !== undefined}
+                        busyLabel="Saving…"
+                        testId={`account-role-${u.email}`}
+                        onConfirm={(done) => update.mutate({ userId: u.id, patch: { globalRole: u.globalRole === 'admin' ? null : 'admin' } }, { onSettled: done })}
+                      />
+                      {u.active ? (
+                        <ConfirmButton
+                          label="Deactivate"
+                          confirmLabel="Confirm: deactivate"
+                          variant="danger"
+                          warning={`${u.name} is signed out everywhere and cannot sign in until reactivated; their work stays.`}
+                          disabled={update.isPending}
+                          busy={busy && update.variables?.patch.active !== undefined}
+                          busyLabel="Saving…"
+                          testId={`account-active-${u.email}`}
+                          onConfirm={(done) => update.mutate({ userId: u.id, patch: { active: false } }, { onSettled: done })}
+                        />
+                      ) : (
+                        <Button variant="secondary" size="sm" disabled={update.isPending} aria-busy={busy || undefined} onClick={() => change(u.id, { active: true })}>
+                          Reactivate
+                        </Button>
+                      )}
                     </span>
                   )}
                 </Td>

@@ -35,6 +35,9 @@ const EXPECTED: Record<string, Caller[]> = {
   'POST /api/projects/:projectId/lines': STAFF_A,
   'GET /api/lines/:lineId': STAFF_A,
   'PUT /api/lines/:lineId/stations': ['geophysicist', 'field_tech'],
+  // Issue 17 item 4: a replaced station table is kept; whoever reads the line sees the earlier tables, whoever writes stations restores one.
+  'GET /api/lines/:lineId/stations/revisions': STAFF_A,
+  'POST /api/lines/:lineId/stations/revisions/:number/restore': ['geophysicist', 'field_tech'],
   'POST /api/lines/:lineId/picksets': ['geophysicist', 'field_tech'],
   'POST /api/lines/:lineId/models': ['geophysicist'],
   'GET /api/models/:modelId': STAFF_A,
@@ -111,6 +114,7 @@ function concretePath(path: string, w: World): string {
     .replace(':reportId', w.reportA)
     .replace(':inversionId', w.inversionA)
     .replace(':shotId', 'F')
+    .replace(':number', '999')
     .replace(':userId', w.loner.id);
 }
 

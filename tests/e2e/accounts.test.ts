@@ -69,4 +69,24 @@ describe('passwords in the browser', () => {
     await shot(page, 'accounts-reset-done');
     await page.close();
   });
+
+  it('asks before making an administrator or deactivating, says what follows, and "Keep" changes nothing (issue 17 item 4)', async () => {
+    const page = await browser.newPage();
+    await signIn(page, server.baseUrl, 'admin@timefield.test');
+    await page.goto(`${server.baseUrl}/admin/accounts`);
+    const row = page.getByTestId('account-client@timefield.test');
+    await row.getByTestId('account-role-client@timefield.test').click();
+    expect(await row.getByTestId('account-role-client@timefield.test-warning').textContent()).toMatch(/will be able to create, change and deactivate every account/);
+    await row.getByRole('button', { name: 'Keep' }).click();
+    expect(await row.textContent()).toMatch(/Standard/);
+
+    await row.getByTestId('account-active-client@timefield.test').click();
+    expect(await row.getByTestId('account-active-client@timefield.test-warning').textContent()).toMatch(/signed out everywhere and cannot sign in/);
+    await shot(page, 'accounts-confirm-deactivate');
+    await row.getByTestId('account-active-client@timefield.test-confirm').click();
+    await expect.poll(() => row.textContent()).toMatch(/Deactivated/);
+    await row.getByRole('button', { name: 'Reactivate' }).click();
+    await expect.poll(() => row.textContent()).toMatch(/Active/);
+    await page.close();
+  });
 });

@@ -245,7 +245,9 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
     await page.getByTestId('start-inversion').click();
     await page.waitForURL(/\/inversions\/[^/]+$/);
     await page.locator('[data-testid="inversion-status"][data-status="running"]').waitFor();
-    await page.getByTestId('cancel-inversion').click();
+    await page.getByTestId('cancel-inversion').click(); // the first click only says what happens
+    expect(await page.getByTestId('cancel-inversion-warning').textContent()).toMatch(/cannot be resumed/);
+    await page.getByTestId('cancel-inversion-confirm').click();
     await page.locator('[data-testid="inversion-status"][data-status="cancelled"]').waitFor();
     expect(await page.getByTestId('inversion-outcome').textContent()).toMatch(/was cancelled.*Start a new one/s);
     await page.close();

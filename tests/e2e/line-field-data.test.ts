@@ -59,6 +59,18 @@ describe('line page: stations, pick uploads and checks in the browser', () => {
     await page.getByRole('button', { name: 'Discard changes' }).click();
     expect(await page.getByTestId('station-row-errors').count()).toBe(0);
 
+    // Replacing the 48 stations by a 2-station file asks first, and the 48 stay restorable (issue 17 item 4).
+    await page.getByTestId('station-csv').locator('input[type=file]').setInputFiles({ name: 'two.csv', mimeType: 'text/csv', buffer: Buffer.from('station,x,z\n1,0,100\n2,2.5,100.1\n') });
+    await page.getByTestId('station-csv-send').click();
+    expect(await page.getByTestId('station-csv-send-warning').textContent()).toMatch(/The 48 stations on record are replaced .* kept under "Earlier tables"/);
+    await page.getByTestId('station-csv-send-confirm').click();
+    await expect.poll(() => page.getByTestId('stations-status').textContent()).toMatch(/^2 stations on record|Saved 2|2 stations/);
+    const revision = page.getByTestId('station-revisions').locator('li').first();
+    expect(await revision.textContent()).toMatch(/^48 stations, replaced/);
+    await revision.getByRole('button', { name: 'Restore' }).click();
+    await revision.getByRole('button', { name: 'Confirm: restore' }).click();
+    await expect.poll(() => page.getByTestId('stations-status').textContent()).toMatch(/48 stations on record/);
+
     // Keyboard: arrow keys move between the tabs.
     await page.getByTestId('tab-stations').focus();
     await page.keyboard.press('ArrowRight');

@@ -294,7 +294,10 @@ describe('forward runs: start, progress, results views, comparison', () => {
     await startRun(page, 2);
     await page.getByTestId('run-progress').waitFor();
     expect(await page.getByTestId('run-progress').textContent()).toMatch(/Waiting for a solver/);
+    // Two clicks: the first says what is lost, the second cancels.
     await page.getByTestId('cancel-run').click();
+    expect(await page.getByTestId('cancel-run-warning').textContent()).toMatch(/not kept/);
+    await page.getByTestId('cancel-run-confirm').click();
     await page.getByTestId('run-outcome').waitFor();
     expect(await page.getByTestId('run-outcome').textContent()).toMatch(/This run was cancelled/);
     expect(await page.getByTestId('run-status').getAttribute('data-status')).toBe('cancelled');

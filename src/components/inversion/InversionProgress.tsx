@@ -1,7 +1,7 @@
 import { errorMessage, isApiError } from '../../api/errors';
 import { useCancelInversion } from '../../api/inversions';
 import type { InversionView } from '../../../shared/schemas/inversions';
-import { Button } from '../Button';
+import { ConfirmButton } from '../ConfirmButton';
 import { duration, when } from '../run/format';
 import { ConvergenceChart } from './ConvergenceChart';
 
@@ -33,9 +33,16 @@ export function InversionProgress({ inversion, canCancel }: { inversion: Inversi
       )}
       {canCancel && (
         <div className="mt-4 flex flex-wrap items-center gap-4">
-          <Button variant="danger" size="sm" busy={cancel.isPending} busyLabel="Cancelling…" onClick={() => cancel.mutate()} data-testid="cancel-inversion">
-            Cancel inversion
-          </Button>
+          <ConfirmButton
+            label="Cancel inversion"
+            confirmLabel="Confirm: cancel inversion"
+            variant="danger"
+            warning="The inversion stops and cannot be resumed; it stays in the list as cancelled."
+            busy={cancel.isPending}
+            busyLabel="Cancelling…"
+            testId="cancel-inversion"
+            onConfirm={(done) => cancel.mutate(undefined, { onSettled: done })}
+          />
           {cancel.isError && (
             <p role="alert" className="text-sm font-semibold text-red-800">
               {isApiError(cancel.error, 409) ? `Too late to cancel: ${errorMessage(cancel.error)}` : errorMessage(cancel.error)}

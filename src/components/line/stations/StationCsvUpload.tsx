@@ -3,6 +3,7 @@ import { errorMessage, isApiError } from '../../../api/errors';
 import { useSaveStations } from '../../../api/lines';
 import type { Station } from '../../../api/types';
 import { Button } from '../../Button';
+import { ConfirmButton } from '../../ConfirmButton';
 import { FileProblems, type FileIssue } from '../FileProblems';
 
 /** Replace the station table from a CSV file (header `station,x,z`, any column order, `#` comments). */
@@ -51,9 +52,21 @@ export function StationCsvUpload({ lineId, current, onStored }: { lineId: string
           onChange={(e) => choose(e.target.files?.[0] ?? null)}
           className="text-sm file:mr-3 file:rounded-md file:border file:border-stone-300 file:bg-white file:px-3 file:py-1 file:font-semibold file:text-stone-800 hover:file:bg-stone-50"
         />
-        {file && (
+        {file && current > 0 && (
+          <ConfirmButton
+            label={`Replace ${current} stations`}
+            confirmLabel="Confirm: replace"
+            variant="primary"
+            warning={`The ${current} stations on record are replaced by the file's; the current table is kept under "Earlier tables" and can be restored.`}
+            busy={upload.isPending}
+            busyLabel="Uploading…"
+            testId="station-csv-send"
+            onConfirm={(done) => (send(), done())}
+          />
+        )}
+        {file && current === 0 && (
           <Button size="sm" onClick={send} busy={upload.isPending} busyLabel="Uploading…" data-testid="station-csv-send">
-            {current > 0 ? `Replace ${current} stations` : 'Store stations'}
+            Store stations
           </Button>
         )}
       </div>

@@ -7,6 +7,7 @@ import { EmptyState } from '../../EmptyState';
 import { Section } from '../../Section';
 import { ElevationProfile } from './ElevationProfile';
 import { StationCsvUpload } from './StationCsvUpload';
+import { StationRevisions } from './StationRevisions';
 import { StationEditor } from './StationEditor';
 import { StationTable } from './StationTable';
 import { checkRows, COLUMN_LABELS, nextRow, sameStations, toDraft, type DraftRow, type RowErrors, type StationColumn } from './stationRows';
@@ -161,6 +162,7 @@ function StationWorkbench({ line }: { line: LineDetail }) {
           </div>
           <div className="flex flex-col gap-4">
             <StationCsvUpload lineId={line.id} current={line.stations.length} onStored={onStoredFromFile} />
+            <StationRevisions lineId={line.id} current={line.stations.length} canRestore onRestored={onStoredFromFile} />
             <div className="rounded-lg border border-stone-200 bg-white p-4 text-sm text-stone-700">
               <p className="font-semibold text-stone-800">Working in the table</p>
               <ul className="mt-1 list-disc space-y-1 pl-5">

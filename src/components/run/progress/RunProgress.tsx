@@ -1,7 +1,7 @@
 import { errorMessage, isApiError } from '../../../api/errors';
 import { useCancelRun } from '../../../api/runs';
 import type { RunDetail } from '../../../api/types';
-import { Button } from '../../Button';
+import { ConfirmButton } from '../../ConfirmButton';
 import { duration, when } from '../format';
 
 /** Shots solved out of the total, live while the run is queued or running, with a cancel button. */
@@ -26,9 +26,16 @@ export function RunProgress({ run, canCancel }: { run: RunDetail; canCancel: boo
       </p>
       {canCancel && (
         <div className="mt-4 flex flex-wrap items-center gap-4">
-          <Button variant="danger" size="sm" busy={cancel.isPending} busyLabel="Cancelling…" onClick={() => cancel.mutate()} data-testid="cancel-run">
-            Cancel run
-          </Button>
+          <ConfirmButton
+            label="Cancel run"
+            confirmLabel="Confirm: cancel run"
+            variant="danger"
+            warning="Solving stops and the shots solved so far are not kept; the run stays in the list as cancelled."
+            busy={cancel.isPending}
+            busyLabel="Cancelling…"
+            testId="cancel-run"
+            onConfirm={(done) => cancel.mutate(undefined, { onSettled: done })}
+          />
           {cancel.isError && (
             <p role="alert" className="text-sm font-semibold text-red-800">
               {isApiError(cancel.error, 409) ? `Too late to cancel: ${errorMessage(cancel.error)}` : errorMessage(cancel.error)}
