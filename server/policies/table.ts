@@ -32,6 +32,7 @@ export const policyTable = {
   'project.read': { admin: true, roles: MEMBERS },
   'project.members.add': { admin: true, roles: ['lead'] },
   'project.members.remove': { admin: true, roles: ['lead'] },
+  'project.members.update': { admin: true, roles: ['lead'] },
   'project.lines.create': { roles: STAFF },
 
   'line.read': { roles: STAFF },
@@ -69,6 +70,8 @@ export const policyTable = {
 
   'pickset.read': { roles: STAFF },
   'pickset.revise': { roles: ['geophysicist'] },
+  // Issue 17 item 5: whoever uploads pick sets may retire a mistaken one (and bring it back).
+  'pickset.retire': { roles: ['geophysicist', 'field_tech'] },
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof policyTable;

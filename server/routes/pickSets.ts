@@ -1,12 +1,12 @@
 import { Router } from 'express';
-import { exclusionsBody } from '../../shared/schemas/pickSets';
+import { exclusionsBody, retirePickSetBody } from '../../shared/schemas/pickSets';
 import { HttpError } from '../http/errors';
 import { parse } from '../http/parse';
 import { authorize } from '../policies/authorize';
 import { projectOfPickSet } from '../policies/scopes';
 import { presentPickSetJson } from '../presenters/pickSet';
 import { farPositions, picksJson, RECIPROCAL_TOLERANCE_MS, revisionQcJson, shotsOf } from '../services/pickSetReads';
-import { addRevision, getPickSetHead, listRevisions, loadOriginal } from '../services/pickSets';
+import { addRevision, getPickSetHead, listRevisions, loadOriginal, setPickSetRetired } from '../services/pickSets';
 
 export function pickSetsRouter(): Router {
   const r = Router();
@@ -36,6 +36,16 @@ export function pickSetsRouter(): Router {
     const id = req.params.pickSetId as string;
     const [head, bytes] = await Promise.all([getPickSetHead(id), loadOriginal(id)]);
     res.attachment(head.fileName).type('text/csv').send(bytes);
+  });
+
+  r.post('/picksets/:pickSetId/retire', authorize('pickset.retire', projectOfPickSet), async (req, res) => {
+    await setPickSetRetired(req.user!.id, req.access!.projectId, req.params.pickSetId as string, parse(retirePickSetBody, req.body));
+    res.status(204).end();
+  });
+
+  r.post('/picksets/:pickSetId/reinstate', authorize('pickset.retire', projectOfPickSet), async (req, res) => {
+    await setPickSetRetired(req.user!.id, req.access!.projectId, req.params.pickSetId as string, null);
+    res.status(204).end();
   });
 
   return r;

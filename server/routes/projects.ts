@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { addMemberBody, createLineBody, createProjectBody } from '../../shared/schemas/projects';
+import { addMemberBody, changeMemberRoleBody, createLineBody, createProjectBody } from '../../shared/schemas/projects';
 import { parse } from '../http/parse';
 import { authorize } from '../policies/authorize';
 import { isUuid, projectFromParam } from '../policies/scopes';
@@ -41,6 +41,12 @@ export function projectsRouter(): Router {
     if (!isUuid(userId)) throw new HttpError(404, 'member_not_found', 'That account is not a member of this project.');
     await projects.removeMember(req.user!.id, req.access!.projectId, userId);
     res.status(204).end();
+  });
+
+  r.patch('/projects/:projectId/members/:userId', authorize('project.members.update', projectFromParam), async (req, res) => {
+    const userId = req.params.userId as string;
+    if (!isUuid(userId)) throw new HttpError(404, 'member_not_found', 'That account is not a member of this project.');
+    res.json(await projects.changeMemberRole(req.user!.id, req.access!.projectId, userId, parse(changeMemberRoleBody, req.body)));
   });
 
   r.post('/projects/:projectId/lines', authorize('project.lines.create', projectFromParam), async (req, res) => {

@@ -9,7 +9,7 @@ import { addJob } from '../queue/queue';
 import { audit } from './audit';
 import { checkGridSize, placeInversionPicks, surfaceRaster } from './inversionInputs';
 import { loadModelVersion } from './models';
-import { listRevisions, loadPicks, type StoredPick } from './pickSets';
+import { listRevisions, loadPicks, refuseRetired, type StoredPick } from './pickSets';
 import { listStations } from './stations';
 
 const invalid = (path: string, message: string) => new HttpError(422, 'validation_failed', `${path}: ${message}`, [{ path, message }]);
@@ -22,6 +22,7 @@ const invalid = (path: string, message: string) => new HttpError(422, 'validatio
 export async function startInversion(actorId: string, projectId: string, body: StartInversionBody, queue: Queue): Promise<Inversion> {
   const [pickSet] = await dataSource.query('SELECT s.line_id, l.project_id FROM pick_sets s JOIN survey_lines l ON l.id = s.line_id WHERE s.id = $1', [body.pickSetId]);
   if (!pickSet || pickSet.project_id !== projectId) throw invalid('pickSetId', 'no pick set of this project has that id');
+  await refuseRetired(body.pickSetId);
   const lineId: string = pickSet.line_id;
   const [picks, revisions] = await Promise.all([loadPicks(body.pickSetId), listRevisions(body.pickSetId)]);
   const revision = body.pickSetRevision === undefined ? revisions.at(-1)! : revisions.find((r) => r.number === body.pickSetRevision);

@@ -1,7 +1,7 @@
 import { dataSource } from '../db/dataSource';
 import { PickSetRevision, type Exclusion } from '../entities/PickSetRevision';
 import { HttpError } from '../http/errors';
-import type { ExclusionsBody } from '../../shared/schemas/pickSets';
+import type { ExclusionsBody, RetirePickSetBody } from '../../shared/schemas/pickSets';
 import { audit } from './audit';
 
 export interface StoredPick {
@@ -97,4 +97,29 @@ export async function addRevision(actorId: string, projectId: string, pickSetId:
     await audit(em, { actorId, action: 'pickset.revise', objectType: 'pick_set', objectId: pickSetId, projectId, detail: { revision: next, excluded: body.exclusions.length } });
     return { number: next };
   });
+}
+
+/**
+ * Retire a pick set (it leaves the choices for new runs, inversions and checks; runs, inversions and
+ * reports that used it keep it), or bring it back. Both are audited; retiring twice is a 409.
+ */
+export async function setPickSetRetired(actorId: string, projectId: string, pickSetId: string, retire: RetirePickSetBody | null): Promise<void> {
+  await dataSource.transaction(async (em) => {
+    const [row] = await em.query('SELECT retired_at FROM pick_sets WHERE id = $1 FOR UPDATE', [pickSetId]);
+    if (retire && row.retired_at) throw new HttpError(409, 'already_retired', 'This pick set is already retired.');
+    if (!retire && !row.retired_at) throw new HttpError(409, 'not_retired', 'This pick set is in use, not retired.');
+    await em.query('UPDATE pick_sets SET retired_at = $2, retired_by = $3, retire_reason = $4 WHERE id = $1', [
+      pickSetId, retire ? new Date() : null, retire ? actorId : null, retire?.reason ?? null,
+    ]);
+    await audit(em, { actorId, action: retire ? 'pickset.retire' : 'pickset.reinstate', objectType: 'pick_set', objectId: pickSetId, projectId, detail: retire ? { reason: retire.reason } : {} });
+  });
+}
+
+/** Refuses new work on a retired pick set, with the path of the field that chose it. */
+export async function refuseRetired(pickSetId: string): Promise<void> {
+  const [row] = await dataSource.query('SELECT retired_at, retire_reason FROM pick_sets WHERE id = $1', [pickSetId]);
+  if (row?.retired_at) {
+    const message = `this pick set is retired (${row.retire_reason}); reinstate it on the Pick sets tab to use it again`;
+    throw new HttpError(422, 'validation_failed', `pickSetId: ${message}`, [{ path: 'pickSetId', message }]);
+  }
 }

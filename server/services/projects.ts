@@ -1,7 +1,7 @@
 import { dataSource } from '../db/dataSource';
 import { Project, ProjectMember, SurveyLine, User } from '../entities';
 import { HttpError } from '../http/errors';
-import type { AddMemberBody, CreateLineBody, CreateProjectBody, ProjectRole } from '../../shared/schemas/projects';
+import type { AddMemberBody, ChangeMemberRoleBody, CreateLineBody, CreateProjectBody, ProjectRole } from '../../shared/schemas/projects';
 import type { MemberRow } from '../presenters/project';
 import { audit } from './audit';
 
@@ -70,6 +70,25 @@ export async function removeMember(actorId: string, projectId: string, userId: s
     }
     await em.delete(ProjectMember, { projectId, userId });
     await audit(em, { actorId, action: 'project.member.remove', objectType: 'user', objectId: userId, projectId, detail: { role: member.role } });
+  });
+}
+
+/** A member's role changed in place (no remove and re-add); a project keeps at least one lead. */
+export async function changeMemberRole(actorId: string, projectId: string, userId: string, body: ChangeMemberRoleBody): Promise<MemberRow> {
+  return dataSource.transaction(async (em) => {
+    // Serialise role changes of one project, so two leads cannot each demote the other.
+    await em.query(`SELECT 1 FROM projects WHERE id = $1 FOR UPDATE`, [projectId]);
+    const member = await em.findOneBy(ProjectMember, { projectId, userId });
+    if (!member) throw new HttpError(404, 'member_not_found', 'That account is not a member of this project.');
+    const user = await em.findOneByOrFail(User, { id: userId });
+    if (member.role === body.role) return { userId, name: user.name, email: user.email, role: member.role };
+    if (member.role === 'lead') {
+      const leads = await em.countBy(ProjectMember, { projectId, role: 'lead' });
+      if (leads === 1) throw new HttpError(409, 'last_lead', 'A project needs at least one lead. Make someone else lead first.');
+    }
+    await em.update(ProjectMember, { projectId, userId }, { role: body.role });
+    await audit(em, { actorId, action: 'project.member.role', objectType: 'user', objectId: userId, projectId, detail: { from: member.role, to: body.role } });
+    return { userId, name: user.name, email: user.email, role: body.role };
   });
 }
 

@@ -6,7 +6,7 @@ import { addJob } from '../queue/queue';
 import type { StartRunBody } from '../../shared/schemas/runs';
 import { audit } from './audit';
 import { loadModelVersion } from './models';
-import { listRevisions, loadPicks } from './pickSets';
+import { listRevisions, loadPicks, refuseRetired } from './pickSets';
 import { prepareRunInputs } from './runInputs';
 
 /**
@@ -20,6 +20,7 @@ export async function startRun(actorId: string, projectId: string, body: StartRu
   if (!pickSet || pickSet.project_id !== projectId) {
     throw new HttpError(422, 'validation_failed', 'pickSetId: no pick set of this project has that id', [{ path: 'pickSetId', message: 'no pick set of this project has that id' }]);
   }
+  await refuseRetired(body.pickSetId);
   if (pickSet.line_id !== model.lineId) {
     throw new HttpError(409, 'different_lines', 'The model and the pick set belong to different survey lines.');
   }

@@ -22,3 +22,9 @@ export const exclusionsBody = z
   });
 
 export type ExclusionsBody = z.infer<typeof exclusionsBody>;
+
+/** Body of POST /api/picksets/:pickSetId/retire: why the set should no longer be used. */
+export const retirePickSetBody = z.strictObject({
+  reason: z.string({ error: 'give a reason for retiring the pick set' }).trim().min(1, 'give a reason for retiring the pick set').max(500),
+});
+export type RetirePickSetBody = z.infer<typeof retirePickSetBody>;

@@ -19,6 +19,11 @@ export const addMemberBody = z.strictObject({
   role: z.enum(PROJECT_ROLES),
 });
 
+/** PATCH /api/projects/:projectId/members/:userId: a member's new role in the project. */
+export const changeMemberRoleBody = z.strictObject({
+  role: z.enum(PROJECT_ROLES, { error: `role must be one of ${PROJECT_ROLES.join(', ')}` }),
+});
+
 export const createLineBody = z.strictObject({
   name: text(120),
   notes: z.string().max(4000).optional().default(''),
@@ -26,4 +31,5 @@ export const createLineBody = z.strictObject({
 
 export type CreateProjectBody = z.infer<typeof createProjectBody>;
 export type AddMemberBody = z.infer<typeof addMemberBody>;
+export type ChangeMemberRoleBody = z.infer<typeof changeMemberRoleBody>;
 export type CreateLineBody = z.infer<typeof createLineBody>;

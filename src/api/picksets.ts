@@ -47,3 +47,13 @@ export function useCreateRevision(pickSetId: string, lineId: string) {
     },
   });
 }
+
+/** Retire (with a reason) or reinstate a pick set; the line's lists are refreshed afterwards. */
+export function useRetirePickSet(pickSetId: string, lineId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (reason: string | null) =>
+      apiRequest<void>(`${pickSetPath(pickSetId)}/${reason === null ? 'reinstate' : 'retire'}`, { method: 'POST', body: reason === null ? {} : { reason } }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.line(lineId) }),
+  });
+}

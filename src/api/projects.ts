@@ -1,7 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from './client';
 import { queryKeys } from './keys';
-import type { NewMemberBody, NewProjectBody, ProjectDetail, ProjectMember, ProjectSummary } from './types';
+import type { NewMemberBody, NewProjectBody, ProjectDetail, ProjectMember, ProjectRole, ProjectSummary } from './types';
 
 const projectPath = (projectId: string) => `/api/projects/${encodeURIComponent(projectId)}`;
 
@@ -51,6 +51,19 @@ export function useRemoveMember(projectId: string) {
       // Removing oneself changes one's own roles and project list.
       await queryClient.invalidateQueries({ queryKey: queryKeys.me });
       await queryClient.invalidateQueries({ queryKey: queryKeys.projects, exact: true });
+    },
+  });
+}
+
+export function useChangeMemberRole(projectId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ userId, role }: { userId: string; role: ProjectRole }) =>
+      apiRequest<ProjectMember>(`${projectPath(projectId)}/members/${encodeURIComponent(userId)}`, { method: 'PATCH', body: { role } }),
+    onSuccess: async () => {
+      await queryClient.invalidateQueries({ queryKey: queryKeys.project(projectId) });
+      // Changing one's own role changes what one may do here.
+      await queryClient.invalidateQueries({ queryKey: queryKeys.me });
     },
   });
 }

@@ -88,7 +88,12 @@ export interface PickSetSummary {
   picks: number;
   revision: number;
   excluded: number;
+  /** Set when the pick set was retired: left out of the choices for new work, kept for what used it. */
+  retired: { at: string; by: string | null; reason: string } | null;
 }
+
+/** Pick sets offered for new work (runs, inversions, checks, layer methods): the ones not retired. */
+export const pickSetsInUse = (pickSets: readonly PickSetSummary[]): PickSetSummary[] => pickSets.filter((p) => !p.retired);
 
 /** Models and runs arrive with later issues; their shapes are not fixed yet. */
 export interface LineDetail extends Line {

@@ -4,12 +4,14 @@ import { useRemoveMember } from '../api/projects';
 import type { ProjectMember } from '../api/types';
 import { ROLE_LABELS } from '../lib/format';
 import { Button } from './Button';
+import { MemberRoleEditor } from './MemberRoleEditor';
 import { DataTable, Td, Th, Tr } from './Table';
 
-/** Members of a project; leads and admins can remove them, with a second click to confirm. */
+/** Members of a project; leads and admins change a member's role in place, or remove them with a second click to confirm. */
 export function MembersTable({ projectId, members, canManage, myId }: { projectId: string; members: ProjectMember[]; canManage: boolean; myId: string }) {
   const remove = useRemoveMember(projectId);
   const [confirming, setConfirming] = useState<string | null>(null);
+  const [editing, setEditing] = useState<string | null>(null);
   const sorted = [...members].sort((a, b) => a.name.localeCompare(b.name));
 
   return (
@@ -43,7 +45,13 @@ export function MembersTable({ projectId, members, canManage, myId }: { projectI
               <Td>{ROLE_LABELS[m.role] ?? m.role}</Td>
               {canManage && (
                 <Td className="text-right whitespace-nowrap">
-                  {m.userId === myId ? null : confirming === m.userId ? (
+                  {editing === m.userId ? (
+                    <MemberRoleEditor projectId={projectId} member={m} onDone={() => setEditing(null)} />
+                  ) : m.userId === myId ? (
+                    <Button variant="secondary" size="sm" onClick={() => setEditing(m.userId)} aria-label="Change your own role in the project">
+                      Change role
+                    </Button>
+                  ) : confirming === m.userId ? (
                     <span className="inline-flex gap-2">
                       <Button
                         variant="danger"
@@ -59,9 +67,14 @@ export function MembersTable({ projectId, members, canManage, myId }: { projectI
                       </Button>
                     </span>
                   ) : (
-                    <Button variant="secondary" size="sm" onClick={() => setConfirming(m.userId)} disabled={remove.isPending} aria-label={`Remove ${m.name} from the project`}>
-                      Remove
-                    </Button>
+                    <span className="inline-flex gap-2">
+                      <Button variant="secondary" size="sm" onClick={() => setEditing(m.userId)} aria-label={`Change the role of ${m.name}`} data-testid={`member-role-${m.email}`}>
+                        Change role
+                      </Button>
+                      <Button variant="secondary" size="sm" onClick={() => setConfirming(m.userId)} disabled={remove.isPending} aria-label={`Remove ${m.name} from the project`}>
+                        Remove
+                      </Button>
+                    </span>
                   )}
                 </Td>
               )}

@@ -5,7 +5,7 @@ import { defaultModel } from '../../shared/model/edit';
 import { lineModelVersions, useLineOfModel, useModelVersion } from '../api/models';
 import { usePickSet } from '../api/picksets';
 import { useProject } from '../api/projects';
-import type { LineDetail, ModelVersionDetail, ModelVersionSummary } from '../api/types';
+import { pickSetsInUse, type LineDetail, type ModelVersionDetail, type ModelVersionSummary } from '../api/types';
 import { Loading, LoadError } from '../components/LoadState';
 import { ModelEditor } from '../components/model/ModelEditor';
 import { VersionList } from '../components/model/VersionList';
@@ -35,7 +35,7 @@ export function ModelEditorPage() {
   const lineId = lineParam ?? version.data?.lineId ?? null;
   const line = useLineOfModel(lineId);
   const project = useProject(line.data?.projectId ?? '', { enabled: Boolean(line.data?.projectId) });
-  const newestPickSet = line.data?.pickSets[0]?.id ?? null;
+  const newestPickSet = line.data ? (pickSetsInUse(line.data.pickSets)[0]?.id ?? null) : null;
   const pickSet = usePickSet(!modelId && !from ? newestPickSet : null, null);
 
   // Which draft the editor holds; a save's own new id does not start a new draft.

@@ -32,6 +32,8 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/projects/:projectId': ['admin', ...MEMBERS_A],
   'POST /api/projects/:projectId/members': ['admin', 'lead'],
   'DELETE /api/projects/:projectId/members/:userId': ['admin', 'lead'],
+  // Issue 17 item 5: whoever may add and remove members changes a member's role in place.
+  'PATCH /api/projects/:projectId/members/:userId': ['admin', 'lead'],
   'POST /api/projects/:projectId/lines': STAFF_A,
   'GET /api/lines/:lineId': STAFF_A,
   'PUT /api/lines/:lineId/stations': ['geophysicist', 'field_tech'],
@@ -79,6 +81,9 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/picksets/:pickSetId': STAFF_A,
   'POST /api/picksets/:pickSetId/revisions': ['geophysicist'],
   'GET /api/picksets/:pickSetId/file': STAFF_A,
+  // Issue 17 item 5: the uploaders (geophysicist, field technician) retire a mistaken pick set and reinstate it.
+  'POST /api/picksets/:pickSetId/retire': ['geophysicist', 'field_tech'],
+  'POST /api/picksets/:pickSetId/reinstate': ['geophysicist', 'field_tech'],
 };
 
 interface RouteInfo {

@@ -66,6 +66,37 @@ describe('projects, members and lines', () => {
     expect(new Set(trail.map((r: { actor_id: string }) => r.actor_id))).toEqual(new Set([world.users.lead.id]));
   });
 
+  it('changes a member\'s role in place (issue 17 item 5): access follows at once, the last lead stays, bad roles refused', async () => {
+    const lead = await signedInAgent(t.app, emailOf('lead'), PASSWORD);
+    const created = await lead.post('/api/projects').set('X-CSRF-Token', lead.csrf).send({ name: 'Cutting D', site: 'Km 14', clientOrganisation: 'Roads' });
+    const pid = created.body.id;
+    await lead.post(`/api/projects/${pid}/members`).set('X-CSRF-Token', lead.csrf).send({ userId: world.loner.id, role: 'client' }).expect(201);
+    const loner = await signedInAgent(t.app, emailOf('loner'), PASSWORD);
+    expect((await loner.get(`/api/projects/${pid}`)).body.myRole).toBe('client');
+    const url = `/api/projects/${pid}/members/${world.loner.id}`;
+    const changed = await lead.patch(url).set('X-CSRF-Token', lead.csrf).send({ role: 'geophysicist' });
+    expect(changed.status).toBe(200);
+    expect(changed.body).toMatchObject({ userId: world.loner.id, role: 'geophysicist' });
+    // The member's next request already has the new role (a client could not create a line; a geophysicist can).
+    expect((await loner.get(`/api/projects/${pid}`)).body.myRole).toBe('geophysicist');
+    expect((await loner.post(`/api/projects/${pid}/lines`).set('X-CSRF-Token', loner.csrf).send({ name: 'D-1' })).status).toBe(201);
+
+    const bad = await lead.patch(url).set('X-CSRF-Token', lead.csrf).send({ role: 'owner' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.issues[0].path).toBe('role');
+    const lastLead = await lead.patch(`/api/projects/${pid}/members/${world.users.lead.id}`).set('X-CSRF-Token', lead.csrf).send({ role: 'geophysicist' });
+    expect(lastLead.status).toBe(409);
+    expect(lastLead.body.error).toBe('last_lead');
+    const stranger = await lead.patch(`/api/projects/${pid}/members/${world.users.client.id}`).set('X-CSRF-Token', lead.csrf).send({ role: 'lead' });
+    expect(stranger.status).toBe(404);
+
+    // Two leads: one may hand the lead over and step down.
+    await lead.patch(url).set('X-CSRF-Token', lead.csrf).send({ role: 'lead' }).expect(200);
+    await lead.patch(`/api/projects/${pid}/members/${world.users.lead.id}`).set('X-CSRF-Token', lead.csrf).send({ role: 'geophysicist' }).expect(200);
+    const trail = await dataSource.query(`SELECT detail FROM audit_log WHERE project_id = $1 AND action = 'project.member.role' ORDER BY id`, [pid]);
+    expect(trail.map((r: { detail: unknown }) => r.detail)).toEqual([{ from: 'client', to: 'geophysicist' }, { from: 'geophysicist', to: 'lead' }, { from: 'lead', to: 'geophysicist' }]);
+  });
+
   it('creates survey lines for staff, refuses duplicates and unknown fields', async () => {
     const tech = await signedInAgent(t.app, emailOf('field_tech'), PASSWORD);
     const url = `/api/projects/${world.projectA.id}/lines`;

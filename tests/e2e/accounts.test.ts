@@ -7,7 +7,7 @@ import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../fixtures/demo/scenario';
+import { DEMO_PASSWORD, demoProject } from '../../fixtures/demo/scenario';
 import { launchBrowser, SCREENSHOT_DIR, startDemoServer, type E2eServer } from './support/server';
 
 async function signIn(page: Page, baseUrl: string, email: string, password = DEMO_PASSWORD) {
@@ -87,6 +87,24 @@ describe('passwords in the browser', () => {
     await expect.poll(() => row.textContent()).toMatch(/Deactivated/);
     await row.getByRole('button', { name: 'Reactivate' }).click();
     await expect.poll(() => row.textContent()).toMatch(/Active/);
+    await page.close();
+  });
+
+  it('lets a project lead change a member\'s role in place, saying what the role may do (issue 17 item 5)', async () => {
+    const page = await browser.newPage();
+    await signIn(page, server.baseUrl, 'lead@timefield.test');
+    await page.getByRole('link', { name: demoProject.name }).click();
+    const row = page.getByTestId('member-tech@timefield.test');
+    await row.getByTestId('member-role-tech@timefield.test').click();
+    await row.getByTestId('member-role-select-tech@timefield.test').selectOption('geophysicist');
+    expect(await row.textContent()).toMatch(/interprets, edits models/);
+    await row.getByTestId('member-role-save-tech@timefield.test').click();
+    await expect.poll(() => row.textContent()).toMatch(/^.*Geophysicist/);
+    await shot(page, 'members-role-changed');
+    await row.getByTestId('member-role-tech@timefield.test').click();
+    await row.getByTestId('member-role-select-tech@timefield.test').selectOption('field_tech');
+    await row.getByTestId('member-role-save-tech@timefield.test').click();
+    await expect.poll(() => row.textContent()).toMatch(/Field technician/);
     await page.close();
   });
 });

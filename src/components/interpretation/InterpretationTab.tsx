@@ -3,7 +3,7 @@ import { Link } from 'react-router';
 import { errorMessage } from '../../api/errors';
 import { lineModelVersions, useModelVersion, useSaveModel } from '../../api/models';
 import { usePickSet } from '../../api/picksets';
-import type { LineDetail } from '../../api/types';
+import { pickSetsInUse, type LineDetail, type PickRow } from '../../api/types';
 import { interpretationRecord, layeredModelFromResult, type LayerMethod, type LayerResult } from '../../../shared/layers';
 import type { ModelFile } from '../../../shared/model';
 import { Button } from '../Button';
@@ -30,7 +30,8 @@ const METHOD_LABELS: Record<LayerMethod, string> = {
  */
 export function InterpretationTab({ line, canSave }: { line: LineDetail; canSave: boolean }) {
   const models = lineModelVersions(line.models);
-  const [pickSetId, setPickSetId] = useState<string>(line.pickSets[0]?.id ?? '');
+  const pickSets = pickSetsInUse(line.pickSets);
+  const [pickSetId, setPickSetId] = useState<string>(pickSets[0]?.id ?? '');
   const [modelId, setModelId] = useState<string>(models[0]?.id ?? '');
   const [settings, setSettings] = useState<LayerSettings>({ method: 'grm', layers: 2, xy: null });
   const [hand, setHand] = useState<ReadonlyMap<number, number>>(new Map());
@@ -38,7 +39,7 @@ export function InterpretationTab({ line, canSave }: { line: LineDetail; canSave
   const pickSet = usePickSet(pickSetId || null, null);
   const model = useModelVersion(modelId || null);
 
-  if (!line.pickSets.length) return <p className="text-stone-600">Upload a pick set first: the layer methods work on the picks of a line.</p>;
+  if (!pickSets.length) return <p className="text-stone-600">Upload a pick set first: the layer methods work on the picks of a line.</p>;
   if (!models.length) return <p className="text-stone-600">Save a model version first: its grid and ground surface place the picks and carry the result.</p>;
 
   const choose = (next: Partial<LayerSettings>) => setSettings((s) => ({ ...s, ...next }));
@@ -47,7 +48,7 @@ export function InterpretationTab({ line, canSave }: { line: LineDetail; canSave
       <LayerMethodsCaution />
       <div className="mb-6 grid gap-4 rounded-lg border border-stone-200 bg-white px-5 py-4 sm:grid-cols-2 lg:grid-cols-5">
         <SelectField label="Pick set (latest revision)" value={pickSetId} onChange={(e) => (setPickSetId(e.target.value), setHand(new Map()))} data-testid="layers-pickset">
-          {line.pickSets.map((p) => (
+          {pickSets.map((p) => (
             <option key={p.id} value={p.id}>
               {p.fileName}
             </option>
@@ -120,7 +121,7 @@ function XYField({ value, disabled, onChange }: { value: number | null; disabled
 }
 
 interface InterpretationProps {
-  picks: import('../../api/types').PickRow[];
+  picks: PickRow[];
   model: ModelFile;
   modelId: string;
   pickSetName: string;

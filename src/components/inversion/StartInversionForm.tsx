@@ -3,7 +3,7 @@ import { useNavigate } from 'react-router';
 import { ApiError, errorMessage } from '../../api/errors';
 import { useStartInversion } from '../../api/inversions';
 import { usePickSet } from '../../api/picksets';
-import type { LineDetail, ModelVersionSummary } from '../../api/types';
+import { pickSetsInUse, type LineDetail, type ModelVersionSummary } from '../../api/types';
 import { MAX_INVERSION_ITERATIONS } from '../../../shared/schemas/inversions';
 import { canRunInversions } from '../../lib/permissions';
 import { Button } from '../Button';
@@ -32,7 +32,7 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
   const navigate = useNavigate();
   const start = useStartInversion(line.id);
   const models = line.models as ModelVersionSummary[];
-  const [form, setForm] = useState<InversionFormState>(() => initialFormState(line.pickSets[0]?.id ?? '', models[0]?.id ?? ''));
+  const [form, setForm] = useState<InversionFormState>(() => initialFormState(pickSetsInUse(line.pickSets)[0]?.id ?? '', models[0]?.id ?? ''));
   const [attempted, setAttempted] = useState(false);
   const [advancedOpen, setAdvancedOpen] = useState(false);
   const pickSet = usePickSet(form.pickSetId || null, null);
@@ -44,7 +44,7 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
   if (!canRunInversions(line.myRole)) {
     return <p className="text-stone-600">Geophysicists start inversions; you can open and compare the inversions listed here.</p>;
   }
-  if (line.pickSets.length === 0) {
+  if (pickSetsInUse(line.pickSets).length === 0) {
     return (
       <p data-testid="start-inversion-missing" className="text-stone-700">
         An inversion needs an uploaded pick set on this line first.
@@ -91,7 +91,7 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
     <form onSubmit={submit} data-testid="start-inversion-form" className="flex flex-col gap-5" noValidate>
       <div className="grid gap-4 md:grid-cols-2">
         <SelectField label="Pick set" name="pickSetId" value={form.pickSetId} error={errors.pickSetId} onChange={(e) => (set('pickSetId', e.target.value), set('revision', ''))} data-testid="inversion-pickset">
-          {line.pickSets.map((p) => (
+          {pickSetsInUse(line.pickSets).map((p) => (
             <option key={p.id} value={p.id}>
               {p.fileName} · {p.shots} shots, {p.picks} picks
             </option>

@@ -12,7 +12,7 @@ import {
 } from '../../../shared/model/edit';
 import { isApiError, type ApiIssue } from '../../api/errors';
 import { useSaveModel } from '../../api/models';
-import type { LineDetail, ModelVersionSummary } from '../../api/types';
+import { pickSetsInUse, type LineDetail, type ModelVersionSummary } from '../../api/types';
 import { Button } from '../Button';
 import { Section } from '../Section';
 import { ChecksPanel } from './ChecksPanel';
@@ -79,7 +79,8 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
   const issueMap = useMemo(() => new Map(check.errors.map((e) => [e.path, e.message])), [check]);
   const dirty = draft !== savedDraft;
 
-  const shots = usePreviewShots(line.pickSets, raster);
+  const pickSets = pickSetsInUse(line.pickSets);
+  const shots = usePreviewShots(pickSets, raster);
   // The redraw timing starts at the edit when the model changed, else (another shot, rays on) now.
   const jobRaster = useRef<RasterModel | null>(null);
   const job: PreviewJob | null = useMemo(() => {
@@ -247,7 +248,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
               </p>
 
               <PreviewPanel
-                pickSets={line.pickSets}
+                pickSets={pickSets}
                 pickSetId={shots.pickSetId}
                 onPickSet={shots.setPickSetId}
                 shots={shots.shots}

@@ -1,7 +1,7 @@
 import { useId, useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router';
 import { useStartRun } from '../../api/runs';
-import type { LineDetail, PickSetSummary, ProjectRole, RunStarted, SolverOrder } from '../../api/types';
+import { pickSetsInUse, type LineDetail, type PickSetSummary, type ProjectRole, type RunStarted, type SolverOrder } from '../../api/types';
 import { Button } from '../Button';
 import { SelectField } from '../Field';
 import { RunStartProblem } from './RunStartProblem';
@@ -39,19 +39,20 @@ export function StartRunForm({ line, onStarted }: StartRunFormProps) {
   const start = useStartRun(line.id);
   const models = line.models as ModelChoice[];
   const [modelId, setModelId] = useState(models[0]?.id ?? '');
-  const [pickSetId, setPickSetId] = useState(line.pickSets[0]?.id ?? '');
+  const pickSets = pickSetsInUse(line.pickSets);
+  const [pickSetId, setPickSetId] = useState(pickSets[0]?.id ?? '');
   const [order, setOrder] = useState<SolverOrder>(2);
   const orderName = useId();
 
   if (!canStartRuns(line.myRole)) {
     return <p className="text-stone-600">Geophysicists and project leads start runs; you can open and compare the runs listed here.</p>;
   }
-  if (models.length === 0 || line.pickSets.length === 0) {
+  if (models.length === 0 || pickSets.length === 0) {
     return (
       <p data-testid="start-run-missing" className="text-stone-700">
         A run needs {models.length === 0 ? 'a saved model version' : ''}
-        {models.length === 0 && line.pickSets.length === 0 ? ' and ' : ''}
-        {line.pickSets.length === 0 ? 'an uploaded pick set' : ''} on this line first.
+        {models.length === 0 && pickSets.length === 0 ? ' and ' : ''}
+        {pickSets.length === 0 ? 'a pick set in use' : ''} on this line first.
       </p>
     );
   }
@@ -75,7 +76,7 @@ export function StartRunForm({ line, onStarted }: StartRunFormProps) {
           ))}
         </SelectField>
         <SelectField label="Pick set" value={pickSetId} onChange={(e) => (setPickSetId(e.target.value), start.reset())} name="pickSetId" hint="Its latest revision is used; excluded picks stay out of the statistics.">
-          {line.pickSets.map((p) => (
+          {pickSets.map((p) => (
             <option key={p.id} value={p.id}>
               {pickSetLabel(p)}
             </option>

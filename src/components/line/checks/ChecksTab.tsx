@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import { errorMessage, isApiError } from '../../../api/errors';
 import { usePickSet } from '../../../api/picksets';
-import type { LineDetail } from '../../../api/types';
+import { pickSetsInUse, type LineDetail } from '../../../api/types';
 import { Button } from '../../Button';
 import { EmptyState } from '../../EmptyState';
 import { Loading, LoadError } from '../../LoadState';
@@ -23,7 +23,9 @@ export function ChecksTab({
   onChoose: (pickSetId: string, revision: number | null) => void;
 }) {
   // The newest pick set unless the address names one.
-  const chosen = pickSetId && line.pickSets.some((p) => p.id === pickSetId) ? pickSetId : (line.pickSets[0]?.id ?? null);
+  // Retired sets are offered no more, but an address that names one still opens it.
+  const inUse = pickSetsInUse(line.pickSets);
+  const chosen = pickSetId && line.pickSets.some((p) => p.id === pickSetId) ? pickSetId : (inUse[0]?.id ?? null);
   const detail = usePickSet(chosen, revision);
   const stationXs = useMemo(() => line.stations.map((s) => s.x), [line.stations]);
 
@@ -38,7 +40,7 @@ export function ChecksTab({
   const data = detail.data && detail.data.id === chosen && (revision === null || detail.data.revision.number === revision) ? detail.data : undefined;
   return (
     <>
-      <PickSetPicker pickSets={line.pickSets} pickSetId={chosen} detail={detail.data} revision={revision} onChange={onChoose} failed={detail.isError} />
+      <PickSetPicker pickSets={line.pickSets.filter((p) => !p.retired || p.id === chosen)} pickSetId={chosen} detail={detail.data} revision={revision} onChange={onChoose} failed={detail.isError} />
       {isApiError(detail.error, 404) && detail.error.code === 'revision_not_found' ? (
         <div role="alert" className="rounded-lg border border-stone-300 bg-white px-5 py-4">
           <p className="font-semibold text-stone-900">Revision {revision} of this pick set does not exist.</p>

@@ -4,11 +4,12 @@ import type { PickSetSummary } from '../../../api/types';
 import { formatDate } from '../../../lib/format';
 import { DataTable, Td, Th, Tr } from '../../Table';
 import { formatBytes } from './formatBytes';
+import { RetirePickSet } from './RetirePickSet';
 
 const count = (n: number) => n.toLocaleString('en-GB');
 
-/** Every pick set stored on the line, newest first, each linking to its checks. */
-export function PickSetList({ pickSets, checksHref }: { pickSets: PickSetSummary[]; checksHref: (id: string) => string }) {
+/** Every pick set stored on the line, newest first, each linking to its checks; retired ones marked, with who and why. */
+export function PickSetList({ pickSets, checksHref, lineId, canRetire }: { pickSets: PickSetSummary[]; checksHref: (id: string) => string; lineId: string; canRetire: boolean }) {
   return (
     <DataTable caption="Pick sets of this line" testId="pickset-table" minWidth="52rem">
       <thead>
@@ -32,6 +33,12 @@ export function PickSetList({ pickSets, checksHref }: { pickSets: PickSetSummary
                 {p.fileName}
               </Link>
               <span className="block text-sm text-stone-500">{formatBytes(p.sizeBytes)}</span>
+              {p.retired && (
+                <span data-testid="pickset-retired" className="mt-1 block text-sm text-amber-900">
+                  <span className="rounded-sm bg-amber-100 px-1.5 font-semibold">Retired</span> {formatDate(p.retired.at)}
+                  {p.retired.by ? ` by ${p.retired.by}` : ''}: {p.retired.reason}
+                </span>
+              )}
             </Td>
             <Td className="whitespace-nowrap">
               {p.createdBy?.name ?? "a former member"}
@@ -49,6 +56,11 @@ export function PickSetList({ pickSets, checksHref }: { pickSets: PickSetSummary
               <a href={pickSetFileUrl(p.id)} download={p.fileName}>
                 Original file
               </a>
+              {canRetire && (
+                <span className="ml-3 inline-block align-middle">
+                  <RetirePickSet pickSet={p} lineId={lineId} />
+                </span>
+              )}
             </Td>
           </Tr>
         ))}

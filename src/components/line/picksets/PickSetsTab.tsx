@@ -18,7 +18,7 @@ export function PickSetsTab({ line, canUpload, checksHref, onUploaded }: { line:
             {canUpload ? 'Drop the first pick file above.' : 'A field technician or geophysicist uploads the pick files.'}
           </EmptyState>
         ) : (
-          <PickSetList pickSets={line.pickSets} checksHref={checksHref} />
+          <PickSetList pickSets={line.pickSets} checksHref={checksHref} lineId={line.id} canRetire={canUpload} />
         )}
       </Section>
     </>
