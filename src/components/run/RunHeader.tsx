@@ -29,7 +29,7 @@ export function RunHeader({ run, line, summary, title, extraCrumbs = [] }: { run
       <p className="mt-1 text-sm text-stone-600">
         Started {when(run.createdAt)}
         {summary?.createdBy && <> by {summary.createdBy}</>}
-        {took && <> · {run.status === 'done' ? 'solved' : 'stopped'} in {took}</>}
+        {took && <> · {run.status === 'done' ? 'finished' : 'stopped'} {took} after a worker took it up (reading, solving, rays and storing; the solve alone is under Summary)</>}
       </p>
     </PageHeader>
   );

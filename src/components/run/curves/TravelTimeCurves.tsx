@@ -30,16 +30,23 @@ export const TravelTimeCurves = memo(function TravelTimeCurves({ runId, rows, on
     [runId, shots],
   );
   return (
-    <RunPlot
-      height={680}
-      label="Travel-time curves: observed picks and computed times for every shot, residuals below"
-      data={data}
-      layout={layout}
-      config={RUN_CHART_CONFIG}
-      onClick={(e: Readonly<PlotMouseEvent>) => {
-        const index = e.points[0]?.customdata;
-        if (typeof index === 'number') onPick(index);
-      }}
-    />
+    <figure>
+      <RunPlot
+        height={680}
+        label="Travel-time curves: observed picks and computed times for every shot, residuals below"
+        data={data}
+        layout={layout}
+        config={RUN_CHART_CONFIG}
+        onClick={(e: Readonly<PlotMouseEvent>) => {
+          const index = e.points[0]?.customdata;
+          if (typeof index === 'number') onPick(index);
+        }}
+      />
+      <figcaption data-testid="curves-key" className="mt-2 max-w-prose text-sm text-stone-700">
+        Dots: first arrivals picked in the field, one colour per shot (grey crosses: excluded from the misfit). Lines: times computed on the
+        model. Vertical bars: ±σ, the pick's uncertainty. Lower panel: residual, observed minus computed; a dot above zero arrived later in the
+        field than in the model. Click a dot for that pick's details and ray.
+      </figcaption>
+    </figure>
   );
 });

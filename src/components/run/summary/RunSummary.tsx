@@ -45,7 +45,7 @@ export function RunSummary({ stats, onShowShot }: { stats: RunStats; onShowShot:
         <Figure label="Largest |residual|" value={ms(stats.max_abs_residual_ms)} testId="stat-max" />
         <Figure label="Mean residual" value={`${signed(stats.mean_residual_ms)} ms`} note="observed − computed" />
         <Figure label="Picks compared" value={stats.picks} note={`${stats.shots} shots${stats.excluded ? `, ${stats.excluded} excluded` : ''}`} />
-        <Figure label="Solve time" value={`${num(stats.solve_seconds, 1)} s`} note={`${stats.active_nodes.toLocaleString('en-GB')} ground nodes`} />
+        <Figure label="Solve time, eikonal only" value={`${num(stats.solve_seconds, 1)} s`} note={`${stats.active_nodes.toLocaleString('en-GB')} ground nodes; the whole run took longer (header)`} />
       </dl>
       <div className="mt-4 grid gap-4 md:grid-cols-2">
         <div className="rounded-lg border border-stone-200 bg-white px-4 py-3">
