@@ -1,4 +1,5 @@
 import 'reflect-metadata';
+import '../shared/schemas/messages'; // plain sentences for schema checks, before any schema runs
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';

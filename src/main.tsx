@@ -3,6 +3,7 @@ import '@fontsource/source-sans-3/400-italic.css';
 import '@fontsource/source-sans-3/600.css';
 import '@fontsource/source-sans-3/700.css';
 import './styles.css';
+import '../shared/schemas/messages'; // plain sentences for schema checks, before any schema runs
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { QueryClientProvider } from '@tanstack/react-query';

@@ -2,6 +2,7 @@
  * Reading a model file and a pick file for the command-line tools (solve, invert), with the
  * messages FORMATS.md promises: the file name, then the JSON path or the line and column.
  */
+import '../../shared/schemas/messages'; // plain sentences for schema checks, before any schema runs
 import { createReadStream } from 'node:fs';
 import { readFile, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
