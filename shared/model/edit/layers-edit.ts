@@ -39,20 +39,29 @@ export function addLayerBelow(layers: readonly ModelLayer[], k: number, grid: Gr
   if (isLast) {
     const top = layerTop(layers, k, grid, surface);
     upper.base = midline(top, flat(grid, gridBottom(grid)), grid.x0, xEnd);
-    const fresh: ModelLayer = { name: `layer ${layers.length + 1}`, v_top: roundV(upper.v_base * 1.2), v_base: roundV(upper.v_base * 1.4) };
+    const fresh: ModelLayer = { name: freshName(layers), v_top: roundV(upper.v_base * 1.2), v_base: roundV(upper.v_base * 1.4) };
     out.push(fresh);
     return out;
   }
   const lowerBase = layers[k + 1].base ?? flat(grid, gridBottom(grid));
   const upperBase = upper.base ?? flat(grid, gridBottom(grid));
   const fresh: ModelLayer = {
-    name: `layer ${layers.length + 1}`,
+    name: freshName(layers),
     base: midline(upperBase, lowerBase, grid.x0, xEnd),
     v_top: roundV((upper.v_base + layers[k + 1].v_top) / 2),
     v_base: roundV(layers[k + 1].v_top),
   };
   out.splice(k + 1, 0, fresh);
   return out;
+}
+
+/** A name for an added layer that says it is new and is not taken ("new layer", "new layer 2", …), whatever its place. */
+function freshName(layers: readonly ModelLayer[]): string {
+  const taken = new Set(layers.map((l) => l.name));
+  for (let n = 1; ; n++) {
+    const name = n === 1 ? 'new layer' : `new layer ${n}`;
+    if (!taken.has(name)) return name;
+  }
 }
 
 /** Remove layer k (at least one layer stays). Removing the last layer makes the one above it the last, without a base. */

@@ -1,10 +1,12 @@
-/** What stands in the way of saving (errors, each with its JSON path) and what merely looks unusual (warnings). */
+/** What stands in the way of saving (errors, each named as the editor labels its field) and what merely looks unusual (warnings). */
 import type { ApiIssue } from '../../api/errors';
+import type { ModelFile } from '../../../shared/model';
 import type { DraftCheck } from '../../../shared/model/edit';
+import { fieldLabel, plainIssue } from './issueLabels';
 
 const pathText = (p: ApiIssue['path']): string => (Array.isArray(p) ? p.join('.') : p);
 
-export function ChecksPanel({ check, serverIssues, serverMessage }: { check: DraftCheck; serverIssues: ApiIssue[]; serverMessage: string | null }) {
+export function ChecksPanel({ check, serverIssues, serverMessage, draft }: { check: DraftCheck; serverIssues: ApiIssue[]; serverMessage: string | null; draft: ModelFile | null }) {
   const { errors, warnings } = check;
   return (
     <div data-testid="checks" className="space-y-3 text-sm">
@@ -21,7 +23,7 @@ export function ChecksPanel({ check, serverIssues, serverMessage }: { check: Dra
           <ul className="mt-1 list-disc space-y-0.5 pl-5">
             {errors.slice(0, 30).map((e, i) => (
               <li key={i}>
-                <code className="font-mono text-xs">{e.path}</code>: {e.message}
+                <span className="font-semibold">{fieldLabel(e.path, draft)}</span>: {plainIssue(e.path, e.message)}
               </li>
             ))}
           </ul>
@@ -44,7 +46,7 @@ export function ChecksPanel({ check, serverIssues, serverMessage }: { check: Dra
             <ul className="mt-1 list-disc space-y-0.5 pl-5">
               {serverIssues.slice(0, 30).map((e, i) => (
                 <li key={i}>
-                  <code className="font-mono text-xs">{pathText(e.path)}</code>: {e.message}
+                  <span className="font-semibold">{fieldLabel(pathText(e.path), draft)}</span>: {plainIssue(pathText(e.path), e.message)}
                 </li>
               ))}
             </ul>

@@ -303,7 +303,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
         </div>
         <div>
           <Section title="Checks">
-            <ChecksPanel check={check} serverIssues={serverIssues} serverMessage={serverError ? (serverError as Error).message : null} />
+            <ChecksPanel check={check} draft={draft} serverIssues={serverIssues} serverMessage={serverError ? (serverError as Error).message : null} />
           </Section>
           {!readOnly && (
             <Section title="Save">
