@@ -16,8 +16,8 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
 function TopBar({ me }: { me: Me }) {
   const navigate = useNavigate();
   const { pathname } = useLocation();
-  // Project and line pages live under "Projects" even though their addresses do not start with "/".
-  const inProjects = pathname === '/' || pathname.startsWith('/projects/') || pathname.startsWith('/lines/') || pathname.startsWith('/reports/');
+  // Every page of a project's work (lines, models, runs, inversions, reports) lives under "Projects".
+  const inProjects = pathname === '/' || /^\/(projects|lines|models|runs|reports)\//.test(pathname);
   const signOut = useSignOut(() => navigate('/signin', { replace: true }));
   return (
     <header className="border-b border-stone-200 bg-white">

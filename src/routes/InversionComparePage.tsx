@@ -21,6 +21,7 @@ import { runLabel } from '../components/run/compare/CompareChooser';
 import { DifferenceView } from '../components/run/compare/DifferenceView';
 import { ms, num } from '../components/run/format';
 import { useElementWidth } from '../components/run/useElementWidth';
+import { useProject } from '../api/projects';
 
 interface SideProps {
   letter: 'A' | 'B';
@@ -92,6 +93,7 @@ function Refusal({ title, children }: { title: string; children: ReactNode }) {
 }
 
 function Comparison({ inversion, target, line }: { inversion: InversionView; target: CompareTarget; line: LineDetail | undefined }) {
+  const project = useProject(line?.projectId ?? '', { enabled: Boolean(line?.projectId) });
   const isInv = target.kind === 'inversion';
   const bInv = useInversion(isInv ? target.id : '');
   const bRun = useRun(isInv ? '' : target.id);
@@ -128,6 +130,7 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
       title={isInv ? 'Two inversions side by side' : 'Inversion beside a forward run'}
       crumbs={[
         { label: 'Projects', to: '/' },
+        { label: project.data?.name ?? 'Project', to: line ? `/projects/${line.projectId}` : undefined },
         { label: line?.name ?? 'Line', to: `/lines/${inversion.lineId}?tab=inversions` },
         { label: 'Inversion A', to: `/lines/${inversion.lineId}/inversions/${inversion.id}` },
       ]}

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router';
+import { useProject } from '../api/projects';
 import { lineRuns, useResiduals, useRun, useRunLine } from '../api/runs';
 import type { LineRunSummary, RunDetail } from '../api/types';
 import { Loading, LoadError } from '../components/LoadState';
@@ -26,6 +27,7 @@ export function RunComparePage() {
   const a = useRun(runId);
   const b = useRun(otherRunId);
   const line = useRunLine(a.data?.lineId);
+  const project = useProject(line.data?.projectId ?? '', { enabled: Boolean(line.data?.projectId) });
   const bothDone = a.data?.status === 'done' && b.data?.status === 'done' && a.data.lineId === b.data.lineId;
   const ra = useResiduals(runId, bothDone);
   const rb = useResiduals(otherRunId, bothDone);
@@ -43,6 +45,7 @@ export function RunComparePage() {
       title="Two runs compared"
       crumbs={[
         { label: 'Projects', to: '/' },
+        { label: project.data?.name ?? 'Project', to: line.data ? `/projects/${line.data.projectId}` : undefined },
         { label: line.data?.name ?? 'Line', to: `/lines/${runA.lineId}` },
         { label: 'Run A', to: `/runs/${runA.id}` },
       ]}

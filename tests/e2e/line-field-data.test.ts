@@ -56,6 +56,11 @@ describe('line page: stations, pick uploads and checks in the browser', () => {
     await page.getByTestId('stations-save').click();
     await page.getByTestId('stations-alert').waitFor();
     expect(await page.getByTestId('station-row-errors').first().textContent()).toMatch(/x: must be greater than the row above/);
+    // Unsaved edits hold a link to another page until the person decides (issue 17 item 11); other tabs of the line may be visited.
+    await page.getByRole('link', { name: 'Projects', exact: true }).first().click();
+    await page.getByTestId('stations-leave-guard').waitFor();
+    await page.getByRole('button', { name: 'Stay and keep editing' }).click();
+    expect(new URL(page.url()).pathname).toMatch(/^\/lines\//);
     await page.getByRole('button', { name: 'Discard changes' }).click();
     expect(await page.getByTestId('station-row-errors').count()).toBe(0);
 

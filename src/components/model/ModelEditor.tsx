@@ -13,7 +13,6 @@ import {
 import { isApiError, type ApiIssue } from '../../api/errors';
 import { useSaveModel } from '../../api/models';
 import { pickSetsInUse, type LineDetail, type ModelVersionSummary } from '../../api/types';
-import { Button } from '../Button';
 import { Section } from '../Section';
 import { ChecksPanel } from './ChecksPanel';
 import { GridForm } from './GridForm';
@@ -29,6 +28,7 @@ import type { PreviewJob } from './usePreview';
 import { WithPreview } from './WithPreview';
 import { usePreviewShots } from './usePreviewShots';
 import { useLeaveGuard } from './useLeaveGuard';
+import { LeavePrompt } from '../LeavePrompt';
 import { useModelDraft } from './useModelDraft';
 import { VersionList } from './VersionList';
 
@@ -172,26 +172,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
 
   return (
     <div data-testid="model-editor" data-dirty={dirty}>
-      {blocker.state === 'blocked' && (
-        <div
-          role="alertdialog"
-          aria-labelledby="leave-title"
-          data-testid="leave-guard"
-          ref={(el) => el?.scrollIntoView({ block: 'center' })}
-          className="mb-4 rounded-lg border border-amber-300 bg-amber-50 px-4 py-3 text-amber-950">
-          <p id="leave-title" className="font-semibold">
-            Leave the editor without saving? The changes since the last save will be lost.
-          </p>
-          <p className="mt-2 flex gap-3">
-            <Button size="sm" variant="danger" onClick={() => blocker.proceed()}>
-              Leave without saving
-            </Button>
-            <Button size="sm" variant="secondary" onClick={() => blocker.reset()}>
-              Stay and keep editing
-            </Button>
-          </p>
-        </div>
-      )}
+      <LeavePrompt blocker={blocker} what="Leave the editor without saving? The changes since the last save will be lost." />
       <Toolbar
         tool={tool}
         onTool={setTool}

@@ -1,9 +1,11 @@
 import { useEffect, useState } from 'react';
+import { useBlocker } from 'react-router';
 import { errorMessage, isApiError } from '../../../api/errors';
 import { useSaveStations } from '../../../api/lines';
 import type { LineDetail, Station } from '../../../api/types';
 import { Button } from '../../Button';
 import { EmptyState } from '../../EmptyState';
+import { LeavePrompt } from '../../LeavePrompt';
 import { Section } from '../../Section';
 import { ElevationProfile } from './ElevationProfile';
 import { StationCsvUpload } from './StationCsvUpload';
@@ -70,13 +72,15 @@ function StationWorkbench({ line }: { line: LineDetail }) {
     if (!dirty || rows.length === 0) setRows(toDraft(line.stations));
   }
 
-  // Leaving the page (reload, closing the tab) with unsaved edits asks first.
+  // Leaving with unsaved edits asks first: reload or closing the tab (the browser's question), or a
+  // link to another page (held below). Other tabs of the line keep this one mounted, so they may.
   useEffect(() => {
     if (!dirty) return;
     const warn = (e: BeforeUnloadEvent) => e.preventDefault();
     window.addEventListener('beforeunload', warn);
     return () => window.removeEventListener('beforeunload', warn);
   }, [dirty]);
+  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
 
   const local = checkRows(rows);
   const server = serverRowErrors(save.error, sent);
@@ -110,6 +114,7 @@ function StationWorkbench({ line }: { line: LineDetail }) {
 
   return (
     <Section title="Stations" description={DESCRIPTION}>
+      <LeavePrompt blocker={blocker} what="Leave without saving the station table? The edits since the last save will be lost." testId="stations-leave-guard" />
       <div className="flex flex-col gap-6">
         {preview.length > 1 && <ElevationProfile stations={preview} />}
         <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
