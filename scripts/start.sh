@@ -52,6 +52,8 @@ for _ in $(seq 1 100); do
   curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break
   sleep 0.2
 done
+# In demo mode the worker also makes the demo's finished run and shared report (once; later starts skip it).
+( node --import tsx scripts/demo-finish.ts ) & pids+=($!)
 printf '\n  Timefield is running at http://%s:%s\n\n' "${HOST:-127.0.0.1}" "$PORT"
 # The demo accounts exist only in local demo mode (server/config.ts decides, for the seed and here).
 if node --import tsx -e "import('./server/config.ts').then((c) => process.exit(c.isLocalDemoMode(process.env) ? 0 : 1))"; then

@@ -54,4 +54,24 @@ describe('the demo line’s inversion', () => {
     const [{ n }] = await dataSource.query('SELECT count(*)::int AS n FROM inversion_iterations WHERE inversion_id = $1', [done.id]);
     expect(n).toBe(done.stats.iterations + 1);
   }, 180_000);
+
+  it('then gets a finished run and a report taken through the whole review by the same worker (issue 17 item 2), once', async () => {
+    const finish = () => spawnSync(process.execPath, ['--import', 'tsx', 'scripts/demo-finish.ts'], {
+      env: { ...process.env, HOST: '127.0.0.1', TRUST_PROXY: '', TF_DEMO: '' }, encoding: 'utf8', timeout: 300_000,
+    });
+    const first = finish();
+    expect(first.status, `${first.stdout}${first.stderr}${worker?.output.join('')}`).toBe(0);
+    expect(first.stdout).toMatch(/demo run done[\s\S]*demo report submitted[\s\S]*demo report approved[\s\S]*demo report shared/);
+    const runs = await dataSource.query(`SELECT r.id, r.status FROM runs r JOIN survey_lines l ON l.id = r.line_id WHERE l.name = 'TQ-L1'`);
+    expect(runs).toEqual([{ id: expect.any(String), status: 'done' }]);
+    const reports = await dataSource.query(`SELECT id, status, reviewed_by IS NOT NULL AS reviewed, approved_pdf IS NOT NULL AS pdf FROM reports WHERE run_id = $1`, [runs[0].id]);
+    expect(reports).toEqual([{ id: expect.any(String), status: 'shared', reviewed: true, pdf: true }]);
+    const steps = await dataSource.query(`SELECT action FROM audit_log WHERE object_id = $1 ORDER BY id`, [reports[0].id]);
+    expect(steps.map((r: { action: string }) => r.action)).toEqual(expect.arrayContaining(['report.submit', 'report.approve', 'report.share']));
+
+    const again = finish();
+    expect(again.status, again.stderr).toBe(0);
+    expect(again.stdout).not.toMatch(/queued|started|submitted|approved|shared\b(?! report)/);
+    expect(await dataSource.query(`SELECT id FROM reports WHERE run_id = $1`, [runs[0].id])).toHaveLength(1);
+  }, 360_000);
 });
