@@ -20,6 +20,7 @@ export const policyTable = {
   'auth.login': 'anyone',
   'auth.logout': 'signed_in',
   'auth.me': 'signed_in',
+  'auth.session': 'anyone',
   'auth.password.change': 'signed_in',
 
   'users.list': { admin: true },

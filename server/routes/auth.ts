@@ -65,6 +65,12 @@ export function authRouter(redis: Redis): Router {
     res.json(await presentMe(req.user!));
   });
 
+  // Who is signed in, if anyone: the pages ask this on every load, and a signed-out visitor is an
+  // expected answer (200, user null), not an error in the browser's console.
+  r.get('/auth/session', authorize('auth.session'), async (req, res) => {
+    res.json({ user: req.user ? await presentMe(req.user) : null });
+  });
+
   // A signed-in user's own password; guessing the current one counts against the sign-in limits.
   r.post('/auth/password', authorize('auth.password.change'), async (req, res) => {
     const body = parse(changePasswordBody, req.body);

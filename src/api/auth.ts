@@ -1,6 +1,5 @@
 import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { apiRequest, resetCsrfToken } from './client';
-import { isApiError } from './errors';
 import { queryKeys } from './keys';
 import type { Me, SignInBody } from './types';
 
@@ -12,18 +11,11 @@ function forgetEverythingButMe(queryClient: QueryClient): void {
   queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== queryKeys.me[0] });
 }
 
-/** The signed-in user, or null when the session is absent (401). */
+/** The signed-in user, or null when no one is (GET /api/auth/session answers 200 either way). */
 export function useMe() {
   return useQuery({
     queryKey: queryKeys.me,
-    queryFn: async ({ signal }): Promise<Me | null> => {
-      try {
-        return await apiRequest<Me>('/api/auth/me', { signal });
-      } catch (err) {
-        if (isApiError(err, 401)) return null;
-        throw err;
-      }
-    },
+    queryFn: async ({ signal }): Promise<Me | null> => (await apiRequest<{ user: Me | null }>('/api/auth/session', { signal })).user,
     staleTime: 60_000,
   });
 }

@@ -30,6 +30,17 @@ describe('sign-in, sessions and CSRF', () => {
     expect((await agent.post('/api/projects').set('X-CSRF-Token', fresh).send({})).status).toBe(400);
   });
 
+  it('says who is signed in, if anyone, without an error status for a signed-out visitor (issue 17 item 14)', async () => {
+    const anon = await request(t.app).get('/api/auth/session');
+    expect(anon.status).toBe(200);
+    expect(anon.body).toEqual({ user: null });
+    const geo = await signedInAgent(t.app, emailOf('geophysicist'), PASSWORD);
+    const me = await geo.get('/api/auth/me');
+    const session = await geo.get('/api/auth/session');
+    expect(session.status).toBe(200);
+    expect(session.body.user).toEqual(me.body); // the same presentation as /api/auth/me
+  });
+
   it('answers a wrong password and an unknown e-mail with the same message', async () => {
     const agent = await anonymousAgent(t.app);
     const wrong = await agent.post('/api/auth/login').set('X-CSRF-Token', agent.csrf).send({ email: emailOf('geophysicist'), password: 'not-the-password' });

@@ -21,6 +21,8 @@ const EXPECTED: Record<string, Caller[]> = {
   'POST /api/auth/login': CALLERS,
   'POST /api/auth/logout': SIGNED_IN,
   'GET /api/auth/me': SIGNED_IN,
+  // Issue 17 item 14: who is signed in, if anyone (200 with user null when no one is), for a clean console.
+  'GET /api/auth/session': CALLERS,
   // Issue 16: a signed-in user changes their own password.
   'POST /api/auth/password': SIGNED_IN,
   'GET /api/users': ['admin'],
