@@ -25,7 +25,7 @@ function TopBar({ me }: { me: Me }) {
         <NavLink to="/" className="text-xl font-bold tracking-tight text-stone-900 no-underline hover:text-accent-800">
           Timefield
         </NavLink>
-        <nav aria-label="Main" className="order-last flex w-full gap-1 sm:order-none sm:w-auto">
+        <nav aria-label="Main" className="order-last flex w-full flex-wrap gap-1 sm:order-none sm:w-auto">
           <NavLink to="/" end className={() => navClass({ isActive: inProjects })}>
             Projects
           </NavLink>

@@ -160,7 +160,7 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
           {!isInv && ' The forward run’s model was drawn by hand, so it has no coverage mask or depth of investigation.'}
         </p>
         {(sectionA.error || sectionB.error || runGrid.error) && <LoadError error={sectionA.error ?? sectionB.error ?? runGrid.error} what="section" />}
-        <div className="grid gap-6 xl:grid-cols-2">
+        <div className="grid grid-cols-1 gap-6 xl:grid-cols-2">
           {sectionA.data && range ? (
             <InversionSideView letter="A" extent={extent} inversion={inversion} section={sectionA.data} range={range} threshold={threshold} contours={contours} exaggeration={ve} />
           ) : (

@@ -33,7 +33,7 @@ function OrganisationContent() {
       {org.isPending && <Loading what="organisation" />}
       {org.isError && <LoadError error={org.error} what="organisation" onRetry={() => void org.refetch()} />}
       {org.data && (
-        <div className="grid items-start gap-6 lg:grid-cols-2">
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-2">
           <Panel title="Name and address">
             <DetailsForm org={org.data} />
           </Panel>

@@ -108,7 +108,7 @@ function TeamView({ report, role }: { report: ReportDetail; role: ProjectRole | 
       <div className="mb-8">
         <ReportCaution />
       </div>
-      <div className="mb-10 grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+      <div className="mb-10 grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
         <PdfPanel report={report} />
         <WorkflowPanel report={report} role={role} />
       </div>
@@ -132,7 +132,7 @@ function ClientView({ report }: { report: ReportDetail }) {
       <div className="mb-8">
         <ReportCaution />
       </div>
-      <div className="mb-10 grid items-start gap-6 lg:grid-cols-2">
+      <div className="mb-10 grid grid-cols-1 items-start gap-6 lg:grid-cols-2">
         <PdfPanel report={report} forClient />
         <div className="rounded-lg border border-stone-200 bg-white p-5 shadow-xs">
           <h2 className="text-lg font-semibold text-stone-900">About this report</h2>

@@ -101,7 +101,7 @@ export function RunComparePage() {
           {runA.pickSetId !== runB.pickSetId && <li>Only picks of the same shot at the same receiver position are differenced below.</li>}
           {runA.modelId === runB.modelId && <li>Both runs solved the same model version.</li>}
         </ul>
-        <section aria-labelledby="cmp-stats" className="mb-10 grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <section aria-labelledby="cmp-stats" className="mb-10 grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
           <div>
             <h2 id="cmp-stats" className="mb-3 text-xl font-semibold text-stone-900">
               Statistics side by side

@@ -62,7 +62,7 @@ export function AddMemberForm({ projectId, members }: { projectId: string; membe
           {added}
         </p>
       )}
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
         <SelectField
           label="Account"
           name="userId"

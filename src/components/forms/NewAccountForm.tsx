@@ -54,7 +54,7 @@ export function NewAccountForm({ onCreated }: { onCreated: (user: User) => void 
   }
 
   return (
-    <form ref={formRef} noValidate onSubmit={onSubmit} data-testid="new-account-form" className="grid gap-4 sm:grid-cols-2">
+    <form ref={formRef} noValidate onSubmit={onSubmit} data-testid="new-account-form" className="grid grid-cols-1 gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">
         <FormAlert problems={problems} />
       </div>

@@ -41,7 +41,7 @@ export function NewProjectForm({ onCreated }: { onCreated: (project: ProjectSumm
   }
 
   return (
-    <form noValidate onSubmit={onSubmit} data-testid="new-project-form" className="grid gap-4 sm:grid-cols-2">
+    <form noValidate onSubmit={onSubmit} data-testid="new-project-form" className="grid grid-cols-1 gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">
         <FormAlert problems={problems} />
       </div>

@@ -46,7 +46,7 @@ export function InterpretationTab({ line, canSave }: { line: LineDetail; canSave
   return (
     <div data-testid="interpretation">
       <LayerMethodsCaution />
-      <div className="mb-6 grid gap-4 rounded-lg border border-stone-200 bg-white px-5 py-4 sm:grid-cols-2 lg:grid-cols-5">
+      <div className="mb-6 grid grid-cols-1 gap-4 rounded-lg border border-stone-200 bg-white px-5 py-4 sm:grid-cols-2 lg:grid-cols-5">
         <SelectField label="Pick set (latest revision)" value={pickSetId} onChange={(e) => (setPickSetId(e.target.value), setHand(new Map()))} data-testid="layers-pickset">
           {pickSets.map((p) => (
             <option key={p.id} value={p.id}>

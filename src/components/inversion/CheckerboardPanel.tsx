@@ -65,7 +65,7 @@ export function CheckerboardPanel({ section, checkerboard }: { section: Inversio
         )}
         .
       </p>
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
         <PatternChart title="Pattern put in" z={truth} section={section} limit={limit} testId="checkerboard-true" />
         <PatternChart title="Pattern recovered" z={recovered} section={section} limit={limit} testId="checkerboard-recovered" />
       </div>

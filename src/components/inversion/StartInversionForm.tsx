@@ -89,7 +89,7 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
 
   return (
     <form onSubmit={submit} data-testid="start-inversion-form" className="flex flex-col gap-5" noValidate>
-      <div className="grid gap-4 md:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
         <SelectField label="Pick set" name="pickSetId" value={form.pickSetId} error={errors.pickSetId} onChange={(e) => (set('pickSetId', e.target.value), set('revision', ''))} data-testid="inversion-pickset">
           {pickSetsInUse(line.pickSets).map((p) => (
             <option key={p.id} value={p.id}>
@@ -160,7 +160,7 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
 
       <details open={advancedOpen || advancedError} onToggle={(e) => setAdvancedOpen(e.currentTarget.open)} className="rounded-lg border border-stone-200 bg-stone-50 px-4 py-3" data-testid="inversion-advanced">
         <summary className="cursor-pointer font-semibold text-stone-800">Advanced settings</summary>
-        <div className="mt-3 grid gap-4 md:grid-cols-3">
+        <div className="mt-3 grid grid-cols-1 gap-4 md:grid-cols-3">
           <TextField label="Iteration cap" name="maxIterations" inputMode="numeric" value={form.maxIterations} error={errors['settings.maxIterations']} onChange={(e) => set('maxIterations', e.target.value)} hint={`1 to ${MAX_INVERSION_ITERATIONS}; it stops earlier once χ² is near 1 or stops falling.`} data-testid="inversion-iterations" />
           <fieldset className="flex flex-col gap-1">
             <legend className="font-semibold text-stone-800">Smoothing weight</legend>

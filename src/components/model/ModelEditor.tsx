@@ -248,7 +248,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
         }}
       </WithPreview>
 
-      <div className="mt-8 grid gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+      <div className="mt-8 grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <div>
           <Section title="Layers" description="Top-down; each layer's base is the next layer's top.">
             {draft.layers ? (

@@ -66,7 +66,7 @@ export function StartReportForm({ source, onStarted }: StartReportFormProps) {
   return (
     <form noValidate onSubmit={onSubmit} data-testid="start-report-form" className="flex flex-col gap-4">
       <FormAlert problems={problems} testId="start-report-error" />
-      <div className="grid gap-4 md:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
         {shotIds.length > 0 && (
           <SelectField label="Shot for the velocity section" name="shotId" value={shotId} onChange={(e) => (setShotId(e.target.value), start.reset())} error={errors.shotId} hint="The section shows this shot’s wavefronts and rays.">
             {shotIds.map((s) => (

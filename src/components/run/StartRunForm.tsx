@@ -67,7 +67,7 @@ export function StartRunForm({ line, onStarted }: StartRunFormProps) {
 
   return (
     <form onSubmit={submit} data-testid="start-run-form" className="flex flex-col gap-4" noValidate>
-      <div className="grid gap-4 md:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
         <SelectField label="Model version" value={modelId} onChange={(e) => (setModelId(e.target.value), start.reset())} name="modelId">
           {models.map((m) => (
             <option key={m.id} value={m.id}>

@@ -163,7 +163,7 @@ export function PickSetChecks({
         </p>
       </Section>
 
-      <div className="grid gap-x-8 xl:grid-cols-2">
+      <div className="grid grid-cols-1 gap-x-8 xl:grid-cols-2">
         <Section title="Apparent velocities" description="Choose a shot and an x range on one side of its source; the fitted line is drawn and labelled on the chart.">
           <ApparentVelocityPanel shots={data.shots} picksOfShot={(id) => byShot.get(id) ?? []} request={fitRequest} onRequest={setFitRequest} fits={fits} onFits={setFits} />
         </Section>

@@ -46,7 +46,7 @@ export function StationsTab({ line, canEdit }: { line: LineDetail; canEdit: bool
             A field technician or geophysicist enters or uploads the stations.
           </EmptyState>
         ) : (
-          <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+          <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
             <StationTable stations={line.stations} />
             <ElevationProfile stations={line.stations} />
           </div>
@@ -117,7 +117,7 @@ function StationWorkbench({ line }: { line: LineDetail }) {
       <LeavePrompt blocker={blocker} what="Leave without saving the station table? The edits since the last save will be lost." testId="stations-leave-guard" />
       <div className="flex flex-col gap-6">
         {preview.length > 1 && <ElevationProfile stations={preview} />}
-        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
           <div className="flex min-w-0 flex-col gap-4">
             <div className="flex flex-wrap items-center gap-3">
               <Button onClick={onSave} busy={save.isPending} busyLabel="Saving…" disabled={!dirty} data-testid="stations-save">

@@ -21,7 +21,7 @@ export function DifferenceView({ a, b }: { a: ResidualRow[]; b: ResidualRow[] })
     return <p className="rounded-md border border-amber-300 bg-amber-50 px-4 py-3 text-amber-900">The two runs share no pick (same shot at the same receiver position), so there is nothing to difference.</p>;
   }
   return (
-    <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[1fr_20rem]">
       <div>
         {(comparison.onlyA > 0 || comparison.onlyB > 0) && (
           <p className="mb-2 text-sm text-stone-700">

@@ -24,7 +24,7 @@ export function MisfitView({ rows, selected, onSelect, onShowRay, onShowInTable 
   const matrix = useMemo(() => buildMatrix(rows, (r) => r.shotId, (r) => r.receiverX), [rows]);
   const limit = useMemo(() => symmetricLimit(rows.filter((r) => !r.excluded).map((r) => r.residualMs)), [rows]);
   return (
-    <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[1fr_20rem]">
       <div>
         <MisfitGrid
           matrix={matrix}

@@ -47,7 +47,7 @@ export function RunSummary({ stats, onShowShot }: { stats: RunStats; onShowShot:
         <Figure label="Picks compared" value={stats.picks} note={`${stats.shots} shots${stats.excluded ? `, ${stats.excluded} excluded` : ''}`} />
         <Figure label="Solve time, eikonal only" value={`${num(stats.solve_seconds, 1)} s`} note={`${stats.active_nodes.toLocaleString('en-GB')} ground nodes; the whole run took longer (header)`} />
       </dl>
-      <div className="mt-4 grid gap-4 md:grid-cols-2">
+      <div className="mt-4 grid grid-cols-1 gap-4 md:grid-cols-2">
         <div className="rounded-lg border border-stone-200 bg-white px-4 py-3">
           <h3 className="font-semibold text-stone-900">Worst shots</h3>
           <ol data-testid="worst-shots" className="mt-1 space-y-1">

@@ -67,7 +67,7 @@ export function ResidualTable({ rows, lineName, runId, initialShot, selectedPick
 
   return (
     <div data-testid="residual-table-view">
-      <form className="mb-4 grid gap-4 sm:grid-cols-2 lg:grid-cols-5" onSubmit={(e) => e.preventDefault()} aria-label="Filter the residuals">
+      <form className="mb-4 grid grid-cols-1 gap-4 sm:grid-cols-2 lg:grid-cols-5" onSubmit={(e) => e.preventDefault()} aria-label="Filter the residuals">
         <SelectField label="Shot" value={shot} onChange={(e) => onFilter(setShot)(e.target.value)} data-testid="filter-shot">
           <option value="">All shots</option>
           {shots.map((s) => (
