@@ -28,6 +28,15 @@ describe('compareResiduals', () => {
     expect(c.onlyB).toBe(0);
   });
 
+  it('measures which run is closer to the pick by the size of the residual, not its sign (issue 17 item 7)', () => {
+    // A: −0.5 ms (pick earlier than computed); B: +0.2 ms. B is closer (0.2 < 0.5) though B − A = +0.7 ms.
+    const a = [row({ shotId: 'S1', receiverX: 0, observedMs: 10, computedMs: 10.5 })];
+    const b = [row({ shotId: 'S1', receiverX: 0, observedMs: 10, computedMs: 9.8 })];
+    const [m] = compareResiduals(a, b).matched;
+    expect(m!.diffMs).toBeCloseTo(0.7, 12);
+    expect(m!.fitChangeMs).toBeCloseTo(-0.3, 12);
+  });
+
   it('pairs by shot and receiver position and counts the picks only one run has', () => {
     const a = [row({ shotId: 'S1', receiverX: 0 }), row({ shotId: 'S1', receiverX: 5 })];
     const b = [row({ shotId: 'S1', receiverX: 5 }), row({ shotId: 'S2', receiverX: 5 })];

@@ -8,13 +8,16 @@ import { MisfitGrid } from '../misfit/MisfitGrid';
 import { compareResiduals, type MatchedPick } from './residualDifference';
 
 const describe = (m: MatchedPick) =>
-  `Shot ${m.shotId}, receiver ${metres(m.receiverX)}: residual changes by ${signed(m.diffMs, 3)} ms (A ${signed(m.a.residualMs)}, B ${signed(m.b.residualMs)})`;
+  `Shot ${m.shotId}, receiver ${metres(m.receiverX)}: ${m.fitChangeMs < 0 ? 'B closer to the pick' : m.fitChangeMs > 0 ? 'A closer to the pick' : 'both as close'} by ${Math.abs(m.fitChangeMs).toFixed(3)} ms (residual A ${signed(m.a.residualMs)}, B ${signed(m.b.residualMs)})`;
 
-/** Residual of B minus residual of A for every pick in both runs, shots × receivers. */
+/**
+ * Which run is closer to each pick in both runs, shots × receivers: the change in the size of the
+ * residual, |B| − |A| (a change of sign alone, −0.5 → +0.2 ms, is B fitting better, not worse).
+ */
 export function DifferenceView({ a, b }: { a: ResidualRow[]; b: ResidualRow[] }) {
   const comparison = useMemo(() => compareResiduals(a, b), [a, b]);
   const matrix = useMemo(() => buildMatrix(comparison.matched, (m) => m.shotId, (m) => m.receiverX), [comparison]);
-  const limit = useMemo(() => symmetricLimit(comparison.matched.map((m) => m.diffMs), 0.01), [comparison]);
+  const limit = useMemo(() => symmetricLimit(comparison.matched.map((m) => m.fitChangeMs), 0.01), [comparison]);
   const [selected, setSelected] = useState<MatchedPick | null>(null);
 
   if (comparison.matched.length === 0) {
@@ -30,16 +33,16 @@ export function DifferenceView({ a, b }: { a: ResidualRow[]; b: ResidualRow[] })
         )}
         <MisfitGrid
           matrix={matrix}
-          valueOf={(m) => m.diffMs}
+          valueOf={(m) => m.fitChangeMs}
           excludedOf={(m) => m.a.excluded || m.b.excluded}
           describe={describe}
           limit={limit}
           selected={selected}
           onSelect={setSelected}
-          label="Change in residual from run A to run B: shots in rows, receiver positions in columns"
+          label="Which run is closer to each pick, |residual B| − |residual A|: shots in rows, receiver positions in columns"
           testId="difference-grid"
         />
-        <ColourLegend limit={limit} negative="B's residual lower than A's" positive="B's residual higher than A's" testId="difference-legend" />
+        <ColourLegend limit={limit} negative="blue: run B fits the pick better (smaller |residual|)" positive="red: run A fits the pick better" testId="difference-legend" />
       </div>
       <div>
         {selected ? (
@@ -58,8 +61,8 @@ export function DifferenceView({ a, b }: { a: ResidualRow[]; b: ResidualRow[] })
               <dd>
                 {signed(selected.a.residualMs)} → {signed(selected.b.residualMs)} ms
               </dd>
-              <dt className="text-stone-600">Change</dt>
-              <dd className="font-semibold">{signed(selected.diffMs, 3)} ms</dd>
+              <dt className="text-stone-600">|B| − |A|</dt>
+              <dd className="font-semibold">{signed(selected.fitChangeMs, 3)} ms</dd>
             </dl>
             <p className="mt-2 text-sm text-stone-700">
               {Math.abs(selected.b.residualMs) < Math.abs(selected.a.residualMs) ? 'Run B explains this pick better.' : Math.abs(selected.b.residualMs) > Math.abs(selected.a.residualMs) ? 'Run A explains this pick better.' : 'Both runs explain this pick equally.'}

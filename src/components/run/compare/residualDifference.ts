@@ -1,13 +1,16 @@
 import type { ResidualRow } from '../../../api/types';
 import { receiverKey } from '../misfit/matrix';
 
-/** One pick present in both runs; difference = residual in B − residual in A (ms). */
+/** One pick present in both runs (ms). */
 export interface MatchedPick {
   shotId: string;
   receiverX: number;
   a: ResidualRow;
   b: ResidualRow;
+  /** Residual in B − residual in A. */
   diffMs: number;
+  /** |residual in B| − |residual in A|: below zero B is closer to the pick (fits it better). */
+  fitChangeMs: number;
 }
 
 export interface ResidualComparison {
@@ -28,7 +31,7 @@ export function compareResiduals(a: readonly ResidualRow[], b: readonly Residual
   for (const rb of b) {
     const ra = byKey.get(pickKey(rb));
     if (!ra) continue;
-    matched.push({ shotId: rb.shotId, receiverX: rb.receiverX, a: ra, b: rb, diffMs: rb.residualMs - ra.residualMs });
+    matched.push({ shotId: rb.shotId, receiverX: rb.receiverX, a: ra, b: rb, diffMs: rb.residualMs - ra.residualMs, fitChangeMs: Math.abs(rb.residualMs) - Math.abs(ra.residualMs) });
   }
   return { matched, onlyA: a.length - matched.length, onlyB: b.length - matched.length };
 }
