@@ -40,3 +40,4 @@ export function roleSummary(me: Me): string {
 export function plural(n: number, one: string, many = `${one}s`): string {
   return `${n} ${n === 1 ? one : many}`;
 }
+

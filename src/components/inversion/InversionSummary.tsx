@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import type { InversionView } from '../../../shared/schemas/inversions';
 import { ms, num } from '../run/format';
 import { STOP_REASON_WORDS } from './wording';
+import { plural } from '../../lib/format';
 
 type Stats = NonNullable<InversionView['stats']>;
 
@@ -33,7 +34,7 @@ export function InversionSummary({ stats }: { stats: Stats }) {
         <Figure label="χ² per datum" value={num(stats.chi2)} note="about 1 is a fit within σ" testId="inversion-chi2" />
         <Figure label="RMS misfit" value={ms(stats.rms_ms)} testId="inversion-rms" />
         <Figure label="Iterations" value={stats.iterations} />
-        <Figure label="Picks used" value={stats.picks} note={`${stats.shots} shots`} />
+        <Figure label="Picks used" value={stats.picks} note={plural(stats.shots, 'shot')} />
         <Figure
           label="Time taken"
           value={`${num(t.total, 1)} s`}

@@ -10,6 +10,7 @@ import { Button } from '../Button';
 import { SelectField, TextField } from '../Field';
 import { defaultInversionSpacing, gridSizeWords, inversionGrid } from './defaultGrid';
 import { checkForm, initialFormState, serverFieldErrors, type FormField, type FormFieldErrors, type InversionFormState } from './inversionForm';
+import { plural } from '../../lib/format';
 
 const ADVANCED: FormField[] = ['settings.maxIterations', 'settings.smoothing', 'settings.verticalWeight', 'settings.damping', 'settings.vMin', 'settings.vMax', 'settings.order', 'settings.checkerSize'];
 
@@ -93,7 +94,7 @@ export function StartInversionForm({ line }: { line: Pick<LineDetail, 'id' | 'my
         <SelectField label="Pick set" name="pickSetId" value={form.pickSetId} error={errors.pickSetId} onChange={(e) => (set('pickSetId', e.target.value), set('revision', ''))} data-testid="inversion-pickset">
           {pickSetsInUse(line.pickSets).map((p) => (
             <option key={p.id} value={p.id}>
-              {p.fileName} · {p.shots} shots, {p.picks} picks
+              {p.fileName} · {plural(p.shots, 'shot')}, {plural(p.picks, 'pick')}
             </option>
           ))}
         </SelectField>

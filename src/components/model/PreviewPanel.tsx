@@ -4,6 +4,7 @@
  */
 import type { PickSetSummary } from '../../api/types';
 import type { PreviewState } from './usePreview';
+import { plural } from '../../lib/format';
 
 export interface PreviewPanelProps {
   pickSets: PickSetSummary[];
@@ -91,7 +92,7 @@ function statusText(p: PreviewPanelProps): string {
   if (s.status === 'error') return s.message ?? 'The preview failed.';
   if (!s.field) return 'Solving…';
   const parts = [`contours every ${s.field.stepMs} ms`, `solved in ${Math.round(s.field.solveMs)} ms`];
-  if (p.rmsMs !== null) parts.push(`RMS misfit to ${p.picks} picks ${p.rmsMs.toFixed(2)} ms`);
+  if (p.rmsMs !== null) parts.push(`RMS misfit to ${plural(p.picks, 'pick')} ${p.rmsMs.toFixed(2)} ms`);
   if (s.status === 'solving') parts.push(s.field && p.rays && !s.rays ? 'tracing rays…' : 'updating…');
   return parts.join(' · ');
 }

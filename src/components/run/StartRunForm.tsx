@@ -5,6 +5,7 @@ import { pickSetsInUse, type LineDetail, type PickSetSummary, type ProjectRole, 
 import { Button } from '../Button';
 import { SelectField } from '../Field';
 import { RunStartProblem } from './RunStartProblem';
+import { plural } from '../../lib/format';
 
 /** Who may start and cancel runs (the server's policy table decides; this only picks the view). */
 const RUN_STARTERS: ProjectRole[] = ['geophysicist', 'lead'];
@@ -22,7 +23,7 @@ interface ModelChoice {
 
 const modelLabel = (m: ModelChoice) => `${m.name} · version ${m.version} (${m.nx} × ${m.nz} nodes)${m.comment ? ` – ${m.comment}` : ''}`;
 const pickSetLabel = (p: PickSetSummary) =>
-  `${p.fileName} · revision ${p.revision} · ${p.shots} shots, ${p.picks} picks${p.excluded ? `, ${p.excluded} excluded` : ''}`;
+  `${p.fileName} · revision ${p.revision} · ${plural(p.shots, 'shot')}, ${plural(p.picks, 'pick')}${p.excluded ? `, ${p.excluded} excluded` : ''}`;
 
 interface StartRunFormProps {
   line: Pick<LineDetail, 'id' | 'myRole' | 'pickSets' | 'models'>;

@@ -15,4 +15,9 @@ export function toQcPicks(picks: readonly PickRow[], excluded: ReadonlySet<numbe
   }));
 }
 
-export const SUSPECT_LABELS = { too_fast: 'Too fast', too_slow: 'Too slow', decreasing: 'Time decreases' } as const;
+/**
+ * A pick that comes earlier than a nearer geophone's and one whose step from it implies an
+ * impossibly fast ground are the same trouble to the person checking — it arrived too early for its
+ * distance — so they share a label; the message beside it says which rule caught it.
+ */
+export const SUSPECT_LABELS = { too_fast: 'Too early for its distance', too_slow: 'Too late for its distance', decreasing: 'Too early for its distance' } as const;

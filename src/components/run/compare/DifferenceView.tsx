@@ -6,6 +6,7 @@ import { symmetricLimit } from '../misfit/divergingColor';
 import { buildMatrix } from '../misfit/matrix';
 import { MisfitGrid } from '../misfit/MisfitGrid';
 import { compareResiduals, type MatchedPick } from './residualDifference';
+import { plural } from '../../../lib/format';
 
 const describe = (m: MatchedPick) =>
   `Shot ${m.shotId}, receiver ${metres(m.receiverX)}: ${m.fitChangeMs < 0 ? 'B closer to the pick' : m.fitChangeMs > 0 ? 'A closer to the pick' : 'both as close'} by ${Math.abs(m.fitChangeMs).toFixed(3)} ms (residual A ${signed(m.a.residualMs)}, B ${signed(m.b.residualMs)})`;
@@ -28,7 +29,7 @@ export function DifferenceView({ a, b }: { a: ResidualRow[]; b: ResidualRow[] })
       <div>
         {(comparison.onlyA > 0 || comparison.onlyB > 0) && (
           <p className="mb-2 text-sm text-stone-700">
-            {comparison.matched.length} picks are in both runs; {comparison.onlyA} only in A and {comparison.onlyB} only in B are left out.
+            {plural(comparison.matched.length, 'pick')} in both runs; {comparison.onlyA} only in A and {comparison.onlyB} only in B are left out.
           </p>
         )}
         <MisfitGrid

@@ -31,7 +31,7 @@ export function PickDetails({ row, onShowRay, onShowInTable }: { row: ResidualRo
         <dd>{row.pickIndex + 1} in the pick set</dd>
       </dl>
       <p className="mt-2 text-sm text-stone-700">
-        {row.residualMs < 0 ? 'The pick came earlier than computed: the model is too slow along this path.' : 'The pick came later than computed: the model is too fast along this path.'}
+        {residualWords(row.residualMs, row.normalised)}
       </p>
       {row.flags.length > 0 && (
         <ul className="mt-2 list-disc pl-5 text-sm text-amber-900">
@@ -52,4 +52,16 @@ export function PickDetails({ row, onShowRay, onShowInTable }: { row: ResidualRo
       </div>
     </div>
   );
+}
+
+/**
+ * What a residual says about the model. Inside ±1σ the pick and the model agree within the pick's own
+ * uncertainty, and nothing definite can be said; beyond it, the sign says which way the model errs
+ * along this ray (common practice, no source).
+ */
+export function residualWords(residualMs: number, normalised: number): string {
+  if (!(Math.abs(normalised) > 1)) return 'Within the pick\'s uncertainty (±1σ): the model and the pick agree here.';
+  return residualMs < 0
+    ? 'The pick came earlier than computed by more than its uncertainty: the model is likely too slow along this path.'
+    : 'The pick came later than computed by more than its uncertainty: the model is likely too fast along this path.';
 }

@@ -3,6 +3,7 @@ import type { RunStats } from '../../../api/types';
 import { metres, ms, num, signed } from '../format';
 import { misfitVerdict, type VerdictTone } from './verdict';
 import { worstByRms } from './worst';
+import { plural } from '../../../lib/format';
 
 const TONE_CLASSES: Record<VerdictTone, string> = {
   good: 'border-emerald-300 bg-emerald-50 text-emerald-950',
@@ -44,7 +45,7 @@ export function RunSummary({ stats, onShowShot }: { stats: RunStats; onShowShot:
         <Figure label="χ² per datum" value={num(stats.chi2)} note="about 1 is a fit within σ" testId="stat-chi2" />
         <Figure label="Largest |residual|" value={ms(stats.max_abs_residual_ms)} testId="stat-max" />
         <Figure label="Mean residual" value={`${signed(stats.mean_residual_ms)} ms`} note="observed − computed" />
-        <Figure label="Picks compared" value={stats.picks} note={`${stats.shots} shots${stats.excluded ? `, ${stats.excluded} excluded` : ''}`} />
+        <Figure label="Picks compared" value={stats.picks} note={`${plural(stats.shots, 'shot')}${stats.excluded ? `, ${stats.excluded} excluded` : ''}`} />
         <Figure label="Solve time, eikonal only" value={`${num(stats.solve_seconds, 1)} s`} note={`${stats.active_nodes.toLocaleString('en-GB')} ground nodes; the whole run took longer (header)`} />
       </dl>
       <div className="mt-4 grid grid-cols-1 gap-4 md:grid-cols-2">
@@ -71,7 +72,7 @@ export function RunSummary({ stats, onShowShot }: { stats: RunStats; onShowShot:
                 <span className="font-semibold">x = {metres(r.receiverX)}</span>
                 <span>RMS {ms(r.rms_ms)}</span>
                 <span>largest {ms(r.max_abs_residual_ms)}</span>
-                <span className="text-stone-600">{r.count} picks</span>
+                <span className="text-stone-600">{plural(r.count, 'pick')}</span>
               </li>
             ))}
           </ol>

@@ -41,6 +41,7 @@ export function ResidualTable({ rows, lineName, runId, initialShot, selectedPick
 
   const xMin = parseLimit(xMinText);
   const xMax = parseLimit(xMaxText);
+  const reversed = xMin.value !== null && xMax.value !== null && xMax.value < xMin.value;
   const k = parseLimit(kText);
   const kOk = k.ok && (k.value === null || k.value >= 0);
   const shown = useMemo(
@@ -77,7 +78,7 @@ export function ResidualTable({ rows, lineName, runId, initialShot, selectedPick
           ))}
         </SelectField>
         <TextField label="Receiver x from (m)" inputMode="decimal" value={xMinText} onChange={(e) => onFilter(setXMin)(e.target.value)} error={xMin.ok ? undefined : 'Type a number, or leave it empty.'} data-testid="filter-xmin" />
-        <TextField label="Receiver x to (m)" inputMode="decimal" value={xMaxText} onChange={(e) => onFilter(setXMax)(e.target.value)} error={xMax.ok ? undefined : 'Type a number, or leave it empty.'} data-testid="filter-xmax" />
+        <TextField label="Receiver x to (m)" inputMode="decimal" value={xMaxText} onChange={(e) => onFilter(setXMax)(e.target.value)} error={!xMax.ok ? 'Type a number, or leave it empty.' : reversed ? `“to” is less than “from” (${xMin.value} m): no receiver can be in between.` : undefined} data-testid="filter-xmax" />
         <TextField
           label="Only |residual| > k·σ, k ="
           inputMode="decimal"
@@ -150,7 +151,7 @@ export function ResidualTable({ rows, lineName, runId, initialShot, selectedPick
             })}
           </tbody>
         </table>
-        {shown.length === 0 && <p className="px-4 py-6 text-stone-600">No pick matches these filters.</p>}
+        {shown.length === 0 && <p className="px-4 py-6 text-stone-600">{reversed ? 'No pick matches: the x range is reversed; swap “from” and “to”.' : 'No pick matches these filters.'}</p>}
       </div>
       {pages > 1 && (
         <div className="mt-2 flex gap-2">
