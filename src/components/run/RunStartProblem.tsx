@@ -24,16 +24,22 @@ function heading(err: unknown): string {
 export function RunStartProblem({ error }: { error: unknown }) {
   const issues = error instanceof ApiError ? error.issues : [];
   const shown = issues.slice(0, 8);
+  const lines = shown.map((issue) => {
+    const place = issuePlace(issue);
+    return place ? `${place}: ${issue.message}` : issue.message;
+  });
+  // The server's sentence is often its first issue again; say it once.
+  const message = errorMessage(error);
+  const repeats = shown.some((issue, i) => message === lines[i] || message.endsWith(issue.message));
   return (
     <div role="alert" data-testid="run-start-problem" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">
       <p className="font-semibold">{heading(error)}</p>
-      <p className="mt-1">{errorMessage(error)}</p>
-      {shown.length > 0 && (
+      {!repeats && <p className="mt-1">{message}</p>}
+      {lines.length > 0 && (
         <ul className="mt-2 list-disc pl-5 text-sm">
-          {shown.map((issue, i) => {
-            const place = issuePlace(issue);
-            return <li key={i}>{place ? `${place}: ${issue.message}` : issue.message}</li>;
-          })}
+          {lines.map((line, i) => (
+            <li key={i}>{line}</li>
+          ))}
         </ul>
       )}
       {issues.length > shown.length && <p className="mt-1 text-sm">…and {issues.length - shown.length} more of the same kind.</p>}
