@@ -33,76 +33,21 @@ export class IndexedMinHeap {
 
   /** Insert a node, or lower its key when already present (never raises a key). */
   pushOrDecrease(node: number, key: number): void {
-    let k = this.pos[node];
-    if (k < 0) {
-      k = this.size++;
-    } else if (key >= this.keys[k]) {
-      return;
-    }
-    // Sift up from slot k, carrying (node, key).
-    const keys = this.keys;
-    const nodes = this.nodes;
-    const pos = this.pos;
-    while (k > 0) {
-      const parent = (k - 1) >> 1;
-      const pk = keys[parent];
-      if (pk <= key) break;
-      keys[k] = pk;
-      const pn = nodes[parent];
-      nodes[k] = pn;
-      pos[pn] = k;
-      k = parent;
-    }
-    keys[k] = key;
-    nodes[k] = node;
-    pos[node] = k;
-  }
-
-  /** Insert a node known not to be in the heap. */
-  insert(node: number, key: number): void {
-    const keys = this.keys;
-    const nodes = this.nodes;
-    const pos = this.pos;
-    let k = this.size++;
-    while (k > 0) {
-      const parent = (k - 1) >> 1;
-      const pk = keys[parent];
-      if (pk <= key) break;
-      keys[k] = pk;
-      const pn = nodes[parent];
-      nodes[k] = pn;
-      pos[pn] = k;
-      k = parent;
-    }
-    keys[k] = key;
-    nodes[k] = node;
-    pos[node] = k;
+    const k = this.pos[node];
+    if (k >= 0 && key >= this.keys[k]) return;
+    this.siftUp(k < 0 ? this.size++ : k, node, key);
   }
 
   /** Set a node's key up or down (inserting it when absent). */
   update(node: number, key: number): void {
+    const k = this.pos[node];
+    if (k < 0 || key <= this.keys[k]) {
+      this.siftUp(k < 0 ? this.size++ : k, node, key);
+      return;
+    }
     const keys = this.keys;
     const nodes = this.nodes;
     const pos = this.pos;
-    let k = pos[node];
-    if (k < 0 || key <= keys[k]) {
-      // Insert (at the end) or lower: sift up from slot k.
-      if (k < 0) k = this.size++;
-      while (k > 0) {
-        const parent = (k - 1) >> 1;
-        const pk = keys[parent];
-        if (pk <= key) break;
-        keys[k] = pk;
-        const pn = nodes[parent];
-        nodes[k] = pn;
-        pos[pn] = k;
-        k = parent;
-      }
-      keys[k] = key;
-      nodes[k] = node;
-      pos[node] = k;
-      return;
-    }
     // Raise: sift down from slot k.
     const n = this.size;
     let j = k;
@@ -125,6 +70,26 @@ export class IndexedMinHeap {
     keys[j] = key;
     nodes[j] = node;
     pos[node] = j;
+  }
+
+  /** Moves (node, key) up from slot k to its place. */
+  private siftUp(k: number, node: number, key: number): void {
+    const keys = this.keys;
+    const nodes = this.nodes;
+    const pos = this.pos;
+    while (k > 0) {
+      const parent = (k - 1) >> 1;
+      const pk = keys[parent];
+      if (pk <= key) break;
+      keys[k] = pk;
+      const pn = nodes[parent];
+      nodes[k] = pn;
+      pos[pn] = k;
+      k = parent;
+    }
+    keys[k] = key;
+    nodes[k] = node;
+    pos[node] = k;
   }
 
   /** Remove and return the node with the smallest key (heap must be non-empty). */

@@ -2,11 +2,10 @@ import { memo, useMemo } from 'react';
 import type { Assignment } from '../../../shared/layers';
 import { sToMs } from '../../../shared/units';
 import { LazyPlot } from '../plot/LazyPlot';
-import { axisStyle, CHART_FONT } from '../line/plot/chartTheme';
+import { axisStyle } from '../line/plot/chartTheme';
+import { LAYER_CHART_CONFIG, LAYER_CHART_LAYOUT } from './chartLayout';
 import { layerColour, layerName } from './layerColours';
 import type { PlacedLine } from './layerInterpretation';
-
-const CONFIG = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'select2d', 'autoScale2d'] };
 
 /**
  * Every shot's travel-time curve, each pick coloured by the layer it is assigned to (direct wave,
@@ -66,13 +65,8 @@ export const AssignmentChart = memo(function AssignmentChart({ line, assignment,
   }, [line, assignment, layers]);
   const layout = useMemo(
     () => ({
-      font: CHART_FONT,
+      ...LAYER_CHART_LAYOUT,
       uirevision: 'assignment',
-      margin: { l: 64, r: 16, t: 24, b: 56 },
-      paper_bgcolor: 'white',
-      plot_bgcolor: 'white',
-      hovermode: 'closest',
-      legend: { orientation: 'h', xanchor: 'left', x: 0, yanchor: 'bottom', y: 1.02 },
       xaxis: { ...axisStyle, title: { text: 'x along the line (m)' } },
       yaxis: { ...axisStyle, title: { text: 'first-arrival time (ms)' }, rangemode: 'tozero' },
     }),
@@ -83,7 +77,7 @@ export const AssignmentChart = memo(function AssignmentChart({ line, assignment,
       height={460}
       data={data}
       layout={layout}
-      config={CONFIG}
+      config={LAYER_CHART_CONFIG}
       onClick={(e: { points?: { customdata?: unknown }[] }) => {
         const id = e.points?.[0]?.customdata;
         if (typeof id === 'number' && id >= 0) onPick(id);

@@ -1,10 +1,9 @@
 import { memo, useMemo } from 'react';
 import type { LayerResult } from '../../../shared/layers';
 import { LazyPlot } from '../plot/LazyPlot';
-import { axisStyle, CHART_FONT } from '../line/plot/chartTheme';
+import { axisStyle } from '../line/plot/chartTheme';
+import { LAYER_CHART_CONFIG, LAYER_CHART_LAYOUT } from './chartLayout';
 import { LAYER_COLOURS } from './layerColours';
-
-const CONFIG = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'select2d', 'autoScale2d'] };
 
 /**
  * The depth section at true scale (1:1): the ground under the geophones and each refractor at its
@@ -43,16 +42,11 @@ export const DepthSection = memo(function DepthSection({ result, ground, shots }
   }, [result, ground, shots]);
   const layout = useMemo(
     () => ({
-      font: CHART_FONT,
-      margin: { l: 64, r: 16, t: 24, b: 56 },
-      paper_bgcolor: 'white',
-      plot_bgcolor: 'white',
-      hovermode: 'closest',
-      legend: { orientation: 'h', xanchor: 'left', x: 0, yanchor: 'bottom', y: 1.02 },
+      ...LAYER_CHART_LAYOUT,
       xaxis: { ...axisStyle, title: { text: 'x along the line (m)' } },
       yaxis: { ...axisStyle, title: { text: 'elevation (m)' }, scaleanchor: 'x', scaleratio: 1 },
     }),
     [],
   );
-  return <LazyPlot height={380} data={data} layout={layout} config={CONFIG} />;
+  return <LazyPlot height={380} data={data} layout={layout} config={LAYER_CHART_CONFIG} />;
 });

@@ -2,9 +2,8 @@ import { memo, useMemo } from 'react';
 import type { LayerResult } from '../../../shared/layers';
 import { sToMs } from '../../../shared/units';
 import { LazyPlot } from '../plot/LazyPlot';
-import { axisStyle, CHART_FONT, shotColour } from '../line/plot/chartTheme';
-
-const CONFIG = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'select2d', 'autoScale2d'] };
+import { axisStyle, shotColour } from '../line/plot/chartTheme';
+import { LAYER_CHART_CONFIG, LAYER_CHART_LAYOUT } from './chartLayout';
 
 /**
  * The checks of a delay-time interpretation, per reversed shot pair: the velocity-analysis function
@@ -27,12 +26,7 @@ export const FunctionsChart = memo(function FunctionsChart({ result, refractor }
   }, [f]);
   const layout = useMemo(
     () => ({
-      font: CHART_FONT,
-      margin: { l: 64, r: 16, t: 24, b: 56 },
-      paper_bgcolor: 'white',
-      plot_bgcolor: 'white',
-      hovermode: 'closest',
-      legend: { orientation: 'h', xanchor: 'left', x: 0, yanchor: 'bottom', y: 1.02 },
+      ...LAYER_CHART_LAYOUT,
       grid: { rows: 2, columns: 1, roworder: 'top to bottom' },
       xaxis: { ...axisStyle, title: { text: 'x along the line (m)' } },
       yaxis: { ...axisStyle, title: { text: 'velocity analysis (ms)' }, domain: [0.55, 1] },
@@ -41,5 +35,5 @@ export const FunctionsChart = memo(function FunctionsChart({ result, refractor }
     [],
   );
   if (!f || !f.pairs.length) return <p className="text-stone-600">No reversed pair to draw for refractor {refractor}.</p>;
-  return <LazyPlot height={520} data={data} layout={layout} config={CONFIG} />;
+  return <LazyPlot height={520} data={data} layout={layout} config={LAYER_CHART_CONFIG} />;
 });
