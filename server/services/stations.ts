@@ -26,7 +26,9 @@ export async function replaceStations(actorId: string, projectId: string, lineId
     await em.query(`SELECT 1 FROM survey_lines WHERE id = $1 FOR UPDATE`, [lineId]);
     const previous = await em.getRepository(Station).find({ where: { lineId }, order: { x: 'ASC' } });
     let kept: number | null = null;
-    if (previous.length) {
+    // A save that changes nothing keeps no copy of what it did not change.
+    const same = previous.length === stations.length && previous.every((p, i) => p.station === stations[i].station && p.x === stations[i].x && p.z === stations[i].z);
+    if (previous.length && !same) {
       const [{ next }] = await em.query(`SELECT coalesce(max(number), 0) + 1 AS next FROM station_revisions WHERE line_id = $1`, [lineId]);
       kept = Number(next);
       await em.query(`INSERT INTO station_revisions (line_id, number, stations, station_count, replaced_by) VALUES ($1, $2, $3, $4, $5)`, [

@@ -47,6 +47,12 @@ describe('station table revisions', () => {
     expect(audit[0].detail).toMatchObject({ restoredFrom: newest, stations: 48, replaced: 2, keptAsRevision: newest + 1 });
   });
 
+  it('keeps no revision when a save changes nothing', async () => {
+    const before = (await tech.get(`${base()}/revisions`)).body.length;
+    await tech.put(base()).set('X-CSRF-Token', tech.csrf).send(many).expect(200); // the table on record already
+    expect((await tech.get(`${base()}/revisions`)).body).toHaveLength(before);
+  });
+
   it('answers 404 for a revision the line does not have, and changes nothing', async () => {
     const before = (await tech.get(`/api/lines/${world.lineA.id}`)).body.stations;
     for (const n of ['0', '9999', 'abc']) {
