@@ -29,6 +29,13 @@ export const projectOfPickSet: ProjectScope = async (req) => {
   return rows[0]?.project_id ?? null;
 };
 
+export const projectOfRecord: ProjectScope = async (req) => {
+  const id = req.params.recordId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM records r JOIN survey_lines l ON l.id = r.line_id WHERE r.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};
+
 export const projectOfModel: ProjectScope = async (req) => {
   const id = req.params.modelId;
   if (!isUuid(id)) return null;

@@ -39,6 +39,10 @@ export const policyTable = {
   'line.read': { roles: STAFF },
   'line.stations.write': { roles: ['geophysicist', 'field_tech'] },
   'line.picksets.create': { roles: ['geophysicist', 'field_tech'] },
+  // Issue 12 item 7: field technicians and geophysicists upload records; leads read them; clients never see them.
+  'line.records.read': { roles: STAFF },
+  'line.records.create': { roles: ['geophysicist', 'field_tech'] },
+  'record.read': { roles: STAFF },
 
   'line.models.create': { roles: ['geophysicist'] },
   'model.read': { roles: STAFF },

@@ -43,6 +43,11 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/lines/:lineId/stations/revisions': STAFF_A,
   'POST /api/lines/:lineId/stations/revisions/:number/restore': ['geophysicist', 'field_tech'],
   'POST /api/lines/:lineId/picksets': ['geophysicist', 'field_tech'],
+  // Issue 12 item 7: "field technicians and geophysicists upload and pick, leads read, clients never see records".
+  'GET /api/lines/:lineId/records': STAFF_A,
+  'POST /api/lines/:lineId/records': ['geophysicist', 'field_tech'],
+  'GET /api/records/:recordId': STAFF_A,
+  'GET /api/records/:recordId/file': STAFF_A,
   'POST /api/lines/:lineId/models': ['geophysicist'],
   'GET /api/models/:modelId': STAFF_A,
   'GET /api/models/:modelId/grid': STAFF_A,
@@ -120,6 +125,7 @@ function concretePath(path: string, w: World): string {
     .replace(':runId', w.runA)
     .replace(':reportId', w.reportA)
     .replace(':inversionId', w.inversionA)
+    .replace(':recordId', w.recordA)
     .replace(':shotId', 'F')
     .replace(':number', '999')
     .replace(':userId', w.loner.id);

@@ -5,6 +5,8 @@ import { DEFAULT_INVERSION_SETTINGS } from '../../../shared/schemas/inversions';
 import type { ProjectRole } from '../../../shared/schemas/projects';
 import { importPicks } from '../../../server/services/importPicks';
 import { saveModelVersion } from '../../../server/services/models';
+import { writeSeg2 } from '../../../shared/records';
+import { storeRecord } from '../../../server/services/records';
 
 export const PASSWORD = 'test-password-123';
 
@@ -26,6 +28,8 @@ export interface World {
   runA: string;
   /** A draft report of run A (no PDF yet). */
   reportA: string;
+  /** A small SEG-2 record of shot F on line A (worldRecord()). */
+  recordA: string;
   /** A finished inversion row of pick set A (no iterations or result stored). */
   inversionA: string;
   /** An active account that belongs to no project. */
@@ -67,7 +71,8 @@ export async function resetWorld(): Promise<World> {
     lineId: lineA.id, pickSetId: pickSetA, pickSetRevision: 0, startKind: 'gradient', startSpacing: 2.5, grid: WORLD_MODEL.grid, surface: null,
     settings: DEFAULT_INVERSION_SETTINGS, status: 'done', shots: 2, picks: 10, createdBy: users.geophysicist.id,
   }))).id;
-  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, loner };
+  const recordA = (await storeRecord(users.field_tech.id, projectA.id, lineA.id, 'F.sg2', Buffer.from(worldRecord()))).id;
+  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, recordA, loner };
 }
 
 /** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */
@@ -83,3 +88,13 @@ export const WORLD_MODEL = {
   grid: { x0: 0, dx: 0.5, nx: 51, z0: 0, dz: 0.5, nz: 21 },
   layers: [{ name: 'ground', v_top: 600, v_base: 600 }],
 };
+
+/** Shot F of the world as a SEG-2 record: five traces (0–24 m), a spike at each direct-wave time (invented test data). */
+export function worldRecord(): Uint8Array {
+  return writeSeg2([0, 6, 12, 18, 24].map((x, i) => {
+    const samples = new Float32Array(200);
+    samples[Math.round(((x / 600) * 1000) / 0.25)] = 1;
+    return { samples, channel: i + 1, sampleInterval: 0.00025, receiver: { x, y: null, z: null }, source: { x: 0, y: null, z: null } };
+  }));
+}
+
