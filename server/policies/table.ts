@@ -43,6 +43,7 @@ export const policyTable = {
   'line.records.read': { roles: STAFF },
   'line.records.create': { roles: ['geophysicist', 'field_tech'] },
   'record.read': { roles: STAFF },
+  'record.update': { roles: ['geophysicist', 'field_tech'] },
 
   'line.models.create': { roles: ['geophysicist'] },
   'model.read': { roles: STAFF },

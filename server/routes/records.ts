@@ -1,9 +1,11 @@
 import { Router } from 'express';
+import { picksFromRecordsBody, recordGeometryBody } from '../../shared/schemas/records';
 import { HttpError } from '../http/errors';
+import { parse } from '../http/parse';
 import { singleFile } from '../http/upload';
 import { authorize } from '../policies/authorize';
 import { projectOfLine, projectOfRecord } from '../policies/scopes';
-import { listRecords, recordDetail, recordFile, storeRecord } from '../services/records';
+import { deleteRecord, listRecords, picksFromRecords, recordDetail, recordFile, storeRecord, updateRecordGeometry } from '../services/records';
 
 /**
  * One record per request, so the page shows progress and a refusal per file; 64 MB covers a
@@ -32,6 +34,20 @@ export function recordsRouter(): Router {
   r.get('/records/:recordId/file', authorize('record.read', projectOfRecord), async (req, res) => {
     const { fileName, bytes } = await recordFile(req.params.recordId as string);
     res.attachment(fileName).type('application/octet-stream').send(bytes);
+  });
+
+  r.patch('/records/:recordId', authorize('record.update', projectOfRecord), async (req, res) => {
+    res.json(await updateRecordGeometry(req.user!.id, req.access!.projectId, req.params.recordId as string, parse(recordGeometryBody, req.body)));
+  });
+
+  r.delete('/records/:recordId', authorize('record.update', projectOfRecord), async (req, res) => {
+    await deleteRecord(req.user!.id, req.access!.projectId, req.params.recordId as string);
+    res.status(204).end();
+  });
+
+  // Picks made on the records, saved as a new pick set of the line (the same checks as a pick file).
+  r.post('/lines/:lineId/picksets/from-records', authorize('line.picksets.create', projectOfLine), async (req, res) => {
+    res.status(201).json(await picksFromRecords(req.user!.id, req.access!.projectId, req.params.lineId as string, parse(picksFromRecordsBody, req.body)));
   });
 
   return r;

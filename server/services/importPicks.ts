@@ -5,6 +5,7 @@ import { formatPickError, parsePickText, type Pick } from '../../shared/picks';
 import { pickQcOffThread } from '../threads/read-pool';
 import { audit } from './audit';
 import { RECIPROCAL_TOLERANCE_MS } from './pickSetReads';
+import type { EntityManager } from 'typeorm';
 
 export interface ImportedPickSet {
   id: string;
@@ -19,7 +20,11 @@ const decoder = new TextDecoder('utf-8', { fatal: false, ignoreBOM: false });
  * Parses a pick file and stores it, its picks and revision 0 in one transaction.
  * A file with any error is refused whole (422 with line and column) and nothing is written.
  */
-export async function importPicks(actorId: string, projectId: string, lineId: string, fileName: string, bytes: Buffer): Promise<ImportedPickSet> {
+/** `link` runs inside the storing transaction with the new set's id (e.g. to link the records it was picked on). */
+export async function importPicks(
+  actorId: string, projectId: string, lineId: string, fileName: string, bytes: Buffer,
+  link?: (em: EntityManager, pickSetId: string) => Promise<void>,
+): Promise<ImportedPickSet> {
   const result = parsePickText(decoder.decode(bytes));
   if (!result.ok) {
     const first = result.errors[0];
@@ -43,6 +48,7 @@ export async function importPicks(actorId: string, projectId: string, lineId: st
     await insertPicks(em.query.bind(em), set.id, picks);
     await em.insert(PickSetRevision, { pickSetId: set.id, number: 0, exclusions: [], comment: 'as uploaded', createdBy: actorId });
     await em.query('INSERT INTO pick_set_qc (pick_set_id, revision, qc) VALUES ($1, 0, $2)', [set.id, JSON.stringify(qc)]);
+    if (link) await link(em, set.id);
     await audit(em, { actorId, action: 'pickset.upload', objectType: 'pick_set', objectId: set.id, projectId, detail: { fileName, shots: shots.length, picks: picks.length } });
     return { id: set.id, shots: shots.length, picks: picks.length };
   });

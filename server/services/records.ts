@@ -7,7 +7,8 @@
  */
 import { createHash } from 'node:crypto';
 import { readRecord, RecordFormatError, type SeismicRecord } from '../../shared/records';
-import type { RecordDetailView, RecordSummaryView, RecordTraceView } from '../../shared/schemas/records';
+import type { PicksFromRecordsBody, RecordDetailView, RecordGeometryBody, RecordSummaryView, RecordTraceView } from '../../shared/schemas/records';
+import { importPicks, type ImportedPickSet } from './importPicks';
 import { dataSource } from '../db/dataSource';
 import { HttpError } from '../http/errors';
 import { audit } from './audit';
@@ -145,4 +146,55 @@ export async function recordDetail(recordId: string): Promise<RecordDetailView> 
 export async function recordFile(recordId: string): Promise<{ fileName: string; bytes: Buffer }> {
   const [row] = await dataSource.query('SELECT file_name, bytes FROM records WHERE id = $1', [recordId]);
   return { fileName: row.file_name, bytes: row.bytes };
+}
+
+/** Sets what the file lacks or has wrong: the shot id, the source position, where receivers come from. */
+export async function updateRecordGeometry(actorId: string, projectId: string, recordId: string, body: RecordGeometryBody): Promise<RecordDetailView> {
+  await dataSource.transaction(async (em) => {
+    const sets: string[] = [];
+    const values: unknown[] = [recordId];
+    const set = (sql: string, v: unknown) => (values.push(v), sets.push(`${sql} = $${values.length}`));
+    if (body.shotId !== undefined) set('shot_id', body.shotId);
+    if (body.source !== undefined) {
+      set('source_x', body.source?.x ?? null);
+      set('source_z', body.source?.z ?? null);
+      set('source_from', body.source ? 'set' : 'none');
+    }
+    if (body.receiversFrom !== undefined) set('receivers_from', body.receiversFrom);
+    await em.query(`UPDATE records SET ${sets.join(', ')} WHERE id = $1`, values);
+    await audit(em, { actorId, action: 'record.update', objectType: 'record', objectId: recordId, projectId, detail: body });
+  });
+  return recordDetail(recordId);
+}
+
+/** Deletes a record no pick set was saved from (409 otherwise: the pick set keeps its link). */
+export async function deleteRecord(actorId: string, projectId: string, recordId: string): Promise<void> {
+  await dataSource.transaction(async (em) => {
+    const [row] = await em.query('SELECT file_name FROM records WHERE id = $1 FOR UPDATE', [recordId]);
+    const linked = await em.query('SELECT pick_set_id FROM pick_set_records WHERE record_id = $1', [recordId]);
+    if (linked.length) throw new HttpError(409, 'record_in_use', `${row.file_name} was picked for ${linked.length === 1 ? 'a pick set' : `${linked.length} pick sets`}; it is kept with them.`);
+    await em.query('DELETE FROM records WHERE id = $1', [recordId]);
+    await audit(em, { actorId, action: 'record.delete', objectType: 'record', objectId: recordId, projectId, detail: { fileName: row.file_name } });
+  });
+}
+
+const csvField = (text: string): string => (/[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
+
+/**
+ * Picks made on a line's records, stored as a new pick set exactly like an uploaded pick file
+ * (FORMATS.md §2 text as its original; the same checks, QC and revision 0), linked to the records.
+ */
+export async function picksFromRecords(actorId: string, projectId: string, lineId: string, body: PicksFromRecordsBody): Promise<ImportedPickSet> {
+  const rows: { id: string }[] = await dataSource.query('SELECT id FROM records WHERE line_id = $1 AND id = ANY($2::uuid[])', [lineId, body.recordIds]);
+  const onLine = new Set(rows.map((r) => r.id));
+  const missing = body.recordIds.findIndex((id) => !onLine.has(id));
+  if (missing >= 0) {
+    throw new HttpError(422, 'validation_failed', `recordIds[${missing}]: no record of this line has that id`, [{ path: `recordIds[${missing}]`, message: 'no record of this line has that id' }]);
+  }
+  const text = ['shot_id,source_x,source_z,receiver_x,receiver_z,time_ms,sigma_ms',
+    ...body.picks.map((p) => [csvField(p.shot_id), p.source_x, p.source_z ?? '', p.receiver_x, p.receiver_z ?? '', p.time_ms, p.sigma_ms ?? ''].join(','))].join('\n') + '\n';
+  const fileName = `${body.name.replace(/[^\w.\- ]+/g, '_')}.picks.csv`;
+  return importPicks(actorId, projectId, lineId, fileName, Buffer.from(text), async (em, pickSetId) => {
+    await em.query('INSERT INTO pick_set_records (pick_set_id, record_id) SELECT $1, unnest($2::uuid[]) ON CONFLICT DO NOTHING', [pickSetId, body.recordIds]);
+  });
 }

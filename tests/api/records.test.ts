@@ -91,4 +91,33 @@ describe('records on a line', () => {
     expect(res.body.format).toBe('seg2');
     expect(res.body.channels).toBeGreaterThan(0);
   });
+
+  it('saves picks made on records as a pick set linked to them; a linked record cannot be deleted; bad rows refused with their path', async () => {
+    const [rec] = (await tech.get(`/api/lines/${world.lineA.id}/records`)).body.filter((r: { fileName: string }) => r.fileName === 'S101.sg2');
+    const picks = [1, 2, 3].map((c) => ({ shot_id: 'S101', source_x: 0, source_z: null, receiver_x: 2.5 * c, receiver_z: null, time_ms: 4 + c, sigma_ms: 0.25 }));
+    const bad = await tech.post(`/api/lines/${world.lineA.id}/picksets/from-records`).set('X-CSRF-Token', tech.csrf)
+      .send({ name: 'hand picks', recordIds: [rec.id], picks: [...picks.slice(0, 2), { ...picks[2], time_ms: -1 }] });
+    expect(bad.status).toBe(400);
+    expect(bad.body.issues[0].path).toBe('picks[2].time_ms');
+    const saved = await tech.post(`/api/lines/${world.lineA.id}/picksets/from-records`).set('X-CSRF-Token', tech.csrf).send({ name: 'hand picks', recordIds: [rec.id], picks });
+    expect(saved.status).toBe(201);
+    expect(saved.body).toMatchObject({ shots: 1, picks: 3 });
+    const set = await tech.get(`/api/picksets/${saved.body.id}`).expect(200);
+    expect(set.body.fileName).toBe('hand picks.picks.csv');
+    expect(set.body.picks.map((p: { timeMs: number }) => p.timeMs)).toEqual([5, 6, 7]);
+    expect((await tech.get(`/api/records/${rec.id}`)).body.pickSetIds).toEqual([saved.body.id]);
+    const del = await tech.delete(`/api/records/${rec.id}`).set('X-CSRF-Token', tech.csrf);
+    expect(del.status).toBe(409);
+    expect(del.body.error).toBe('record_in_use');
+  });
+
+  it('sets a missing shot position and deletes an unlinked record', async () => {
+    const [rec] = (await tech.get(`/api/lines/${world.lineA.id}/records`)).body.filter((r: { fileName: string }) => r.fileName === 'S103.sg2');
+    expect((await tech.patch(`/api/records/${rec.id}`).set('X-CSRF-Token', tech.csrf).send({})).status).toBe(400);
+    const set = await tech.patch(`/api/records/${rec.id}`).set('X-CSRF-Token', tech.csrf).send({ shotId: 'S103', source: { x: 15, z: null } });
+    expect(set.status).toBe(200);
+    expect(set.body).toMatchObject({ shotId: 'S103', source: { x: 15, z: null }, sourceFrom: 'set' });
+    expect((await tech.delete(`/api/records/${rec.id}`).set('X-CSRF-Token', tech.csrf)).status).toBe(204);
+    expect((await tech.get(`/api/records/${rec.id}`)).status).toBe(404);
+  });
 });

@@ -72,6 +72,8 @@ export async function resetWorld(): Promise<World> {
     settings: DEFAULT_INVERSION_SETTINGS, status: 'done', shots: 2, picks: 10, createdBy: users.geophysicist.id,
   }))).id;
   const recordA = (await storeRecord(users.field_tech.id, projectA.id, lineA.id, 'F.sg2', Buffer.from(worldRecord()))).id;
+  // Linked to the pick set, so a DELETE of it (the route × role walk) is refused and changes nothing.
+  await dataSource.query('INSERT INTO pick_set_records (pick_set_id, record_id) VALUES ($1, $2)', [pickSetA, recordA]);
   return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, recordA, loner };
 }
 
