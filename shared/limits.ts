@@ -79,6 +79,8 @@ export const FAR_FROM_STATIONS_SPACINGS = 3;
  */
 /** Bytes in one record file (a SEG-Y file of many shots may be read too). */
 export const MAX_RECORD_BYTES = 256 * 1024 * 1024;
+/** Bytes in one record uploaded to a line (one shot per file; field records are a few MB). */
+export const MAX_RECORD_UPLOAD_BYTES = 64 * 1024 * 1024;
 /** Traces in one record file. */
 export const MAX_RECORD_TRACES = 10_000;
 /** Samples in one trace (250 s at 0.25 ms). */

@@ -40,6 +40,8 @@ export const router = createBrowserRouter([
           // Inversion pages (issue 11) carry the section and chart code: their own chunks, loaded on first visit.
           { path: 'lines/:lineId/inversions/:inversionId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/InversionPage')).InversionPage }) },
           { path: 'lines/:lineId/inversions/:inversionId/compare', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/InversionComparePage')).InversionComparePage }) },
+          // First-break picking on field records: the canvas and trace processing load on first visit.
+          { path: 'lines/:lineId/picking', hydrateFallbackElement: <Loading what="records" />, lazy: async () => ({ Component: (await import('./routes/PickingPage')).PickingPage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },
           { path: 'account', element: <MyAccountPage /> },
           // Reports, the mail outbox and the audit trail (issue 7), each in its own small chunk.

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { picksFromRecordsBody, recordGeometryBody } from '../../shared/schemas/records';
+import { MAX_RECORD_UPLOAD_BYTES } from '../../shared/limits';
 import { HttpError } from '../http/errors';
 import { parse } from '../http/parse';
 import { singleFile } from '../http/upload';
@@ -7,12 +8,9 @@ import { authorize } from '../policies/authorize';
 import { projectOfLine, projectOfRecord } from '../policies/scopes';
 import { deleteRecord, listRecords, picksFromRecords, recordDetail, recordFile, storeRecord, updateRecordGeometry } from '../services/records';
 
-/**
- * One record per request, so the page shows progress and a refusal per file; 64 MB covers a
- * 48-channel record of 16 000 float64 samples a trace several times over (larger files are
- * almost always a whole survey in one SEG-Y, which the page should split).
- */
-export const MAX_RECORD_UPLOAD_BYTES = 64 * 1024 * 1024;
+// One record per request, so the page shows progress and a refusal per file; MAX_RECORD_UPLOAD_BYTES
+// (64 MB) covers a 48-channel record of 16 000 float64 samples a trace several times over (larger
+// files are almost always a whole survey in one SEG-Y, which should be split).
 
 export function recordsRouter(): Router {
   const r = Router();

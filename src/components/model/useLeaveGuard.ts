@@ -6,7 +6,8 @@
 import { useEffect, useRef } from 'react';
 import { useBlocker } from 'react-router';
 
-export function useLeaveGuard(dirty: boolean) {
+/** `searchIsView`: the page keeps only view choices in its query string (e.g. which record), so changing it is not leaving. */
+export function useLeaveGuard(dirty: boolean, { searchIsView = false }: { searchIsView?: boolean } = {}) {
   const dirtyRef = useRef(dirty);
   dirtyRef.current = dirty;
   /** The id of the version this editor just saved; moving to it is not leaving. */
@@ -23,7 +24,7 @@ export function useLeaveGuard(dirty: boolean) {
     if (!dirtyRef.current) return false;
     const samePage = currentLocation.pathname === nextLocation.pathname;
     if (samePage && new URLSearchParams(nextLocation.search).get('from') === justSaved.current && justSaved.current) return false;
-    return !samePage || currentLocation.search !== nextLocation.search;
+    return !samePage || (!searchIsView && currentLocation.search !== nextLocation.search);
   });
   return { blocker, justSaved };
 }
