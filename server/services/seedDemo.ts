@@ -6,7 +6,10 @@ import { parseStationCsv } from '../../shared/stations';
 import { demoConsultancy, demoLine, demoProject, demoUsers, DEMO_PASSWORD } from '../../fixtures/demo/scenario';
 import { hashPassword } from '../auth/password';
 import { Inversion, PickSet, Project, ProjectMember, Station, SurveyLine, User, VelocityModel } from '../entities';
+import { parsePickText } from '../../shared/picks';
+import { demoRecordFiles } from './demoRecords';
 import { importPicks } from './importPicks';
+import { storeRecord } from './records';
 import { startInversion } from './inversions';
 import { saveModelVersion } from './models';
 import { replaceStations } from './stations';
@@ -74,7 +77,20 @@ async function seedDemoFieldData(ds: DataSource): Promise<number> {
     await saveModelVersion(geo.id, project.id, line.id, model, { name: 'main', comment: 'Starting model from the first-break interpretation', basedOn: null });
     created++;
   }
+  if (!(await ds.query('SELECT 1 FROM records WHERE line_id = $1 LIMIT 1', [line.id])).length) created += await seedDemoRecords(tech.id, project.id, line.id);
   return created;
+}
+
+/** One SEG-2 file per shot of the demo picks, made from the demo model (server/services/demoRecords.ts). */
+async function seedDemoRecords(actorId: string, projectId: string, lineId: string): Promise<number> {
+  const stations = parseStationCsv(readFileSync(`${DEMO_FILES}/tq-l1.stations.csv`, 'utf8'));
+  const picks = parsePickText(readFileSync(`${DEMO_FILES}/tq-l1.picks.csv`, 'utf8'));
+  if (!stations.ok || !picks.ok) throw new Error('demo stations or picks are invalid');
+  const shots = [...new Map(picks.picks.map((p) => [p.shotId, { shotId: p.shotId, x: p.sourceX }])).values()];
+  const model = JSON.parse(readFileSync(`${DEMO_FILES}/tq-l1.model.json`, 'utf8'));
+  const files = demoRecordFiles(model, stations.stations, shots, '14/OCT/2026');
+  for (const f of files) await storeRecord(actorId, projectId, lineId, f.fileName, Buffer.from(f.bytes));
+  return files.length;
 }
 
 /**

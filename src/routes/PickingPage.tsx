@@ -42,7 +42,7 @@ export function PickingPage() {
         title={`First breaks on ${line.data.name}`}
         crumbs={[
           { label: 'Projects', to: '/' },
-          { label: 'Line', to: `/lines/${lineId}?tab=records` },
+          { label: line.data.name, to: `/lines/${lineId}?tab=records` },
         ]}
       >
         <p className="max-w-prose text-sm text-stone-600">

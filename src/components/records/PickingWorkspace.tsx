@@ -304,7 +304,7 @@ function RecordPicker({ summary, read, detail, display, canPick, marks, dispatch
         Channel {traces[selected]?.channel}
         {t?.receiver ? ` · receiver x ${t.receiver.x} m` : ' · receiver not placed'}
         {source && t?.receiver ? ` · offset ${Math.abs(t.receiver.x - source.x).toFixed(1)} m` : ''}
-        {mark ? ` · first break ${mark.timeMs.toFixed(2)} ms (${mark.how === 'auto' ? 'automatic' : 'by hand'}, ± ${mark.sigmaMs} ms)` : ' · not picked'}
+        {mark ? ` · first break ${+mark.timeMs.toFixed(3)} ms (${mark.how === 'auto' ? 'automatic' : 'by hand'}, ± ${mark.sigmaMs} ms)` : ' · not picked'}
       </p>
       {display.reduceVelocity && !source && <p className="text-sm font-semibold text-amber-800">Reduced time needs the shot position; set it in the records list.</p>}
       {unplaced > 0 && (
