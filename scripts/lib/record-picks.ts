@@ -3,7 +3,7 @@
  * the station table (by channel), the automatic picker on every trace, and the reasons a trace
  * stays unpicked. Pure: no files.
  */
-import { pickTrace } from '../../shared/picking';
+import { pickGather } from '../../shared/picking';
 import type { RecordTrace, SeismicRecord } from '../../shared/records';
 
 export interface PickRow {
@@ -31,17 +31,20 @@ export function pickRecord(record: SeismicRecord, name: string, stations: Statio
   const sources = new Set(record.traces.map((t) => t.source?.x).filter((x): x is number => x !== undefined));
   const rows: PickRow[] = [];
   let unpicked = 0, unplaced = 0;
-  for (const trace of record.traces) {
-    const receiver = receiverOf(trace, stations);
+  const receivers = record.traces.map((t) => receiverOf(t, stations));
+  // The gather is picked as a whole: each pick is checked against its neighbours along the spread.
+  const outcomes = pickGather(record.traces, record.traces.map((t, i) => (t.source && receivers[i] ? receivers[i]!.x - t.source.x : null)));
+  record.traces.forEach((trace, i) => {
+    const receiver = receivers[i];
     if (!trace.source || !receiver) {
       unplaced++;
       unpicked++;
-      continue;
+      return;
     }
-    const outcome = trace.markedDead ? null : pickTrace(trace.samples, trace.sampleInterval, trace.delay);
+    const outcome = trace.markedDead ? null : outcomes[i];
     if (!outcome?.ok || outcome.pick.time <= 0) {
       unpicked++;
-      continue;
+      return;
     }
     rows.push({
       shotId: sources.size > 1 ? `${name}@${trace.source.x}` : name,
@@ -51,7 +54,7 @@ export function pickRecord(record: SeismicRecord, name: string, stations: Statio
       timeMs: round(outcome.pick.time * 1000, 4),
       sigmaMs: round(outcome.pick.sigma * 1000, 3),
     });
-  }
+  });
   return { rows, unpicked, unplaced };
 }
 

@@ -60,11 +60,34 @@ export function pickTrace(samples: Float64Array, sampleInterval: number, delay: 
   const best = Math.max(...candidates.map((c) => c.snr));
   const chosen = candidates.find((c) => c.snr >= Math.max(o.minSnr, best * o.candidateFraction));
   if (!chosen) return { ok: false, reason: 'no_arrival' };
-  const { snr } = chosen;
+  return refined(x, chosen.index, chosen.snr, sampleInterval, delay, shot);
+}
+
+/**
+ * The onset inside a time window (s after the shot) where the arrival is expected, e.g. from the
+ * neighbouring traces' picks: the AIC minimum of the window, refined as above, with its SNR.
+ */
+export function pickInWindow(samples: Float64Array, sampleInterval: number, delay: number, from: number, to: number, options: PickerOptions = {}): PickOutcome {
+  const o = { ...DEFAULTS, ...options };
+  const n = samples.length;
+  if (isDead(samples)) return { ok: false, reason: 'dead' };
+  const x = demeaned(samples);
+  const shot = Math.max(0, Math.ceil(-delay / sampleInterval));
+  const lo = Math.max(shot, Math.floor((from - delay) / sampleInterval)), hi = Math.min(n, Math.ceil((to - delay) / sampleInterval));
+  if (hi - lo < 8) return { ok: false, reason: 'no_arrival' };
+  const short = Math.max(4, Math.round(o.shortWindow / sampleInterval));
+  const long = Math.max(16, Math.round(o.longWindow / sampleInterval));
+  const index = aicOnset(x, lo, hi);
+  const snr = localSnr(x, index, short, long, Math.sqrt(quietestEnergy(x, long)));
+  if (snr < o.minSnr) return { ok: false, reason: 'no_arrival' };
+  return refined(x, index, snr, sampleInterval, delay, shot);
+}
+
+function refined(x: Float64Array, onset: number, snr: number, sampleInterval: number, delay: number, shot: number): PickOutcome {
   // Refine: the AIC of the first difference within ±1 ms of the onset. A causal arrival starts
   // at zero amplitude but with a jump in slope, so the difference has a sharper onset than the samples.
   const near = Math.max(2, Math.round(0.001 / sampleInterval)); // ±1 ms: a refinement, not a new search
-  const index = aicOnset(difference(x), Math.max(shot, chosen.index - near), Math.min(n, chosen.index + near));
+  const index = aicOnset(difference(x), Math.max(shot, onset - near), Math.min(x.length, onset + near));
   const quality = qualityOf(snr);
   // The onset lies between the last noise sample and the first signal sample: take the midpoint.
   return { ok: true, pick: { time: delay + (index - 0.5) * sampleInterval, index, quality, sigma: sigmaOf(quality, sampleInterval), snr } };

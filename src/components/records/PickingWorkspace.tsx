@@ -53,8 +53,8 @@ export function PickingWorkspace({ lineId, records, record, onRecord, canPick, p
     try {
       for (const [i, r] of records.entries()) {
         // The headers too: the curves beside the record need the receiver positions.
-        const [read] = await Promise.all([queryClient.fetchQuery(recordFileQuery(r.id, r.fileName)), queryClient.fetchQuery(recordDetailQuery(r.id))]);
-        dispatch({ kind: 'replace', recordId: r.id, marks: keepHandPicks(autoPickRecord(read), picking.byRecord[r.id]) });
+        const [read, headers] = await Promise.all([queryClient.fetchQuery(recordFileQuery(r.id, r.fileName)), queryClient.fetchQuery(recordDetailQuery(r.id))]);
+        dispatch({ kind: 'replace', recordId: r.id, marks: keepHandPicks(autoPickRecord(read, headers), picking.byRecord[r.id]) });
         setAutoAll({ done: i + 1, error: null });
         // Let the page draw between records.
         await new Promise((resolve) => setTimeout(resolve, 0));
@@ -235,7 +235,7 @@ function RecordPicker({ summary, read, detail, display, canPick, marks, dispatch
           return true;
         case 'a':
         case 'A':
-          if (canPick) dispatch({ kind: 'replace', recordId: summary.id, marks: keepHandPicks(autoPickRecord(read), marks) });
+          if (canPick) dispatch({ kind: 'replace', recordId: summary.id, marks: keepHandPicks(autoPickRecord(read, detail), marks) });
           return true;
         case 'z':
         case 'Z':
@@ -287,7 +287,7 @@ function RecordPicker({ summary, read, detail, display, canPick, marks, dispatch
           Whole record
         </Button>
         {canPick && (
-          <Button size="sm" variant="secondary" onClick={() => dispatch({ kind: 'replace', recordId: summary.id, marks: keepHandPicks(autoPickRecord(read), marks) })} data-testid="autopick-record">
+          <Button size="sm" variant="secondary" onClick={() => dispatch({ kind: 'replace', recordId: summary.id, marks: keepHandPicks(autoPickRecord(read, detail), marks) })} data-testid="autopick-record">
             Auto-pick this record
           </Button>
         )}

@@ -1,0 +1,78 @@
+import { pickInWindow, pickTrace, type PickerOptions, type PickOutcome } from './pick-trace';
+
+export interface GatherTrace {
+  samples: Float64Array;
+  /** Seconds. */
+  sampleInterval: number;
+  /** Seconds (negative: pre-trigger). */
+  delay: number;
+}
+
+/** A pick further than this from the trend of its neighbours is looked for again near the trend (s). */
+const OUTLIER = 0.002;
+/** Half-width of the window searched around the trend (s). */
+const WINDOW = 0.003;
+/** Neighbours each side (in offset) that make the trend. */
+const NEIGHBOURS = 3;
+
+/**
+ * Picks a shot gather: every trace on its own first (pickTrace), then a consistency pass along the
+ * spread — on each side of the shot, each pick is compared with the straight-line trend (Theil–Sen:
+ * the median of pairwise slopes; Sen 1968) of its nearest picked neighbours in offset, and a pick far
+ * from it (a later, stronger arrival or a burst of noise) is looked for again in a window around the
+ * trend. First arrivals change slope only gently from geophone to geophone, so a local line is a safe
+ * guide (common practice, no source). `positions`: each receiver's position along the line minus the
+ * shot's (m), null where unknown; without positions the traces are picked on their own.
+ */
+export function pickGather(traces: GatherTrace[], positions: (number | null)[] | null, options: PickerOptions = {}): PickOutcome[] {
+  const outcomes = traces.map((t) => pickTrace(t.samples, t.sampleInterval, t.delay, options));
+  if (!positions) return outcomes;
+  for (const side of [-1, 1]) {
+    const members = traces.map((_, i) => i).filter((i) => positions[i] !== null && Math.sign(positions[i]!) === side);
+    members.sort((a, b) => Math.abs(positions[a]!) - Math.abs(positions[b]!));
+    for (let pass = 0; pass < 2; pass++) {
+      const changes: [number, PickOutcome][] = [];
+      members.forEach((i, k) => {
+        const current = outcomes[i];
+        if (current.ok === false && current.reason === 'dead') return;
+        const trend = trendAt(members, k, positions, outcomes);
+        if (trend === null) return;
+        const off = current.ok ? current.pick.time - trend : Infinity;
+        if (Math.abs(off) <= OUTLIER) return;
+        const t = traces[i];
+        const again = pickInWindow(t.samples, t.sampleInterval, t.delay, trend - WINDOW, trend + WINDOW, options);
+        if (again.ok && Math.abs(again.pick.time - trend) < Math.abs(off)) changes.push([i, again]);
+      });
+      for (const [i, o] of changes) outcomes[i] = o;
+      if (!changes.length) break;
+    }
+  }
+  return outcomes;
+}
+
+/** The time the neighbours' trend predicts at member k (s), or null with fewer than three picked neighbours. */
+function trendAt(members: number[], k: number, positions: (number | null)[], outcomes: PickOutcome[]): number | null {
+  const pts: [number, number][] = [];
+  for (const dir of [-1, 1]) {
+    let taken = 0;
+    for (let j = k + dir; j >= 0 && j < members.length && taken < NEIGHBOURS; j += dir) {
+      const o = outcomes[members[j]];
+      if (!o.ok) continue;
+      pts.push([Math.abs(positions[members[j]]!), o.pick.time]);
+      taken++;
+    }
+  }
+  if (pts.length < 3) return null;
+  const slopes: number[] = [];
+  for (let a = 0; a < pts.length; a++) for (let b = a + 1; b < pts.length; b++) if (pts[b][0] !== pts[a][0]) slopes.push((pts[b][1] - pts[a][1]) / (pts[b][0] - pts[a][0]));
+  if (!slopes.length) return null;
+  const slope = median(slopes);
+  const intercept = median(pts.map(([x, t]) => t - slope * x));
+  return intercept + slope * Math.abs(positions[members[k]]!);
+}
+
+function median(v: number[]): number {
+  const s = [...v].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
