@@ -36,6 +36,13 @@ export const projectOfRecord: ProjectScope = async (req) => {
   return rows[0]?.project_id ?? null;
 };
 
+export const projectOfBorehole: ProjectScope = async (req) => {
+  const id = req.params.boreholeId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM boreholes b JOIN survey_lines l ON l.id = b.line_id WHERE b.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};
+
 export const projectOfModel: ProjectScope = async (req) => {
   const id = req.params.modelId;
   if (!isUuid(id)) return null;

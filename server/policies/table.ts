@@ -44,6 +44,10 @@ export const policyTable = {
   'line.records.create': { roles: ['geophysicist', 'field_tech'] },
   'record.read': { roles: STAFF },
   'record.update': { roles: ['geophysicist', 'field_tech'] },
+  // Issue 13 item 3: boreholes are field data; staff read them, field technicians and geophysicists enter them.
+  'line.boreholes.read': { roles: STAFF },
+  'line.boreholes.create': { roles: ['geophysicist', 'field_tech'] },
+  'borehole.update': { roles: ['geophysicist', 'field_tech'] },
 
   'line.models.create': { roles: ['geophysicist'] },
   'model.read': { roles: STAFF },

@@ -7,6 +7,7 @@ import { linesRouter } from './lines';
 import { modelsRouter } from './models';
 import { pickSetsRouter } from './pickSets';
 import { recordsRouter } from './records';
+import { boreholesRouter } from './boreholes';
 import { runsRouter } from './runs';
 import { inversionsRouter } from './inversions';
 import { reportsRouter } from './reports';
@@ -18,5 +19,5 @@ import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
 export function apiRouters(redis: Redis, queue: Queue, mailer: Mailer): Router[] {
-  return [healthRouter(redis, queue), authRouter(redis), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter()];
+  return [healthRouter(redis, queue), authRouter(redis), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), boreholesRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter()];
 }

@@ -6,7 +6,9 @@ import { parseStationCsv } from '../../shared/stations';
 import { demoConsultancy, demoLine, demoProject, demoUsers, DEMO_PASSWORD } from '../../fixtures/demo/scenario';
 import { hashPassword } from '../auth/password';
 import { Inversion, PickSet, Project, ProjectMember, Station, SurveyLine, User, VelocityModel } from '../entities';
+import { parseBoreholeCsv } from '../../shared/boreholes';
 import { parsePickText } from '../../shared/picks';
+import { createBoreholesFromFile } from './boreholes';
 import { demoRecordFiles } from './demoRecords';
 import { importPicks } from './importPicks';
 import { storeRecord } from './records';
@@ -78,6 +80,11 @@ async function seedDemoFieldData(ds: DataSource): Promise<number> {
     created++;
   }
   if (!(await ds.query('SELECT 1 FROM records WHERE line_id = $1 LIMIT 1', [line.id])).length) created += await seedDemoRecords(tech.id, project.id, line.id);
+  if (!(await ds.query('SELECT 1 FROM boreholes WHERE line_id = $1 LIMIT 1', [line.id])).length) {
+    const holes = parseBoreholeCsv(readFileSync(`${DEMO_FILES}/tq-l1.boreholes.csv`, 'utf8'));
+    if (!holes.ok) throw new Error(`demo boreholes are invalid: ${JSON.stringify(holes.issues)}`);
+    created += (await createBoreholesFromFile(tech.id, project.id, line.id, 'tq-l1.boreholes.csv', holes.boreholes)).length;
+  }
   return created;
 }
 

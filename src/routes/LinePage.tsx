@@ -11,19 +11,20 @@ import { InterpretationTab } from '../components/interpretation/InterpretationTa
 import { LineTabs, TabPanel, type TabDef } from '../components/line/LineTabs';
 import { PickSetsTab } from '../components/line/picksets/PickSetsTab';
 import { RecordsTab } from '../components/records/RecordsTab';
+import { BoreholesTab } from '../components/boreholes/BoreholesTab';
 import { StationsTab } from '../components/line/stations/StationsTab';
 import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
 import { formatDate, ROLE_LABELS } from '../lib/format';
 
-type TabKey = 'stations' | 'records' | 'picks' | 'checks' | 'layers' | 'models' | 'runs' | 'inversions';
-const TAB_KEYS: TabKey[] = ['stations', 'records', 'picks', 'checks', 'layers', 'models', 'runs', 'inversions'];
+type TabKey = 'stations' | 'records' | 'boreholes' | 'picks' | 'checks' | 'layers' | 'models' | 'runs' | 'inversions';
+const TAB_KEYS: TabKey[] = ['stations', 'records', 'boreholes', 'picks', 'checks', 'layers', 'models', 'runs', 'inversions'];
 
 /** Who may change field data on a line (the server's policy table decides; this only picks the view). */
 const FIELD_EDITORS: ProjectRole[] = ['geophysicist', 'field_tech'];
 
 /**
- * A survey line in tabs: its stations, its shot records, its pick sets, the quality checks of one pick set, the
+ * A survey line in tabs: its stations, its shot records, its boreholes, its pick sets, the quality checks of one pick set, the
  * layer methods on a pick set, its velocity model versions, its forward runs and its inversions. The tab, pick set and revision live in the address (?tab=…&pickset=…&rev=…),
  * so a link or a reload brings back the same view.
  */
@@ -68,6 +69,7 @@ export function LinePage() {
   const tabs: TabDef<TabKey>[] = [
     { key: 'stations', label: 'Stations', badge: l.stations.length },
     { key: 'records', label: 'Records' },
+    { key: 'boreholes', label: 'Boreholes' },
     { key: 'picks', label: 'Pick sets', badge: l.pickSets.length },
     { key: 'checks', label: 'Checks' },
     { key: 'layers', label: 'Layer methods' },
@@ -104,6 +106,11 @@ export function LinePage() {
       {visited.has('records') && (
         <TabPanel idPrefix={idPrefix} tabKey="records" hidden={tab !== 'records'}>
           <RecordsTab line={l} canEdit={canEditField} />
+        </TabPanel>
+      )}
+      {visited.has('boreholes') && (
+        <TabPanel idPrefix={idPrefix} tabKey="boreholes" hidden={tab !== 'boreholes'}>
+          <BoreholesTab line={l} canEdit={canEditField} />
         </TabPanel>
       )}
       {visited.has('picks') && (

@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRouters } from '../../server/routes';
 import { anonymousAgent, signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
-import { emailOf, PASSWORD, resetWorld, ROLES, type World, type WorldRole } from './support/world';
+import { emailOf, freshBorehole, PASSWORD, resetWorld, ROLES, type World, type WorldRole } from './support/world';
 
 type Caller = WorldRole | 'anonymous';
 const CALLERS: Caller[] = ['anonymous', ...ROLES];
@@ -51,6 +51,12 @@ const EXPECTED: Record<string, Caller[]> = {
   'PATCH /api/records/:recordId': ['geophysicist', 'field_tech'],
   'DELETE /api/records/:recordId': ['geophysicist', 'field_tech'],
   'POST /api/lines/:lineId/picksets/from-records': ['geophysicist', 'field_tech'],
+  // Issue 13 item 3: boreholes on a line — staff read; field technicians and geophysicists enter, change and delete; never clients.
+  'GET /api/lines/:lineId/boreholes': STAFF_A,
+  'POST /api/lines/:lineId/boreholes': ['geophysicist', 'field_tech'],
+  'POST /api/lines/:lineId/boreholes/file': ['geophysicist', 'field_tech'],
+  'PUT /api/boreholes/:boreholeId': ['geophysicist', 'field_tech'],
+  'DELETE /api/boreholes/:boreholeId': ['geophysicist', 'field_tech'],
   'POST /api/lines/:lineId/models': ['geophysicist'],
   'GET /api/models/:modelId': STAFF_A,
   'GET /api/models/:modelId/grid': STAFF_A,
@@ -129,6 +135,7 @@ function concretePath(path: string, w: World): string {
     .replace(':reportId', w.reportA)
     .replace(':inversionId', w.inversionA)
     .replace(':recordId', w.recordA)
+    .replace(':boreholeId', w.boreholeA)
     .replace(':shotId', 'F')
     .replace(':number', '999')
     .replace(':userId', w.loner.id);
@@ -177,7 +184,8 @@ describe('route × role permission matrix', () => {
       actual[route.key] = [];
       for (const caller of CALLERS) {
         const agent = agents.get(caller)!;
-        const path = concretePath(route.path, world);
+        // A DELETE that gets through removes its hole: each caller gets a hole of its own.
+        const path = route.key === 'DELETE /api/boreholes/:boreholeId' ? `/api/boreholes/${await freshBorehole(world)}` : concretePath(route.path, world);
         const req = agent[route.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](path).set('X-CSRF-Token', agent.csrf);
         const res = route.method === 'GET' ? await req : await req.send(bodyFor(route.key, world));
         // /api/health answers 503 when a service is down (no worker runs in this suite); anything else must not fail.

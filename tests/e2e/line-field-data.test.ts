@@ -76,8 +76,11 @@ describe('line page: stations, pick uploads and checks in the browser', () => {
     await revision.getByRole('button', { name: 'Confirm: restore' }).click();
     await expect.poll(() => page.getByTestId('stations-status').textContent()).toMatch(/48 stations on record/);
 
-    // Keyboard: arrow keys move between the tabs.
+    // Keyboard: arrow keys move between the tabs (stations, records, boreholes, pick sets).
     await page.getByTestId('tab-stations').focus();
+    await page.keyboard.press('ArrowRight');
+    await page.getByTestId('panel-records').waitFor();
+    await page.keyboard.press('ArrowRight');
     await page.keyboard.press('ArrowRight');
     await page.getByTestId('panel-picks').waitFor();
     expect(new URL(page.url()).searchParams.get('tab')).toBe('picks');

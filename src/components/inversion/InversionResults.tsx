@@ -53,7 +53,7 @@ export function InversionResults({ inversion, lineName }: { inversion: Inversion
       <RunTabPanel idPrefix={idPrefix} tabKey={view}>
         {needsSection && section.isPending && <Loading what="section" />}
         {needsSection && section.isError && <LoadError error={section.error} what="section" onRetry={() => void section.refetch()} />}
-        {view === 'section' && section.data && <InversionSectionPanel section={section.data} />}
+        {view === 'section' && section.data && <InversionSectionPanel section={section.data} lineId={inversion.lineId} />}
         {view === 'checkerboard' && section.data && (
           section.data.checkerboard ? (
             <CheckerboardPanel section={section.data} checkerboard={section.data.checkerboard} />

@@ -7,6 +7,7 @@ import { velocityPixels } from '../run/section/velocityColours';
 import type { Wavefronts } from '../run/section/wavefronts';
 import { greyMaskedPixels } from './coverageMask';
 import { drawDoi } from './drawDoi';
+import type { SectionHole } from '../plot/drawBoreholes';
 
 export interface InversionSectionScene {
   grid: Grid;
@@ -23,6 +24,8 @@ export interface InversionSectionScene {
   surface: [number, number][] | null;
   stations: { x: number; z: number }[];
   shots: { shotId: string; x: number; z: number }[];
+  /** The line's boreholes and trial pits (none on a comparison). */
+  boreholes?: readonly SectionHole[];
 }
 
 /**
@@ -55,7 +58,7 @@ export function InversionSectionCanvas({ scene, width, exaggeration, label, test
     const stations: Station[] = scene.stations.map((s) => ({ station: 0, x: s.x, z: s.z }));
     const f = drawSection(
       ctx,
-      { grid: scene.grid, image, vRange: scene.range, fronts: scene.contours, rays: [], highlightPick: null, surface: scene.surface, layerBases: [], stations, shots: scene.shots, selectedShot: null },
+      { grid: scene.grid, image, vRange: scene.range, fronts: scene.contours, rays: [], highlightPick: null, surface: scene.surface, layerBases: [], stations, shots: scene.shots, selectedShot: null, boreholes: scene.boreholes },
       width,
       exaggeration,
     );

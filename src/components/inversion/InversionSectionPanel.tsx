@@ -1,4 +1,5 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
+import { useBoreholes } from '../../api/boreholes';
 import type { InversionSectionView } from '../../../shared/schemas/inversions';
 import { useElementWidth } from '../run/useElementWidth';
 import { DEFAULT_COVERAGE_THRESHOLD_M, thresholdCeiling } from './coverageMask';
@@ -11,11 +12,13 @@ import { useSectionScene } from './useSectionScene';
 const MIN_SECTION_WIDTH = 560;
 
 /** The final velocity section with its coverage mask, contours and depth-of-investigation line, and the controls for them. */
-export function InversionSectionPanel({ section }: { section: InversionSectionView }) {
+export function InversionSectionPanel({ section, lineId }: { section: InversionSectionView; lineId: string }) {
   const [threshold, setThreshold] = useState(DEFAULT_COVERAGE_THRESHOLD_M);
   const [ve, setVe] = useState(2);
   const [contours, setContours] = useState(true);
-  const scene = useSectionScene(section, threshold, contours);
+  const sectionScene = useSectionScene(section, threshold, contours);
+  const holes = useBoreholes(lineId);
+  const scene = useMemo(() => ({ ...sectionScene, boreholes: holes.data ?? [] }), [sectionScene, holes.data]);
   const { ref, width } = useElementWidth<HTMLDivElement>();
   const ground = section.coverage.filter((c) => c !== null).length;
   const share = ground ? Math.round((100 * scene.maskedCount) / ground) : 0;

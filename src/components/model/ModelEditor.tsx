@@ -3,6 +3,7 @@
  * import/export and the live wavefront preview. The draft lives in an undo/redo history; the
  * preview is solved in a Web Worker from the rasterised draft.
  */
+import { useBoreholes } from '../../api/boreholes';
 import { useDeferredValue, useMemo, useRef, useState } from 'react';
 import type { Grid } from '../../../shared/grid';
 import { evalPolyline, rasteriseModel, type ModelFile, type ModelLayer, type RasterModel } from '../../../shared/model';
@@ -61,6 +62,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
   const [savedDraft, setSavedDraft] = useState<ModelFile>(initial);
   const [basedOn, setBasedOn] = useState<string | null>(base?.id ?? null);
   const save = useSaveModel(line.id);
+  const holes = useBoreholes(line.id);
 
   const raster = useMemo(() => {
     if (!gridIsUsable(draft.grid)) return null;
@@ -212,6 +214,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
                   onNudge={onNudge}
                   onDeleteNode={() => onDeleteNode()}
                   stations={line.stations}
+                  boreholes={holes.data}
                   shots={shots.shots}
                   selectedShot={shots.shotId}
                   onSelectShot={shots.setShotId}

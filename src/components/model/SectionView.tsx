@@ -3,6 +3,7 @@
  * wavefronts, with the pointer gestures of each tool and keyboard nudging of the selected node.
  * Gestures report model coordinates; the editor turns them into history steps.
  */
+import type { SectionHole } from '../plot/drawBoreholes';
 import { useEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import { sampleTime } from '../../../shared/eikonal';
 import type { ModelFile, RasterModel } from '../../../shared/model';
@@ -35,6 +36,8 @@ export interface SectionViewProps {
   onNudge: (dxCells: number, dzCells: number) => void;
   onDeleteNode: () => void;
   stations: readonly { x: number; z: number }[];
+  /** The line's boreholes and trial pits. */
+  boreholes?: readonly SectionHole[];
   shots: readonly { id: string; x: number; z: number }[];
   selectedShot: string | null;
   onSelectShot: (id: string) => void;
@@ -99,6 +102,7 @@ export function SectionView(props: SectionViewProps) {
     selectedNode: props.selectedNode,
     painted,
     stations: props.stations,
+    boreholes: props.boreholes,
     shots: props.shots,
     selectedShot: props.selectedShot,
     preview:

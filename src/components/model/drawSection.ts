@@ -3,6 +3,7 @@
  * labelled in ms, rays, interfaces with their nodes, the ground surface, stations, shots, the
  * gesture overlay, and the axes with units. Pure drawing: everything it needs is in the scene.
  */
+import { drawBoreholes, type SectionHole } from '../plot/drawBoreholes';
 import type { RasterModel } from '../../../shared/model';
 import { AIR_RGB, INVALID_RGB, lutIndex, VELOCITY_LUT, type VelocityRange } from './colourScale';
 import { niceTicks, xToPx, zToPx, type SectionLayout } from './sectionGeometry';
@@ -37,6 +38,8 @@ export interface SectionScene {
   selectedShot: string | null;
   preview: ScenePreview | null;
   overlay: { kind: 'rect'; a: Pt; b: Pt } | { kind: 'brush'; x: number; z: number; r: number } | null;
+  /** The line's boreholes and trial pits, drawn over the model. */
+  boreholes?: readonly SectionHole[];
 }
 
 const FONT = '13px "Source Sans 3", ui-sans-serif, system-ui, sans-serif';
@@ -92,6 +95,7 @@ export function drawSection(ctx: CanvasRenderingContext2D, s: SectionScene): voi
   if (s.preview) drawPreview(ctx, L, s.preview);
   for (const itf of s.interfaces) polyline(ctx, L, itf.points, itf.layer === s.selectedLayer ? ACCENT : INK, itf.layer === s.selectedLayer ? 2.4 : 1.6);
   if (s.surface) polyline(ctx, L, s.surface, '#44403c', 2.2);
+  if (s.boreholes?.length) drawBoreholes(ctx, s.boreholes, (x, z) => [xToPx(L, x), zToPx(L, z)]);
   if (s.showHandles) drawHandles(ctx, L, s);
   drawOverlay(ctx, L, s);
   ctx.restore();

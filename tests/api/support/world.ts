@@ -6,6 +6,7 @@ import type { ProjectRole } from '../../../shared/schemas/projects';
 import { importPicks } from '../../../server/services/importPicks';
 import { saveModelVersion } from '../../../server/services/models';
 import { writeSeg2 } from '../../../shared/records';
+import { createBorehole } from '../../../server/services/boreholes';
 import { storeRecord } from '../../../server/services/records';
 
 export const PASSWORD = 'test-password-123';
@@ -30,6 +31,7 @@ export interface World {
   reportA: string;
   /** A small SEG-2 record of shot F on line A (worldRecord()). */
   recordA: string;
+  boreholeA: string;
   /** A finished inversion row of pick set A (no iterations or result stored). */
   inversionA: string;
   /** An active account that belongs to no project. */
@@ -74,7 +76,8 @@ export async function resetWorld(): Promise<World> {
   const recordA = (await storeRecord(users.field_tech.id, projectA.id, lineA.id, 'F.sg2', Buffer.from(worldRecord()))).id;
   // Linked to the pick set, so a DELETE of it (the route × role walk) is refused and changes nothing.
   await dataSource.query('INSERT INTO pick_set_records (pick_set_id, record_id) VALUES ($1, $2)', [pickSetA, recordA]);
-  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, recordA, loner };
+  const boreholeA = await freshBorehole({ users, projectA, lineA });
+  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, recordA, boreholeA, loner };
 }
 
 /** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */
@@ -100,3 +103,10 @@ export function worldRecord(): Uint8Array {
   }));
 }
 
+
+let holes = 0;
+/** A new borehole on line A (the route × role walk deletes one per allowed caller). */
+export async function freshBorehole(w: Pick<World, 'users' | 'projectA' | 'lineA'>): Promise<string> {
+  const body = { name: `BH${++holes}`, kind: 'borehole' as const, x: 5, groundZ: null, waterDepth: null, contacts: [{ depth: 3, material: 'rock', rockTop: true }], note: '' };
+  return (await createBorehole(w.users.field_tech.id, w.projectA.id, w.lineA.id, body)).id;
+}

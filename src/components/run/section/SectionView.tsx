@@ -1,3 +1,4 @@
+import { useBoreholes } from '../../../api/boreholes';
 import { useMemo, useState, type ReactNode } from 'react';
 import { evalPolyline } from '../../../../shared/model/polyline';
 import { sToMs } from '../../../../shared/units';
@@ -63,6 +64,7 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
   const fronts = useMemo(() => (field.data && levels ? wavefronts(field.data, field.data.source, levels) : null), [field.data, levels]);
 
   const file = model.data?.model;
+  const holes = useBoreholes(run.lineId);
   const overlay = useMemo<SectionOverlay>(() => {
     const surface = (file?.surface as [number, number][] | undefined) ?? null;
     return {
@@ -74,8 +76,9 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
       stations,
       shots: (shots.data ?? []).map((s) => ({ shotId: s.shotId, x: s.sourceX, z: s.sourceZ ?? (surface ? evalPolyline(surface, s.sourceX) : Number.NaN) })),
       selectedShot: shotId,
+      boreholes: holes.data ?? [],
     };
-  }, [fronts, showRays, rays.data, highlightPick, file, stations, shots.data, shotId]);
+  }, [fronts, showRays, rays.data, highlightPick, file, stations, shots.data, shotId, holes.data]);
 
   const problem = velocity.error ?? field.error ?? rays.error ?? model.error;
 

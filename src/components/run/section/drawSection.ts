@@ -1,3 +1,4 @@
+import { drawBoreholes, type SectionHole } from '../../plot/drawBoreholes';
 import type { RayPath, Station } from '../../../api/types';
 import { sectionFrame, niceTicks, type SectionFrame } from './sectionScale';
 import { VELOCITY_STOPS } from './velocityColours';
@@ -18,6 +19,8 @@ export interface SectionScene {
   stations: Station[];
   shots: { shotId: string; x: number; z: number }[];
   selectedShot: string | null;
+  /** The line's boreholes and trial pits. */
+  boreholes?: readonly SectionHole[];
 }
 
 export const SECTION_COLOURS = {
@@ -100,6 +103,7 @@ export function drawSection(ctx: CanvasRenderingContext2D, scene: SectionScene, 
       ctx.fillText(label.text, x, y + 0.5);
     }
   }
+  if (scene.boreholes?.length) drawBoreholes(ctx, scene.boreholes, f.toPx);
   ctx.restore();
 
   // Stations and shots may sit on the top edge: draw them unclipped.

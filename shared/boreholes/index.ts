@@ -1,0 +1,3 @@
+export { parseBoreholeCsv, type BoreholeCsvResult, type BoreholeFileIssue } from './csv';
+export { groundAt } from './ground';
+export { boreholeTies } from './ties';
