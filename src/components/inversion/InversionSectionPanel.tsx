@@ -1,5 +1,9 @@
 import { useMemo, useState } from 'react';
 import { useBoreholes } from '../../api/boreholes';
+import type { RasterModel } from '../../../shared/model';
+import { isoVelocityDepth } from '../../../shared/model/iso-depth';
+import { evalPolyline } from '../../../shared/model/polyline';
+import { BoreholeTiesTable } from '../boreholes/BoreholeTiesTable';
 import type { InversionSectionView } from '../../../shared/schemas/inversions';
 import { useElementWidth } from '../run/useElementWidth';
 import { DEFAULT_COVERAGE_THRESHOLD_M, thresholdCeiling } from './coverageMask';
@@ -7,6 +11,23 @@ import { InversionSectionCanvas } from './InversionSectionCanvas';
 import { SectionControls } from './SectionControls';
 import { SectionLegend } from './SectionLegend';
 import { useSectionScene } from './useSectionScene';
+
+/** Where the ties start: a common threshold for weathered over sound rock (common practice, no source); the user sets the site's. */
+const DEFAULT_ROCK_VELOCITY = 2500;
+
+/** The section as the iso-depth reader wants it (grid, velocities, ground), or null without a ground line. */
+function isoModel(section: InversionSectionView): RasterModel | null {
+  const surface = section.surface;
+  if (!surface) return null;
+  return { grid: section.grid, velocity: Float32Array.from(section.velocity, (v) => v ?? Number.NaN), surfaceZ: (at: number) => evalPolyline(surface, at) } as unknown as RasterModel;
+}
+
+/** Depth below ground of the first crossing of v* under x, or null where never reached or off the section. */
+function isoDepthAt(model: RasterModel | null, velocity: number, x: number): number | null {
+  const { grid } = model ?? { grid: null };
+  if (!model || !grid || x < grid.x0 || x > grid.x0 + (grid.nx - 1) * grid.dx) return null;
+  return isoVelocityDepth(model, velocity, x).depth;
+}
 
 /** Narrower than this the section cannot be read; on a phone it scrolls sideways inside its frame instead. */
 const MIN_SECTION_WIDTH = 560;
@@ -16,8 +37,10 @@ export function InversionSectionPanel({ section, lineId }: { section: InversionS
   const [threshold, setThreshold] = useState(DEFAULT_COVERAGE_THRESHOLD_M);
   const [ve, setVe] = useState(2);
   const [contours, setContours] = useState(true);
+  const [rockVelocity, setRockVelocity] = useState(DEFAULT_ROCK_VELOCITY);
   const sectionScene = useSectionScene(section, threshold, contours);
   const holes = useBoreholes(lineId);
+  const iso = useMemo(() => isoModel(section), [section]);
   const scene = useMemo(() => ({ ...sectionScene, boreholes: holes.data ?? [] }), [sectionScene, holes.data]);
   const { ref, width } = useElementWidth<HTMLDivElement>();
   const ground = section.coverage.filter((c) => c !== null).length;
@@ -42,6 +65,12 @@ export function InversionSectionPanel({ section, lineId }: { section: InversionS
         <InversionSectionCanvas scene={scene} width={Math.max(MIN_SECTION_WIDTH, width - 16)} exaggeration={ve} label={`Inverted velocity section, vertical exaggeration ${ve} times, ground with less than ${threshold.toFixed(1)} m of ray greyed`} />
       </div>
       <SectionLegend />
+      <BoreholeTiesTable holes={holes.data ?? []} depthAt={(x) => isoDepthAt(iso, rockVelocity, x)} surfaceName={`the ${rockVelocity} m/s iso-velocity`}>
+        <label className="flex items-center gap-2 text-sm font-semibold text-stone-700">
+          Top of rock at (m/s)
+          <input type="number" min={100} step={100} className="w-24 rounded-md border border-stone-300 px-2 py-1 tabular-nums" value={rockVelocity} onChange={(e) => Number(e.target.value) > 0 && setRockVelocity(Number(e.target.value))} data-testid="ties-velocity" />
+        </label>
+      </BoreholeTiesTable>
     </div>
   );
 }
