@@ -15,17 +15,18 @@ import { useSectionScene } from './useSectionScene';
 /** Where the ties start: a common threshold for weathered over sound rock (common practice, no source); the user sets the site's. */
 const DEFAULT_ROCK_VELOCITY = 2500;
 
-/** The section as the iso-depth reader wants it (grid, velocities, ground), or null without a ground line. */
-function isoModel(section: InversionSectionView): RasterModel | null {
+/** The section as the iso-depth reader wants it (grid, the scene's velocities, ground), or null without a ground line. */
+function isoModel(section: InversionSectionView, velocity: Float32Array): RasterModel | null {
   const surface = section.surface;
   if (!surface) return null;
-  return { grid: section.grid, velocity: Float32Array.from(section.velocity, (v) => v ?? Number.NaN), surfaceZ: (at: number) => evalPolyline(surface, at) } as unknown as RasterModel;
+  return { grid: section.grid, velocity, surfaceZ: (at: number) => evalPolyline(surface, at) } as unknown as RasterModel;
 }
 
 /** Depth below ground of the first crossing of v* under x, or null where never reached or off the section. */
 function isoDepthAt(model: RasterModel | null, velocity: number, x: number): number | null {
-  const { grid } = model ?? { grid: null };
-  if (!model || !grid || x < grid.x0 || x > grid.x0 + (grid.nx - 1) * grid.dx) return null;
+  if (!model) return null;
+  const { grid } = model;
+  if (x < grid.x0 || x > grid.x0 + (grid.nx - 1) * grid.dx) return null;
   return isoVelocityDepth(model, velocity, x).depth;
 }
 
@@ -40,7 +41,7 @@ export function InversionSectionPanel({ section, lineId }: { section: InversionS
   const [rockVelocity, setRockVelocity] = useState(DEFAULT_ROCK_VELOCITY);
   const sectionScene = useSectionScene(section, threshold, contours);
   const holes = useBoreholes(lineId);
-  const iso = useMemo(() => isoModel(section), [section]);
+  const iso = useMemo(() => isoModel(section, sectionScene.velocity), [section, sectionScene.velocity]);
   const scene = useMemo(() => ({ ...sectionScene, boreholes: holes.data ?? [] }), [sectionScene, holes.data]);
   const { ref, width } = useElementWidth<HTMLDivElement>();
   const ground = section.coverage.filter((c) => c !== null).length;
