@@ -38,7 +38,9 @@ export function createApp({ redis, pgPool, queue, mailer, clientDir = path.resol
     helmet({
       contentSecurityPolicy: {
         directives: {
-          // Plotly sets inline styles; the preview solver runs in a Web Worker from a blob in dev builds.
+          // Plotly sets inline styles; the preview solver runs in a Web Worker from a blob in dev builds
+          // and compiles the march kernel (WebAssembly, shipped in the bundle) there.
+          'script-src': ["'self'", "'wasm-unsafe-eval'"],
           'style-src': ["'self'", "'unsafe-inline'"],
           'worker-src': ["'self'", 'blob:'],
           'img-src': ["'self'", 'data:', 'blob:'],

@@ -6,7 +6,7 @@
  * process beside the engine, it turns a wall time on a noisy machine into a stable cost ratio.
  */
 import type { Grid } from '../../shared/grid';
-import { IndexedMinHeap } from '../../shared/eikonal/heap';
+import { IndexedMinHeap } from './plain-heap';
 
 const DONE = 2;
 

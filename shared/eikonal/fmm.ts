@@ -12,12 +12,12 @@
  */
 import type { Grid } from '../grid';
 import { CONTRAST_RATIO, DEFAULT_INTERFACE_RULE, type InterfaceRule } from './cells';
-import { IndexedMinHeap } from './heap';
 import { ModelCells } from './model-cells';
 import { startTimes } from './source';
 import { sourceHorizon, surfaceTangents } from './surface';
 import { surfaceStart } from './surface-start';
-import { AIR, airNeighbours, FAR, KIND, march, TRIAL, type MarchState } from './march';
+import { MarchKernel } from './kernel';
+import { AIR, airNeighbours, FAR, KIND, TRIAL } from './node-state';
 import { surfaceLinks } from './surface-links';
 import type { Point, SolveOptions, VelocityField } from './types';
 import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
@@ -37,34 +37,24 @@ export interface MarchOptions extends SolveOptions {
 export class TravelTimeSolver {
   readonly grid: Grid;
   private slow: Float64Array;
-  /** Interleaved T, U, slowness per node for the march (see MarchState.F), on the bordered grid (MarchState.stride). */
-  private packed: Float64Array;
-  private state: Uint8Array;
-  private safe: Float64Array;
-
-  private heap: IndexedMinHeap;
+  /** The compiled march with its node arrays, cells, surface inputs and heap (kernel.ts). */
+  private kernel: MarchKernel;
   private cells = new ModelCells();
   /** The surface's direction per column for the last ground mask (kept while the mask is the same array with the same count). */
   private tangents: { active: Uint8Array; ground: number; cos: Float64Array; sin: Float64Array; top: Float64Array; nearAir: Uint8Array } | null = null;
-  private horizon: Float64Array;
 
   constructor(grid: Grid) {
     validateGrid(grid); // before allocating: an oversized grid is an input error, not a crash
     this.grid = { ...grid };
     const n = grid.nx * grid.nz;
-    const bordered = (grid.nx + 2) * (grid.nz + 2);
     this.slow = new Float64Array(n);
-    this.packed = new Float64Array(3 * bordered);
-    this.state = new Uint8Array(bordered).fill(AIR); // the border stays AIR for good
-    this.safe = new Float64Array(bordered);
-    this.heap = new IndexedMinHeap(bordered);
-    this.horizon = new Float64Array(grid.nx);
+    this.kernel = new MarchKernel(grid.nx, grid.nz, grid.dx, grid.dz, grid.x0, grid.z0);
   }
 
   /** Travel times (s) from `source`; Infinity at air nodes and ground not connected to the source. */
   solve(velocity: VelocityField, active: Uint8Array, source: Point, options: MarchOptions = {}, out?: Float64Array): Float64Array {
     const grid = this.grid;
-    validateSolveInput(grid, velocity, active, source);
+    const ground = validateSolveInput(grid, velocity, active, source);
     if (options.cellSlowness) validateCellSlowness(grid, options.cellSlowness);
     const { nx, nz, dx, dz, x0, z0 } = grid;
     const n = nx * nz;
@@ -73,17 +63,19 @@ export class TravelTimeSolver {
     const ratio = options.contrastRatio ?? CONTRAST_RATIO;
     const T = out && out.length === n ? out : new Float64Array(n);
     const S = this.slow;
-    const F = this.packed;
-    const state = this.state;
+    const kernel = this.kernel;
+    const { F, state, heap } = kernel;
     // Given the surface line, the start region and links follow it exactly; the mask-based
     // candidates stand down and their per-shot inputs are not worked out.
-    const staircase = options.surface ? null : this.staircaseInputs(grid, active, source);
-    const sameSlowness = resetNodes(velocity, active, nx, S, F, state, staircase?.nearAir ?? null);
+    const staircase = options.surface ? null : this.staircaseInputs(grid, active, ground, source);
+    const sameSlowness = resetNodes(velocity, active, nx, S, F, state, staircase);
 
     const cells = this.cells.update(grid, S, active, sameSlowness, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, options.cellSlowness);
-    const cellS = cells.value;
-    const cellC = cells.contrast;
-    const heap = this.heap;
+    const anyContrast = this.cells.anyContrast;
+    if (anyContrast) {
+      kernel.cellS.set(cells.value);
+      kernel.cellC.set(cells.contrast);
+    }
     heap.clear();
 
     const xs = source.x;
@@ -103,37 +95,41 @@ export class TravelTimeSolver {
       heap.pushOrDecrease(b, startTimesAll[k]);
       state[b] = (state[b] & ~KIND) | TRIAL;
     }
-    const st: MarchState = {
-      nx, nz, stride: nx + 2, dx, dz, x0, z0, xs, zs,
-      s0: start.slowness,
-      vs: 1 / start.slowness,
-      gx: start.gradX,
-      gz: start.gradZ,
-      factored,
-      second: order === 2,
-      ratio,
-      anyContrast: this.cells.anyContrast,
-      F, state, cellS, cellC, heap,
-      safe: this.safe,
-      surfaceCos: staircase?.surfaceCos ?? NONE,
-      surfaceSin: staircase?.surfaceSin ?? NONE,
-      horizon: staircase?.horizon ?? NONE,
-      noStaircase: options.surface !== undefined,
-    };
-    if (options.surface && options.surface.length >= 2) st.afterAccept = surfaceLinks(grid, S, active, options.surface, () => st);
-    march(st);
+    const links = options.surface && options.surface.length >= 2
+      ? surfaceLinks(grid, S, active, options.surface, { F, state, safe: kernel.safe, heap, xs, zs, factored })
+      : undefined;
+    kernel.march(
+      {
+        xs, zs,
+        s0: start.slowness,
+        vs: 1 / start.slowness,
+        gx: start.gradX,
+        gz: start.gradZ,
+        ratio,
+        factored,
+        second: order === 2,
+        anyContrast,
+        noStaircase: options.surface !== undefined,
+      },
+      links,
+    );
     copyTimes(F, T, nx);
     return T;
   }
 
-  /** The mask-based surface candidates' inputs: per mask the surface's direction per column and the nodes next to the air; per shot the horizon. */
-  private staircaseInputs(grid: Grid, active: Uint8Array, source: Point): Pick<MarchState, 'surfaceCos' | 'surfaceSin' | 'horizon'> & { nearAir: Uint8Array } {
-    const ground = countGround(active);
+  /**
+   * The mask-based surface candidates' inputs, put in the kernel: per mask the surface's direction
+   * per column; per shot the horizon. Returns the nodes next to the air (per mask).
+   */
+  private staircaseInputs(grid: Grid, active: Uint8Array, ground: number, source: Point): Uint8Array {
     if (this.tangents?.active !== active || this.tangents?.ground !== ground) {
       this.tangents = { active, ground, ...surfaceTangents(grid, active), nearAir: airNeighbours(active, grid.nx, grid.nz) };
     }
     const t = this.tangents;
-    return { surfaceCos: t.cos, surfaceSin: t.sin, nearAir: t.nearAir, horizon: sourceHorizon(grid, t.top, source, this.horizon) };
+    this.kernel.surfaceCos.set(t.cos);
+    this.kernel.surfaceSin.set(t.sin);
+    sourceHorizon(grid, t.top, source, this.kernel.horizon);
+    return t.nearAir;
   }
 
 }
@@ -149,17 +145,19 @@ export class TravelTimeSolver {
  */
 function resetNodes(velocity: VelocityField, active: Uint8Array, nx: number, S: Float64Array, F: Float64Array, state: Uint8Array, nearAir: Uint8Array | null): boolean {
   let same = true;
-  for (let i = 0; i < S.length; i++) {
-    const si = active[i] ? 1 / velocity[i] : Infinity;
-    if (S[i] !== si) {
-      S[i] = si;
-      same = false;
+  for (let row = 0, i = 0; i < S.length; row++) {
+    // Node (ix, row) sits at b = (row + 1)·(nx + 2) + ix + 1 on the bordered grid.
+    for (let b = i + 2 * row + nx + 3, end = i + nx; i < end; i++, b++) {
+      const on = active[i] !== 0;
+      const si = on ? 1 / velocity[i] : Infinity;
+      if (S[i] !== si) {
+        S[i] = si;
+        same = false;
+      }
+      F[3 * b] = Infinity;
+      F[3 * b + 2] = si;
+      state[b] = on ? FAR | (nearAir === null ? 0 : nearAir[b]) : AIR;
     }
-    const ix = i % nx;
-    const b = i + 2 * ((i - ix) / nx) + nx + 3; // (iz + 1)·(nx + 2) + ix + 1
-    F[3 * b] = Infinity;
-    F[3 * b + 2] = si;
-    state[b] = active[i] ? FAR | (nearAir === null ? 0 : nearAir[b]) : AIR;
   }
   return same;
 }
@@ -183,10 +181,4 @@ export function solveTravelTimes(
   return new TravelTimeSolver(grid).solve(velocity, active, source, options);
 }
 
-const NONE = new Float64Array(0);
 
-function countGround(active: Uint8Array): number {
-  let n = 0;
-  for (let i = 0; i < active.length; i++) n += active[i];
-  return n;
-}

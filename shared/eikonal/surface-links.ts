@@ -8,14 +8,26 @@
  * A candidate is always causal (≥ T_p) and an upper bound on the true time (a real ground path).
  */
 import type { Grid } from '../grid';
-import { DONE, FAR, KIND, PROVISIONAL, TRIAL, type MarchState } from './march';
+import type { KernelHeap } from './kernel';
+import { DONE, FAR, KIND, PROVISIONAL, TRIAL } from './node-state';
 import { segmentInGround, uniformAlong } from './surface-start';
 import type { Point } from './types';
 
 export const LINK_RADIUS = 8; // cells (measured: 4 → hill max 0.07 ms, 6 → 0.04, 8 → 0.024)
 const BAND = 3; // cells: a node this close to an air node is "near the surface"
 
-export function surfaceLinks(grid: Grid, slowness: Float64Array, active: Uint8Array, surface: readonly Point[], m: () => MarchState): ((p: number) => void) | undefined {
+/** The march's node arrays and heap (node-state.ts, kernel.ts), and what the links need of the scheme. */
+export interface LinkState {
+  F: Float64Array;
+  state: Uint8Array;
+  safe: Float64Array;
+  heap: KernelHeap;
+  xs: number;
+  zs: number;
+  factored: boolean;
+}
+
+export function surfaceLinks(grid: Grid, slowness: Float64Array, active: Uint8Array, surface: readonly Point[], st: LinkState): ((p: number) => void) | undefined {
   const { nx, nz, x0, dx, z0, dz } = grid;
   const near = new Uint8Array(nx * nz);
   let any = false;
@@ -28,7 +40,6 @@ export function surfaceLinks(grid: Grid, slowness: Float64Array, active: Uint8Ar
   if (!any) return undefined;
   const stride = nx + 2;
   return (pb: number) => {
-    const st = m();
     const { F, state, heap, safe, xs, zs, factored } = st;
     const row = Math.floor((pb + 0.5) / stride);
     const piz = row - 1;

@@ -23,7 +23,8 @@ export function validateGrid(grid: Grid): void {
   }
 }
 
-export function validateSolveInput(grid: Grid, velocity: VelocityField, active: Uint8Array, source: Point): void {
+/** Returns the number of ground nodes (counted on the way, so a solve need not count them again). */
+export function validateSolveInput(grid: Grid, velocity: VelocityField, active: Uint8Array, source: Point): number {
   validateGrid(grid);
   const n = grid.nx * grid.nz;
   if (velocity.length !== n) {
@@ -49,6 +50,7 @@ export function validateSolveInput(grid: Grid, velocity: VelocityField, active: 
   }
   // locateSourceCell throws the "outside the grid" and "in the air" messages.
   locateSourceCell(grid, active, source);
+  return ground;
 }
 
 /** Known cell slownesses: one per cell, each positive and finite or NaN (unknown). */
