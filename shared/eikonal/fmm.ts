@@ -17,7 +17,7 @@ import { startTimes } from './source';
 import { sourceHorizon, surfaceTangents } from './surface';
 import { surfaceStart } from './surface-start';
 import { MarchKernel } from './kernel';
-import { AIR, airNeighbours, FAR, KIND, TRIAL } from './node-state';
+import { AIR, airNeighbours, FAR, KIND, smoothTriples, TRIAL } from './node-state';
 import { surfaceLinks } from './surface-links';
 import type { Point, SolveOptions, VelocityField } from './types';
 import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
@@ -39,6 +39,8 @@ export class TravelTimeSolver {
   private slow: Float64Array;
   /** The compiled march with its node arrays, cells, surface inputs and heap (kernel.ts). */
   private kernel: MarchKernel;
+  /** The contrast ratio the kernel's smooth flags were worked out for (with the slownesses in F). */
+  private smoothRatio: number | null = null;
   private cells = new ModelCells();
   /** The surface's direction per column for the last ground mask (kept while the mask is the same array with the same count). */
   private tangents: { active: Uint8Array; ground: number; cos: Float64Array; sin: Float64Array; top: Float64Array; nearAir: Uint8Array } | null = null;
@@ -71,6 +73,10 @@ export class TravelTimeSolver {
     const sameSlowness = resetNodes(velocity, active, nx, S, F, state, staircase);
 
     const cells = this.cells.update(grid, S, active, sameSlowness, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, options.cellSlowness);
+    if (!sameSlowness || this.smoothRatio !== ratio) {
+      smoothTriples(F, nx, nz, ratio, kernel.smooth);
+      this.smoothRatio = ratio;
+    }
     const anyContrast = this.cells.anyContrast;
     if (anyContrast) {
       kernel.cellS.set(cells.value);
@@ -105,7 +111,6 @@ export class TravelTimeSolver {
         vs: 1 / start.slowness,
         gx: start.gradX,
         gz: start.gradZ,
-        ratio,
         factored,
         second: order === 2,
         anyContrast,

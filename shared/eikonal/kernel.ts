@@ -14,7 +14,7 @@ interface KernelExports {
   dataEnd(): number;
   setLayout(
     nx: number, nz: number, dx: number, dz: number, x0: number, z0: number,
-    f: number, state: number, safe: number, cellS: number, cellC: number, cos: number, sin: number, horizon: number,
+    f: number, state: number, smooth: number, safe: number, cellS: number, cellC: number, cos: number, sin: number, horizon: number,
     keys: number, nodes: number, pos: number,
   ): void;
   heapSize(): number;
@@ -23,7 +23,7 @@ interface KernelExports {
   heapUpdate(node: number, key: number): void;
   heapPop(): number;
   march(
-    xs: number, zs: number, s0: number, vs: number, gx: number, gz: number, ratio: number,
+    xs: number, zs: number, s0: number, vs: number, gx: number, gz: number,
     factored: boolean, second: boolean, anyContrast: boolean, noStaircase: boolean, hasAfter: boolean,
   ): void;
 }
@@ -39,8 +39,6 @@ export interface MarchScheme {
   vs: number;
   gx: number;
   gz: number;
-  /** Slowness ratio above which three nodes are not one smooth medium (no second order across). */
-  ratio: number;
   factored: boolean;
   second: boolean;
   /** Whether any cell is a contrast cell (lets the march skip the edge look-ups). */
@@ -76,6 +74,8 @@ export class MarchKernel {
   /** Per node of the bordered grid: T, U, slowness (node-state.ts). */
   readonly F: Float64Array;
   readonly state: Uint8Array;
+  /** Where second order may be used (node-state.ts smoothTriples); the solver keeps it per model. */
+  readonly smooth: Uint8Array;
   /** Safe minimum of a node whose key is provisional. */
   readonly safe: Float64Array;
   /** Per cell: slowness where the march reads it, and whether it is a contrast cell. */
@@ -113,7 +113,7 @@ export class MarchKernel {
     const at = {
       F: take(24 * bordered), safe: take(8 * bordered), keys: take(8 * (bordered + 1)), cellS: take(8 * cells),
       cos: take(8 * nx), sin: take(8 * nx), horizon: take(8 * nx),
-      nodes: take(4 * (bordered + 1)), pos: take(4 * bordered), state: take(bordered), cellC: take(cells),
+      nodes: take(4 * (bordered + 1)), pos: take(4 * bordered), state: take(bordered), smooth: take(bordered), cellC: take(cells),
     };
     const pages = Math.ceil(end / PAGE);
     if (pages > 1) memory.grow(pages - 1);
@@ -126,8 +126,9 @@ export class MarchKernel {
     this.surfaceSin = new Float64Array(buf, at.sin, nx);
     this.horizon = new Float64Array(buf, at.horizon, nx);
     this.state = new Uint8Array(buf, at.state, bordered).fill(AIR); // the border stays AIR for good
+    this.smooth = new Uint8Array(buf, at.smooth, bordered);
     new Int32Array(buf, at.pos, bordered).fill(-1); // no node in the heap
-    x.setLayout(nx, nz, dx, dz, x0, z0, at.F, at.state, at.safe, at.cellS, at.cellC, at.cos, at.sin, at.horizon, at.keys, at.nodes, at.pos);
+    x.setLayout(nx, nz, dx, dz, x0, z0, at.F, at.state, at.smooth, at.safe, at.cellS, at.cellC, at.cos, at.sin, at.horizon, at.keys, at.nodes, at.pos);
     this.x = x;
     this.heap = {
       get size() {
@@ -144,7 +145,7 @@ export class MarchKernel {
   march(s: MarchScheme, afterAccept?: (p: number) => void): void {
     this.afterAccept = afterAccept;
     try {
-      this.x.march(s.xs, s.zs, s.s0, s.vs, s.gx, s.gz, s.ratio, s.factored, s.second, s.anyContrast, s.noStaircase, afterAccept !== undefined);
+      this.x.march(s.xs, s.zs, s.s0, s.vs, s.gx, s.gz, s.factored, s.second, s.anyContrast, s.noStaircase, afterAccept !== undefined);
     } finally {
       this.afterAccept = undefined;
     }

@@ -26,6 +26,31 @@ export const HAS_TWO = 8;
  */
 export const NEAR_AIR = 16;
 
+/** Bits of the kernel's smooth array: the node and its two neighbours along x (along z) are one smooth medium. */
+export const SMOOTH_X = 1;
+export const SMOOTH_Z = 2;
+
+/**
+ * Marks each node whose slowness and its two neighbours' along an axis lie within `ratio` of each
+ * other (no contrast inside the three nodes): a second-order difference through the node is used
+ * only there. It depends on the slownesses alone, so the solver works it out once per model, not
+ * in every update. F as the march's node arrays (slowness in F[3i+2]).
+ */
+export function smoothTriples(F: Float64Array, nx: number, nz: number, ratio: number, out: Uint8Array): void {
+  const stride = nx + 2;
+  for (let iz = 0; iz < nz; iz++) {
+    for (let ix = 0, b = (iz + 1) * stride + 1; ix < nx; ix++, b++) {
+      const s = F[3 * b + 2];
+      out[b] = (oneMedium(F[3 * (b - 1) + 2], s, F[3 * (b + 1) + 2], ratio) ? SMOOTH_X : 0) |
+        (oneMedium(F[3 * (b - stride) + 2], s, F[3 * (b + stride) + 2], ratio) ? SMOOTH_Z : 0);
+    }
+  }
+}
+
+function oneMedium(s1: number, s2: number, s3: number, ratio: number): boolean {
+  return Math.max(s1, s2, s3) <= Math.min(s1, s2, s3) * ratio;
+}
+
 /** NEAR_AIR per node of the bordered grid (0 elsewhere), from the ground mask. */
 export function airNeighbours(active: Uint8Array, nx: number, nz: number): Uint8Array {
   const stride = nx + 2;

@@ -28,7 +28,7 @@ declare function referenceLogSlope(ex: f64, ez: f64, gx: f64, gz: f64, vs: f64, 
 @external('env', 'hypot')
 declare function hypot(a: f64, b: f64): f64;
 
-// Node kinds in the low two bits of the state byte, and flags (march.ts documents them).
+// Node kinds in the low two bits of the state byte, and flags: the numbers of node-state.ts (documented there).
 const FAR: u8 = 0;
 const TRIAL: u8 = 1;
 const DONE: u8 = 2;
@@ -37,6 +37,9 @@ const KIND: u8 = 3;
 const PROVISIONAL: u8 = 4;
 const HAS_TWO: u8 = 8;
 const NEAR_AIR: u8 = 16;
+// Bits of the smooth array (node-state.ts smoothTriples).
+const SMOOTH_X: u8 = 1;
+const SMOOTH_Z: u8 = 2;
 
 // Layout (setLayout): grid and array addresses. F holds T, U, slowness per node (24 bytes).
 let nx: i32 = 0;
@@ -48,6 +51,7 @@ let x0: f64 = 0;
 let z0: f64 = 0;
 let pF: usize = 0;
 let pState: usize = 0;
+let pSmooth: usize = 0;
 let pSafe: usize = 0;
 let pCellS: usize = 0;
 let pCellC: usize = 0;
@@ -66,7 +70,7 @@ export function dataEnd(): usize {
 
 export function setLayout(
   nx_: i32, nz_: i32, dx_: f64, dz_: f64, x0_: f64, z0_: f64,
-  f: usize, state: usize, safe: usize, cellS: usize, cellC: usize, cos: usize, sin: usize, horizon: usize,
+  f: usize, state: usize, smooth: usize, safe: usize, cellS: usize, cellC: usize, cos: usize, sin: usize, horizon: usize,
   keys: usize, nodes: usize, pos: usize,
 ): void {
   nx = nx_;
@@ -78,6 +82,7 @@ export function setLayout(
   z0 = z0_;
   pF = f;
   pState = state;
+  pSmooth = smooth;
   pSafe = safe;
   pCellS = cellS;
   pCellC = cellC;
@@ -204,11 +209,11 @@ export function heapPop(): i32 {
 // ---- The march ----
 
 /**
- * Runs the march from the nodes already in the heap. Arguments as MarchState in march.ts:
+ * Runs the march from the nodes already in the heap. Arguments as MarchScheme in kernel.ts:
  * source position and slowness, the reference velocity and gradient at the source, the scheme.
  */
 export function march(
-  xs: f64, zs: f64, s0: f64, vs: f64, gx: f64, gz: f64, ratio: f64,
+  xs: f64, zs: f64, s0: f64, vs: f64, gx: f64, gz: f64,
   factored: bool, second: bool, anyContrast: bool, noStaircase: bool, hasAfter: bool,
 ): void {
   const ncx = nx - 1;
@@ -231,7 +236,7 @@ export function march(
       setU(p, Tp);
     }
     const Up = getU(p);
-    const sp = getS(p);
+    const smoothP = load<u8>(pSmooth + <usize>p);
     if (hasAfter) afterAccept(p);
 
     for (let dir = 0; dir < 4; dir++) {
@@ -274,19 +279,12 @@ export function march(
       const eP = alongX ? ex : ez;
       let aP = eP + iP;
       let bP = rq * Up * iP;
-      if (second) {
+      // Second order where the node beyond p is accepted, earlier, and q, p and it are one smooth medium.
+      if (second && (smoothP & (alongX ? SMOOTH_X : SMOOTH_Z)) != 0) {
         const p2 = p - step;
         if ((getState(p2) & KIND) == DONE && getT(p2) <= Tp) {
-          const s1 = sp;
-          const s2 = getS(p2);
-          let lo = sq < s1 ? sq : s1;
-          let hi = sq < s1 ? s1 : sq;
-          if (s2 < lo) lo = s2;
-          if (s2 > hi) hi = s2;
-          if (hi <= lo * ratio) {
-            aP = eP + 1.5 * iP;
-            bP = rq * (2 * Up - 0.5 * getU(p2)) * iP;
-          }
+          aP = eP + 1.5 * iP;
+          bP = rq * (2 * Up - 0.5 * getU(p2)) * iP;
         }
       }
 
@@ -317,8 +315,17 @@ export function march(
       // head wave's own update.
       let best = aP > 0 ? (bP + sEdge) / aP : (bP - sEdge) / aP;
       if (!(best >= Tp)) best = Tp + sEdge * (alongX ? dx : dz);
-      // Next to the air: the two surface candidates of the grid's staircase (march.ts explains them;
-      // surface.ts for the tangents and the horizon).
+      // Next to the air the grid's staircase leaves no upwind neighbour across, and the plain
+      // update acts as if the wave ran along the grid axis (on sloping ground: late by up to
+      // 0.5 ms at 0.5 m nodes). Two surface candidates (surface.ts), each taken only for steps on
+      // which a wave arriving more steeply from inside (a diving or head wave) would gain less,
+      // so neither undercuts it:
+      //  - the node sees the source through the ground: the missing across slope is the reference
+      //    time's (the gentler of the bent and the straight one) — exact in uniform ground; steps
+      //    along x, and up a step of the staircase on the source's side;
+      //  - it does not: the wave has come round the surface and runs along it, gaining the step's
+      //    share along the surface's tangent; steps along x where the surface dips under 45°, and
+      //    up a step of the staircase.
       if (!noStaircase && sEdge == sq && (stq & NEAR_AIR) != 0) {
         const run = Math.abs(xq - xs);
         const rise = zq - zs;
@@ -333,7 +340,8 @@ export function march(
           const b = aP * bP;
           const disc = b * b - a * (bP * bP - sq * sq);
           if (disc >= 0) t = (b + Math.sqrt(disc)) / a;
-          // A staircase corner can lie nearer the source than its only ground neighbour p.
+          // A staircase corner can lie nearer the source than its only ground neighbour p (the
+          // sliver of ground between them is above the grid): it is reached no later than p.
           if (!(t >= Tp)) t = rq < hypot(x0 + <f64>pix * dx - xs, z0 - <f64>piz * dz - zs) ? Tp : Infinity;
         } else if (!sees && (alongX ? getF64(pCos, qix) >= Math.SQRT1_2 : stairStep)) {
           t = Tp + sq * (alongX ? dx * getF64(pCos, qix) : dz * getF64(pSin, qix));
@@ -357,19 +365,11 @@ export function march(
         const eB = alongX ? ez : ex;
         let aB = eB + iB;
         let bB = rq * Ub * iB;
-        if (second) {
+        if (second && (load<u8>(pSmooth + <usize>b) & (alongX ? SMOOTH_Z : SMOOTH_X)) != 0) {
           const b2 = b + bStep;
           if ((getState(b2) & KIND) == DONE && getT(b2) <= Tb) {
-            const s1 = getS(b);
-            const s2 = getS(b2);
-            let lo = sq < s1 ? sq : s1;
-            let hi = sq < s1 ? s1 : sq;
-            if (s2 < lo) lo = s2;
-            if (s2 > hi) hi = s2;
-            if (hi <= lo * ratio) {
-              aB = eB + 1.5 * iB;
-              bB = rq * (2 * Ub - 0.5 * getU(b2)) * iB;
-            }
+            aB = eB + 1.5 * iB;
+            bB = rq * (2 * Ub - 0.5 * getU(b2)) * iB;
           }
         }
         let sc = sq;
@@ -391,8 +391,11 @@ export function march(
         }
       }
 
-      // Provisional near-axis candidate (march.ts explains it): only while the node has no
-      // two-axis candidate.
+      // Provisional near-axis candidate. Beside the line through the source where the slope across
+      // it vanishes, a node has no upwind neighbour across that line; its one-axis update then keeps
+      // the reference time's own slope across (referenceLogSlope: exact in uniform ground, bent with
+      // the rays in a velocity gradient). It holds only while the node has no two-axis candidate,
+      // since farther out it could undershoot.
       let tau: f64 = Infinity;
       if (nearAxisOn && !two && (stq & HAS_TWO) == 0 && sEdge == sq && nearReferenceAxis(alongX ? zq - zs : xq - xs, alongX ? dz : dx, vs + gx * (xq - xs) + gz * (zq - zs), rq, alongX ? gz : gx)) {
         const kappa = referenceLogSlope(xq - xs, zq - zs, gx, gz, vs, alongX);
