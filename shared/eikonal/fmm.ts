@@ -17,7 +17,7 @@ import { startTimes } from './source';
 import { sourceHorizon, surfaceTangents } from './surface';
 import { surfaceStart } from './surface-start';
 import { MarchKernel } from './kernel';
-import { AIR, airNeighbours, FAR, KIND, smoothTriples, TRIAL } from './node-state';
+import { airNeighbours, KIND, smoothTriples, TRIAL } from './node-state';
 import { surfaceLinks } from './surface-links';
 import type { Point, SolveOptions, VelocityField } from './types';
 import { validateCellSlowness, validateGrid, validateSolveInput } from './validate';
@@ -48,9 +48,8 @@ export class TravelTimeSolver {
   constructor(grid: Grid) {
     validateGrid(grid); // before allocating: an oversized grid is an input error, not a crash
     this.grid = { ...grid };
-    const n = grid.nx * grid.nz;
-    this.slow = new Float64Array(n);
     this.kernel = new MarchKernel(grid.nx, grid.nz, grid.dx, grid.dz, grid.x0, grid.z0);
+    this.slow = this.kernel.slowness;
   }
 
   /** Travel times (s) from `source`; Infinity at air nodes and ground not connected to the source. */
@@ -70,7 +69,10 @@ export class TravelTimeSolver {
     // Given the surface line, the start region and links follow it exactly; the mask-based
     // candidates stand down and their per-shot inputs are not worked out.
     const staircase = options.surface ? null : this.staircaseInputs(grid, active, ground, source);
-    const sameSlowness = resetNodes(velocity, active, nx, S, F, state, staircase);
+    kernel.velocity.set(velocity);
+    kernel.active.set(active);
+    if (staircase) kernel.nearAir.set(staircase);
+    const sameSlowness = kernel.resetNodes(staircase !== null);
 
     const cells = this.cells.update(grid, S, active, sameSlowness, options.rule ?? DEFAULT_INTERFACE_RULE, ratio, options.cellSlowness);
     if (!sameSlowness || this.smoothRatio !== ratio) {
@@ -118,7 +120,8 @@ export class TravelTimeSolver {
       },
       links,
     );
-    copyTimes(F, T, nx);
+    kernel.copyTimes();
+    T.set(kernel.times);
     return T;
   }
 
@@ -137,42 +140,6 @@ export class TravelTimeSolver {
     return t.nearAir;
   }
 
-}
-
-// The per-node passes live in their own small functions: a loop inside solve() itself is compiled
-// on the fly (on-stack replacement) and that code is thrown away again on every call, leaving the
-// rest of the solve to the interpreter (seen with node --trace-deopt).
-
-/**
- * Slowness per node and the march's start state: every ground node far (with its NEAR_AIR flag
- * when the mask-based surface candidates are on), air inactive. Returns
- * whether every slowness is what `S` already held (the same model as the last solve).
- */
-function resetNodes(velocity: VelocityField, active: Uint8Array, nx: number, S: Float64Array, F: Float64Array, state: Uint8Array, nearAir: Uint8Array | null): boolean {
-  let same = true;
-  for (let row = 0, i = 0; i < S.length; row++) {
-    // Node (ix, row) sits at b = (row + 1)·(nx + 2) + ix + 1 on the bordered grid.
-    for (let b = i + 2 * row + nx + 3, end = i + nx; i < end; i++, b++) {
-      const on = active[i] !== 0;
-      const si = on ? 1 / velocity[i] : Infinity;
-      if (S[i] !== si) {
-        S[i] = si;
-        same = false;
-      }
-      F[3 * b] = Infinity;
-      F[3 * b + 2] = si;
-      state[b] = on ? FAR | (nearAir === null ? 0 : nearAir[b]) : AIR;
-    }
-  }
-  return same;
-}
-
-/** Times of the grid's nodes out of the bordered march arrays. */
-function copyTimes(F: Float64Array, T: Float64Array, nx: number): void {
-  for (let i = 0, row = 0; i < T.length; i += nx, row++) {
-    const b = i + 2 * row + nx + 3;
-    for (let ix = 0; ix < nx; ix++) T[i + ix] = F[3 * (b + ix)];
-  }
 }
 
 /** Travel times (s) from `source` on `grid`; Infinity at air nodes. Throws EikonalInputError on bad input. */

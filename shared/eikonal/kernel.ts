@@ -16,7 +16,10 @@ interface KernelExports {
     nx: number, nz: number, dx: number, dz: number, x0: number, z0: number,
     f: number, state: number, smooth: number, safe: number, cellS: number, cellC: number, cos: number, sin: number, horizon: number,
     keys: number, nodes: number, pos: number,
+    velocity: number, active: number, nearAir: number, slowness: number, times: number,
   ): void;
+  resetNodes(withNearAir: boolean): number;
+  copyTimes(): void;
   heapSize(): number;
   heapClear(): void;
   heapPushOrDecrease(node: number, key: number): void;
@@ -86,6 +89,15 @@ export class MarchKernel {
   readonly surfaceSin: Float64Array;
   readonly horizon: Float64Array;
   readonly heap: KernelHeap;
+  /** Per node of the grid (not bordered): the velocities and ground mask of a solve, put in by the solver. */
+  readonly velocity: Float64Array;
+  readonly active: Uint8Array;
+  /** Per node of the bordered grid: NEAR_AIR flags (node-state.ts airNeighbours) for the mask-based surface candidates. */
+  readonly nearAir: Uint8Array;
+  /** Per node of the grid: slowness (s/m, +∞ in the air) of the last reset. */
+  readonly slowness: Float64Array;
+  /** Per node of the grid: the times of the last march (copyTimes), in the velocities' place: they are read by then. */
+  readonly times: Float64Array;
   private readonly x: KernelExports;
   private afterAccept: ((p: number) => void) | undefined;
 
@@ -102,6 +114,7 @@ export class MarchKernel {
     const x = instance.exports as unknown as KernelExports;
     const bordered = (nx + 2) * (nz + 2);
     const cells = (nx - 1) * (nz - 1);
+    const n = nx * nz;
     // Lay the arrays out after the module's own data, 8-byte aligned; grow the memory once, before
     // any view is made (a later growth would detach them).
     let end = align8(x.dataEnd());
@@ -112,8 +125,8 @@ export class MarchKernel {
     };
     const at = {
       F: take(24 * bordered), safe: take(8 * bordered), keys: take(8 * (bordered + 1)), cellS: take(8 * cells),
-      cos: take(8 * nx), sin: take(8 * nx), horizon: take(8 * nx),
-      nodes: take(4 * (bordered + 1)), pos: take(4 * bordered), state: take(bordered), smooth: take(bordered), cellC: take(cells),
+      velocity: take(8 * n), slowness: take(8 * n), cos: take(8 * nx), sin: take(8 * nx), horizon: take(8 * nx),
+      nodes: take(4 * (bordered + 1)), pos: take(4 * bordered), state: take(bordered), smooth: take(bordered), nearAir: take(bordered), active: take(n), cellC: take(cells),
     };
     const pages = Math.ceil(end / PAGE);
     if (pages > 1) memory.grow(pages - 1);
@@ -127,8 +140,14 @@ export class MarchKernel {
     this.horizon = new Float64Array(buf, at.horizon, nx);
     this.state = new Uint8Array(buf, at.state, bordered).fill(AIR); // the border stays AIR for good
     this.smooth = new Uint8Array(buf, at.smooth, bordered);
+    this.velocity = new Float64Array(buf, at.velocity, n);
+    this.active = new Uint8Array(buf, at.active, n);
+    this.nearAir = new Uint8Array(buf, at.nearAir, bordered);
+    this.slowness = new Float64Array(buf, at.slowness, n);
+    this.times = this.velocity;
     new Int32Array(buf, at.pos, bordered).fill(-1); // no node in the heap
-    x.setLayout(nx, nz, dx, dz, x0, z0, at.F, at.state, at.smooth, at.safe, at.cellS, at.cellC, at.cos, at.sin, at.horizon, at.keys, at.nodes, at.pos);
+    x.setLayout(nx, nz, dx, dz, x0, z0, at.F, at.state, at.smooth, at.safe, at.cellS, at.cellC, at.cos, at.sin, at.horizon, at.keys, at.nodes, at.pos,
+      at.velocity, at.active, at.nearAir, at.slowness, at.velocity);
     this.x = x;
     this.heap = {
       get size() {
@@ -139,6 +158,19 @@ export class MarchKernel {
       update: (node, key) => x.heapUpdate(node, key),
       pop: () => x.heapPop(),
     };
+  }
+
+  /**
+   * Slowness per node from `velocity` (put in first), and every node back to its start state.
+   * Returns whether the slownesses are those of the last reset.
+   */
+  resetNodes(withNearAir: boolean): boolean {
+    return this.x.resetNodes(withNearAir) !== 0;
+  }
+
+  /** The march's times into `times`. */
+  copyTimes(): void {
+    this.x.copyTimes();
   }
 
   /** Marches from the nodes in the heap until it is empty; `afterAccept` runs after each acceptance. */

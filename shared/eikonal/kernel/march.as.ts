@@ -5,8 +5,9 @@
  * arithmetic as plain TypeScript about 1.5× faster here (no bounds checks, no type guards;
  * docs/engine.md), and the march is most of a solve.
  *
- * The arrays live in the module's memory at addresses the host sets once per grid (setLayout);
- * fmm.ts fills them, calls march() and reads the times back. Two helpers stay in JavaScript and are
+ * The arrays live in the module's memory at addresses the host sets once per grid (setLayout).
+ * Per solve, fmm.ts puts in the velocities and the ground mask, resets the nodes here
+ * (resetNodes), places the start nodes, calls march() and takes the times out (copyTimes). Two helpers stay in JavaScript and are
  * imported, so each has one implementation and the times are the same to the last bit as before:
  * the reference slope near the source (reference.ts, used by the solver's start too) and the
  * surface links (surface-links.ts, geometry on the surface polyline), called per accepted node
@@ -51,6 +52,11 @@ let x0: f64 = 0;
 let z0: f64 = 0;
 let pF: usize = 0;
 let pState: usize = 0;
+let pVelocity: usize = 0;
+let pActive: usize = 0;
+let pNearAir: usize = 0;
+let pSlowness: usize = 0;
+let pTimes: usize = 0;
 let pSmooth: usize = 0;
 let pSafe: usize = 0;
 let pCellS: usize = 0;
@@ -72,6 +78,7 @@ export function setLayout(
   nx_: i32, nz_: i32, dx_: f64, dz_: f64, x0_: f64, z0_: f64,
   f: usize, state: usize, smooth: usize, safe: usize, cellS: usize, cellC: usize, cos: usize, sin: usize, horizon: usize,
   keys: usize, nodes: usize, pos: usize,
+  velocity: usize, active: usize, nearAir: usize, slowness: usize, times: usize,
 ): void {
   nx = nx_;
   nz = nz_;
@@ -92,6 +99,46 @@ export function setLayout(
   pKeys = keys;
   pNodes = nodes;
   pPos = pos;
+  pVelocity = velocity;
+  pActive = active;
+  pNearAir = nearAir;
+  pSlowness = slowness;
+  pTimes = times;
+}
+
+/**
+ * Slowness per node from the velocities, and the march's start state: every ground node FAR (with
+ * its NEAR_AIR flag when the mask-based surface candidates are on), air AIR. Returns whether every
+ * slowness is what the slowness array already held (the same model as the last solve).
+ */
+export function resetNodes(withNearAir: bool): bool {
+  let same = true;
+  let i = 0;
+  for (let row = 0; row < nz; row++) {
+    // Node (ix, row) sits at b = (row + 1)·(nx + 2) + ix + 1 on the bordered grid.
+    let b = (row + 1) * stride + 1;
+    for (const end = i + nx; i < end; i++, b++) {
+      const on = load<u8>(pActive + <usize>i) != 0;
+      const si: f64 = on ? 1 / getF64(pVelocity, i) : Infinity;
+      if (getF64(pSlowness, i) != si) {
+        store<f64>(pSlowness + (<usize>i << 3), si);
+        same = false;
+      }
+      setT(b, Infinity);
+      store<f64>(pF + <usize>b * 24, si, 16);
+      setState(b, on ? FAR | (withNearAir ? load<u8>(pNearAir + <usize>b) : 0) : AIR);
+    }
+  }
+  return same;
+}
+
+/** The grid's times out of the bordered node arrays, into the times array. */
+export function copyTimes(): void {
+  let i = 0;
+  for (let row = 0; row < nz; row++) {
+    let b = (row + 1) * stride + 1;
+    for (const end = i + nx; i < end; i++, b++) store<f64>(pTimes + (<usize>i << 3), getT(b));
+  }
 }
 
 // @ts-ignore: decorator
