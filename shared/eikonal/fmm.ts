@@ -1,7 +1,7 @@
 /**
  * Fast marching for |∇T| = s (s = 1/v) on the node grid, first-order upwind or mixed second
  * order, with the factored source treatment (source.ts) and cell slownesses at contrasts
- * (cells.ts). Nodes are accepted in time order from an indexed heap (heap.ts); each newly
+ * (cells.ts). Nodes are accepted in time order from an indexed heap (the compiled march, kernel.ts); each newly
  * accepted node updates its four neighbours with the candidates that involve it: the edge
  * towards it (one axis) and the two cells on either side (two axes); a node keeps the least
  * causal candidate. Sethian (1999), "Level Set Methods and Fast Marching Methods", ch. 8.

@@ -1,6 +1,6 @@
 /**
  * Across-axis slope of a reference travel time near the source, for the provisional one-axis
- * update of nodes beside the grid lines through the source (march.ts).
+ * update of nodes beside the grid lines through the source (the march, kernel/march.as.ts).
  *
  * The reference is the exact time in the linear-velocity medium v = v_s + G·(x − x_s) that
  * matches the velocity and its gradient at the source:

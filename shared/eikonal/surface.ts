@@ -1,6 +1,6 @@
 /**
  * The ground surface's direction per grid column, read from the ground mask, for the march's
- * update of nodes next to the air (march.ts): a wave that runs along the surface travels along
+ * update of nodes next to the air (the march, kernel/march.as.ts): a wave that runs along the surface travels along
  * its tangent, so from a neighbour one step away along x it gains s·dx·cos θ, along z s·dz·|sin θ|
  * (θ the surface's dip), not the full s·dx of a stencil that only sees the grid's staircase.
  * The dip comes from least-squares lines through the top ground nodes of the column and its
