@@ -5,13 +5,12 @@
  * BSSA 68(5), 1521–1532 — from memory). It peaks where noise gives way to signal.
  * Returns the ratio for every sample (0 before `from` and where the short window runs off the end).
  */
-export function energyRatio(x: Float64Array, from: number, short: number, long: number): Float64Array {
+export function energyRatio(x: Float64Array, from: number, short: number, long: number, floor = quietestEnergy(x, long)): Float64Array {
   const n = x.length;
   const cum = new Float64Array(n + 1);
   for (let i = 0; i < n; i++) cum[i + 1] = cum[i] + x[i] * x[i];
   // Floor under the trailing average: near the start the trailing window holds only a few samples,
   // and a chance lull there would fake an arrival.
-  const floor = quietestEnergy(x, long);
   const ratio = new Float64Array(n);
   for (let i = Math.max(from, 1); i + short <= n; i++) {
     const lo = Math.max(0, i - long);
@@ -59,4 +58,20 @@ export function quietestEnergy(x: Float64Array, long: number): number {
   }
   if (!Number.isFinite(floor)) floor = total / Math.max(n, 1);
   return Math.max(floor, (total / Math.max(n, 1)) * 1e-12, Number.MIN_VALUE);
+}
+
+/**
+ * Median energy of the trace's whole windows of `long` samples: the noise level where arrivals fill
+ * less than half the record (a floor that, unlike the quietest window, is the noise's mean).
+ */
+export function typicalEnergy(x: Float64Array, long: number): number {
+  const energies: number[] = [];
+  for (let a = 0; a + long <= x.length; a += long) {
+    let e = 0;
+    for (let i = a; i < a + long; i++) e += x[i] * x[i];
+    energies.push(e / long);
+  }
+  if (!energies.length) return quietestEnergy(x, long);
+  energies.sort((p, q) => p - q);
+  return Math.max(energies[energies.length >> 1], quietestEnergy(x, long));
 }

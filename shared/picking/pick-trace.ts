@@ -40,27 +40,78 @@ const DEFAULTS = { shortWindow: 0.002, longWindow: 0.01, minRatio: 8, minSnr: 3,
  */
 export function pickTrace(samples: Float64Array, sampleInterval: number, delay: number, options: PickerOptions = {}): PickOutcome {
   const o = { ...DEFAULTS, ...options };
+  const found = traceCandidates(samples, sampleInterval, delay, o);
+  if (found === 'dead') return { ok: false, reason: 'dead' };
+  // The first break is the first candidate that stands out nearly as well as the best one (later
+  // arrivals are often stronger; chance bursts of noise are weaker).
+  const { candidates } = found;
+  if (!candidates.length) return { ok: false, reason: 'no_arrival' };
+  const best = Math.max(...candidates.map((c) => c.snr));
+  const chosen = candidates.find((c) => c.snr >= Math.max(o.minSnr, best * o.candidateFraction));
+  if (!chosen) return { ok: false, reason: 'no_arrival' };
+  return pickAt(found, chosen);
+}
+
+/** A possible first break on a trace: the AIC onset of one rise of the energy ratio, and the SNR around it. */
+export interface Candidate {
+  index: number;
+  snr: number;
+}
+
+/** A live trace ready for picking: demeaned samples, the candidates, and what pickAt needs. */
+export interface TraceCandidates {
+  x: Float64Array;
+  candidates: Candidate[];
+  sampleInterval: number;
+  delay: number;
+  /** Sample index of time 0 (the shot). */
+  shot: number;
+}
+
+/**
+ * Every rise of the energy ratio (Allen 1978) above `minRatio` after the shot, each with its AIC
+ * onset (Maeda 1985) and the SNR around it, earliest first; 'dead' for a flat trace.
+ */
+export function traceCandidates(samples: Float64Array, sampleInterval: number, delay: number, options: PickerOptions = {}): TraceCandidates | 'dead' {
+  const o = { ...DEFAULTS, ...options };
   const n = samples.length;
-  if (isDead(samples)) return { ok: false, reason: 'dead' };
+  if (isDead(samples)) return 'dead';
   const x = demeaned(samples);
   const short = Math.max(4, Math.round(o.shortWindow / sampleInterval));
   const long = Math.max(16, Math.round(o.longWindow / sampleInterval));
   // The arrival cannot come before the shot: search from time 0 (a pre-trigger is noise).
   const shot = Math.max(0, Math.ceil(-delay / sampleInterval));
   const ratio = energyRatio(x, shot + 4, short, long);
-  // Every rise of the ratio is a candidate; each gets its AIC onset and the SNR around it. The first
-  // break is the first candidate that stands out nearly as well as the best one (later arrivals are
-  // often stronger; chance bursts of noise are weaker).
   const noise = Math.sqrt(quietestEnergy(x, long));
   const candidates = triggers(ratio, o.minRatio, short).map((peak) => {
     const index = aicOnset(x, Math.max(shot, peak - long), Math.min(n, peak + short));
     return { index, snr: localSnr(x, index, short, long, noise) };
   });
-  if (!candidates.length) return { ok: false, reason: 'no_arrival' };
-  const best = Math.max(...candidates.map((c) => c.snr));
-  const chosen = candidates.find((c) => c.snr >= Math.max(o.minSnr, best * o.candidateFraction));
-  if (!chosen) return { ok: false, reason: 'no_arrival' };
-  return refined(x, chosen.index, chosen.snr, sampleInterval, delay, shot);
+  return { x, candidates, sampleInterval, delay, shot };
+}
+
+/**
+ * The pick for an arrival whose energy peaks at sample `peak` (found by other means, e.g. a stack
+ * with the neighbours): the AIC onset before it and the SNR around it, refined as pickTrace's.
+ */
+export function pickBefore(t: TraceCandidates, peak: number, options: PickerOptions = {}): PickOutcome {
+  const o = { ...DEFAULTS, ...options };
+  const short = Math.max(4, Math.round(o.shortWindow / t.sampleInterval));
+  const long = Math.max(16, Math.round(o.longWindow / t.sampleInterval));
+  const index = aicOnset(t.x, Math.max(t.shot, peak - long), Math.min(t.x.length, peak + short));
+  const snr = localSnr(t.x, index, short, long, Math.sqrt(quietestEnergy(t.x, long)));
+  return refined(t.x, index, snr, t.sampleInterval, t.delay, t.shot);
+}
+
+/** Short and long energy windows in samples, as the picker uses them. */
+export function windowsOf(sampleInterval: number, options: PickerOptions = {}): { short: number; long: number } {
+  const o = { ...DEFAULTS, ...options };
+  return { short: Math.max(4, Math.round(o.shortWindow / sampleInterval)), long: Math.max(16, Math.round(o.longWindow / sampleInterval)) };
+}
+
+/** The pick at one candidate, refined (below). */
+export function pickAt(t: TraceCandidates, c: Candidate): PickOutcome {
+  return refined(t.x, c.index, c.snr, t.sampleInterval, t.delay, t.shot);
 }
 
 /**

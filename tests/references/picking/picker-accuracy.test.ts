@@ -31,9 +31,20 @@ describe('first-break picker accuracy on synthetic gathers', () => {
     for (const seed of [1, 2, 3]) expect(measurePicker(10, seed).p95_abs_error_ms).toBeLessThanOrEqual(1);
   });
 
-  // Not met yet (docs/records.md has the measured figures for three noise seeds): at SNR 5 the onset
-  // comes 1.5–2 samples late and about one trace in twenty is still picked on a later arrival.
-  it.todo('SNR 5: median |error| ≤ 1 sample and 95th percentile ≤ 1 ms (measured 0.39–0.44 ms and 25–39 ms)');
+  it('SNR 5: 95th percentile ≤ 1 ms on each of three noise seeds (issue target)', () => {
+    for (const seed of [1, 2, 3]) {
+      const m = measurePicker(5, seed);
+      expect(m.unpicked).toBe(0);
+      expect(m.p95_abs_error_ms).toBeLessThanOrEqual(1);
+    }
+  });
+
+  // The median at SNR 5 is within a tenth of a sample of the target, not under it on every seed
+  // (measured 0.245–0.266 ms on seeds 1–3, docs/records.md); the test holds the measured level so it
+  // cannot slip back, and the target stays open.
+  it('SNR 5: median |error| within 1.1 samples on each of three noise seeds (target: 1 sample, not yet met on every seed)', () => {
+    for (const seed of [1, 2, 3]) expect(measurePicker(5, seed).median_abs_error_ms).toBeLessThanOrEqual(0.275);
+  });
 
   it('the gather pass finds the first break a single trace misses under a stronger later arrival', () => {
     // 24 traces every 2 m from a shot at 0, arrivals at 1000 m/s (exact); on trace 10 the first arrival
@@ -55,6 +66,23 @@ describe('first-break picker accuracy on synthetic gathers', () => {
     expect(gathered[10].ok && Math.abs(gathered[10].pick.time - 0.022)).toBeLessThanOrEqual(0.00025);
     // Without positions the traces are picked on their own.
     expect(pickGather(traces, null)[10]).toEqual(single);
+  });
+
+  it('the neighbour alignment keeps each trace its own delay (a static is not smoothed away)', () => {
+    // 24 traces every 2 m, arrivals at 1000 m/s; trace 12 arrives 1.5 ms late (a static, e.g. a
+    // soft patch under that geophone). Exact onsets, light noise: each pick within one sample.
+    const dt = 0.00025, n = 600;
+    const onset = (k: number) => (2 + 2 * k) / 1000 + (k === 12 ? 0.0015 : 0);
+    const traces = Array.from({ length: 24 }, (_, k) => ({
+      samples: Float64Array.from({ length: n }, (_, i) => {
+        const s = i * dt - onset(k);
+        return (s < 0 ? 0 : Math.exp(-150 * s) * Math.sin(2 * Math.PI * 80 * s)) + 0.002 * Math.sin(i * 1.37 + k);
+      }),
+      sampleInterval: dt,
+      delay: 0,
+    }));
+    const picks = pickGather(traces, traces.map((_, k) => 2 + 2 * k));
+    picks.forEach((p, k) => expect(p.ok && Math.abs(p.pick.time - onset(k))).toBeLessThanOrEqual(0.00025));
   });
 
   it('a polarity-reversed trace gets the same pick as the original', () => {
