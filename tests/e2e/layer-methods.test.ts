@@ -50,6 +50,11 @@ describe('layer methods tab: assignment, result, save as model, roles', () => {
     await expect.poll(() => page.getByTestId('layers-summary').textContent()).toMatch(/^Velocities \d+ m\/s over \d+ m\/s; depths under \d+ geophones; optimum XY [\d.]+ m/);
     await page.getByTestId('layers-caution').waitFor();
     const before = await page.getByTestId('layers-summary').textContent();
+    // The demo holes against the deepest refractor, between the geophones where it was found: the two
+    // boreholes' top of rock and both contacts of the trial pit, which marks none.
+    await page.getByTestId('borehole-ties').waitFor();
+    await expect.poll(() => page.getByTestId('borehole-tie').count()).toBe(4);
+    await expect(page.getByTestId('borehole-tie').filter({ hasText: 'BH1' }).textContent()).resolves.toMatch(/sandstone7\.3[\d.]+[+-]\d+\.\d/);
 
     // Give five refractor picks to the direct wave: the result must change, and the count shows.
     await page.getByTestId('layers-brush-0').click();

@@ -123,6 +123,11 @@ describe('forward runs: start, progress, results views, comparison', () => {
     await page.getByTestId('section-canvas').waitFor();
     await page.getByTestId('section-caption').filter({ hasText: 'Shot S1 at' }).waitFor();
     expect(await page.getByTestId('section-caption').textContent()).toMatch(/wavefronts every \d+(\.\d+)? ms, labelled in ms; 48 rays/);
+    // The demo line's holes against the top of the model's deepest layer: the two boreholes' top of
+    // rock, and both contacts of the trial pit, which marks none (fixtures/demo/tq-l1.boreholes.csv).
+    await page.getByTestId('borehole-ties').waitFor();
+    await expect.poll(() => page.getByTestId('borehole-tie').count()).toBe(4);
+    await expect(page.getByTestId('borehole-tie').filter({ hasText: 'BH2' }).textContent()).resolves.toMatch(/sandstone10\.4[\d.]+[+-]\d+\.\d/);
     await page.getByTestId('section-view').screenshot({ path: path.join(SCREENSHOT_DIR, 'run-section-S1.png') });
 
     const fieldRequests = () =>

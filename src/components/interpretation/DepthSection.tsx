@@ -1,5 +1,6 @@
 import { memo, useMemo } from 'react';
 import type { LayerResult } from '../../../shared/layers';
+import type { BoreholeView } from '../../../shared/schemas/boreholes';
 import { LazyPlot } from '../plot/LazyPlot';
 import { axisStyle } from '../line/plot/chartTheme';
 import { LAYER_CHART_CONFIG, LAYER_CHART_LAYOUT } from './chartLayout';
@@ -7,9 +8,10 @@ import { LAYER_COLOURS } from './layerColours';
 
 /**
  * The depth section at true scale (1:1): the ground under the geophones and each refractor at its
- * interpreted elevation, one point per geophone, shots marked on the ground.
+ * interpreted elevation, one point per geophone, shots marked on the ground, boreholes and trial pits
+ * as columns from their ground with a mark at each logged contact.
  */
-export const DepthSection = memo(function DepthSection({ result, ground, shots }: { result: LayerResult; ground: { x: number[]; z: number[] }; shots: { x: number; z: number; id: string }[] }) {
+export const DepthSection = memo(function DepthSection({ result, ground, shots, holes }: { result: LayerResult; ground: { x: number[]; z: number[] }; shots: { x: number; z: number; id: string }[]; holes: readonly BoreholeView[] }) {
   const data = useMemo(() => {
     const refractors = [...new Set(result.depths.map((d) => d.refractor))].sort((a, b) => a - b);
     return [
@@ -38,8 +40,23 @@ export const DepthSection = memo(function DepthSection({ result, ground, shots }
         marker: { symbol: 'star', size: 11, color: '#292524' },
         hovertemplate: 'shot %{text} at %{x:.2f} m<extra></extra>',
       },
+      ...holes.filter((h) => h.groundZResolved !== null).map((h) => {
+        const top = h.groundZResolved!;
+        return {
+          type: 'scatter',
+          mode: 'lines+markers',
+          name: h.name,
+          showlegend: false,
+          x: [h.x, ...h.contacts.map(() => h.x)],
+          y: [top, ...h.contacts.map((c) => top - c.depth)],
+          text: [`${h.kind === 'trial_pit' ? 'trial pit' : 'borehole'} at the ground`, ...h.contacts.map((c) => `${c.material} at ${c.depth} m`)],
+          line: { color: '#1c1917', width: 3 },
+          marker: { symbol: 'line-ew-open', size: 12, color: '#1c1917' },
+          hovertemplate: `${h.name.replace(/%/g, '%%')}: %{text}<extra></extra>`,
+        };
+      }),
     ];
-  }, [result, ground, shots]);
+  }, [result, ground, shots, holes]);
   const layout = useMemo(
     () => ({
       ...LAYER_CHART_LAYOUT,

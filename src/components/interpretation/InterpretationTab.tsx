@@ -11,6 +11,9 @@ import { SelectField, TextField } from '../Field';
 import { Loading, LoadError } from '../LoadState';
 import { AssignmentChart } from './AssignmentChart';
 import { DepthSection } from './DepthSection';
+import { useBoreholes } from '../../api/boreholes';
+import { depthBetween } from '../../../shared/boreholes';
+import { BoreholeTiesTable } from '../boreholes/BoreholeTiesTable';
 import { FunctionsChart } from './FunctionsChart';
 import { LayerMethodsCaution } from './LayerMethodsCaution';
 import { layerColour, layerName } from './layerColours';
@@ -197,6 +200,9 @@ function Result({ result, line, model, modelId, pickSetName, lineId, canSave, ha
   }, [line]);
   const shots = useMemo(() => line.placed.map((s) => ({ x: s.source.x, z: s.source.z, id: s.shotId })), [line]);
   const refractors = result.velocities.length - 1;
+  const holes = useBoreholes(lineId);
+  // Ties to the logs: the deepest refractor, between the geophones where it was interpreted.
+  const rockTop = useMemo(() => (refractors > 0 ? depthBetween(result.depths.filter((d) => d.refractor === refractors)) : null), [result, refractors]);
   return (
     <section data-testid="layers-result">
       <h3 className="mb-2 text-lg font-semibold">Result</h3>
@@ -215,7 +221,8 @@ function Result({ result, line, model, modelId, pickSetName, lineId, canSave, ha
         <LayerTable result={result} />
       </div>
       <h4 className="mb-1 font-semibold">Depth section (true scale)</h4>
-      <DepthSection result={result} ground={ground} shots={shots} />
+      <DepthSection result={result} ground={ground} shots={shots} holes={holes.data ?? []} />
+      {rockTop && <BoreholeTiesTable holes={holes.data ?? []} depthAt={rockTop} surfaceName={`refractor ${refractors} (${Math.round(result.velocities[refractors])} m/s)`} />}
       {result.method !== 'intercept' &&
         Array.from({ length: refractors }, (_, k) => (
           <div key={k} className="mt-6">

@@ -5,6 +5,7 @@
  */
 import { useBoreholes } from '../../api/boreholes';
 import { BoreholeTiesTable } from '../boreholes/BoreholeTiesTable';
+import { deepestInterfaceDepth, deepestLayerName } from '../../../shared/boreholes';
 import { useDeferredValue, useMemo, useRef, useState } from 'react';
 import type { Grid } from '../../../shared/grid';
 import { evalPolyline, rasteriseModel, type ModelFile, type ModelLayer, type RasterModel } from '../../../shared/model';
@@ -73,12 +74,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
     return r;
   }, [draft]);
   // Ties to the logs: the top of the deepest layer (the base of the one above it), below the model's ground.
-  const rockTop = useMemo(() => {
-    const above = draft.layers && draft.layers.length > 1 ? draft.layers[draft.layers.length - 2]?.base : null;
-    if (!raster || !above || above.length < 2) return null;
-    const base = above as [number, number][];
-    return (x: number) => (x < base[0][0] || x > base[base.length - 1][0] ? null : +(raster.surfaceZ(x) - evalPolyline(base, x)).toFixed(3));
-  }, [draft.layers, raster]);
+  const rockTop = useMemo(() => (raster ? deepestInterfaceDepth(draft, raster.surfaceZ) : null), [draft, raster]);
   const deferred = useDeferredValue(draft);
   const check = useMemo(() => {
     const t0 = performance.now();
@@ -238,7 +234,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
                 {(draft.edits ?? []).length} painted cells · {draft.layers ? `${draft.layers.length} layers` : 'raw velocity grid'}
                 {dirty && !readOnly && <span className="ml-2 rounded-full bg-amber-100 px-2 text-amber-900">unsaved changes</span>}
               </p>
-              {raster && rockTop && <BoreholeTiesTable holes={holes.data ?? []} depthAt={rockTop} surfaceName={`the top of ${draft.layers?.[draft.layers.length - 1]?.name ?? 'the deepest layer'}`} />}
+              {raster && rockTop && <BoreholeTiesTable holes={holes.data ?? []} depthAt={rockTop} surfaceName={deepestLayerName(draft)} />}
 
               <PreviewPanel
                 pickSets={pickSets}

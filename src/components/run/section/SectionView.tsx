@@ -1,6 +1,8 @@
 import { useBoreholes } from '../../../api/boreholes';
 import { useMemo, useState, type ReactNode } from 'react';
+import { deepestInterfaceDepth, deepestLayerName } from '../../../../shared/boreholes';
 import { evalPolyline } from '../../../../shared/model/polyline';
+import { BoreholeTiesTable } from '../../boreholes/BoreholeTiesTable';
 import { sToMs } from '../../../../shared/units';
 import { errorMessage } from '../../../api/errors';
 import { useModelGrid, usePrefetchFields, useRays, useRunModel, useRunShots, useShotField } from '../../../api/runs';
@@ -79,6 +81,12 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
       boreholes: holes.data ?? [],
     };
   }, [fronts, showRays, rays.data, highlightPick, file, stations, shots.data, shotId, holes.data]);
+
+  // Ties to the logs: the top of the model's deepest layer, below its ground.
+  const rockTop = useMemo(() => {
+    const surface = file?.surface as [number, number][] | undefined;
+    return file && surface && surface.length >= 2 ? deepestInterfaceDepth(file, (x) => evalPolyline(surface, x)) : null;
+  }, [file]);
 
   const problem = velocity.error ?? field.error ?? rays.error ?? model.error;
 
@@ -171,6 +179,7 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
         <LegendItem swatch={<span style={{ color: SECTION_COLOURS.station }}>▼</span>}>Stations (geophones)</LegendItem>
         <LegendItem swatch={<span style={{ color: SECTION_COLOURS.shotChosen }}>★</span>}>Shots (chosen one larger)</LegendItem>
       </ul>
+      {file && rockTop && <BoreholeTiesTable holes={holes.data ?? []} depthAt={rockTop} surfaceName={deepestLayerName(file)} />}
     </div>
   );
 }
