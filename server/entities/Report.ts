@@ -32,6 +32,17 @@ export interface ReportSnapshot {
   pickSet: { file: string; revision: number };
   preparedBy: string;
   consultancy: { name: string; address: string };
+  /** The line's boreholes and trial pits (depths in m below ground); absent in snapshots taken before reports carried them. */
+  boreholes?: SnapshotBorehole[];
+}
+
+export interface SnapshotBorehole {
+  name: string;
+  kind: 'borehole' | 'trial_pit';
+  x: number;
+  groundZ: number | null;
+  waterDepth: number | null;
+  contacts: { depth: number; material: string; rockTop: boolean }[];
 }
 
 /** A PDF summary of one run or inversion, and its review. Every step is in the audit log (object_type 'report'). */

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import type { ReportSnapshot } from '../entities/Report';
+import type { ReportSnapshot, SnapshotBorehole } from '../entities/Report';
 import { loadOrganisationText } from './organisation';
 
 /** What a report is made from: a finished forward run or a finished inversion. */
@@ -37,5 +37,20 @@ export async function takeReportSnapshot(em: EntityManager, source: ReportSource
     pickSet: { file: r.file_name, revision: r.pick_set_revision },
     preparedBy: r.prepared_by ?? 'unknown',
     consultancy: await loadOrganisationText(em),
+    boreholes: await lineBoreholes(em, r.line_id),
   };
+}
+
+/** The line's boreholes and trial pits as a report keeps them (along the line). */
+export async function lineBoreholes(em: Pick<EntityManager, 'query'>, lineId: string): Promise<SnapshotBorehole[]> {
+  const rows: { name: string; kind: SnapshotBorehole['kind']; x: number; ground_z: number | null; water_depth: number | null; contacts: { depth: number; material: string; rockTop?: boolean }[] }[] =
+    await em.query('SELECT name, kind, x, ground_z, water_depth, contacts FROM boreholes WHERE line_id = $1 ORDER BY x, name', [lineId]);
+  return rows.map((h) => ({
+    name: h.name,
+    kind: h.kind,
+    x: Number(h.x),
+    groundZ: h.ground_z === null ? null : Number(h.ground_z),
+    waterDepth: h.water_depth === null ? null : Number(h.water_depth),
+    contacts: h.contacts.map((c) => ({ depth: c.depth, material: c.material, rockTop: c.rockTop === true })),
+  }));
 }

@@ -7,6 +7,7 @@ import type { ReportOptions, ReportSnapshot } from '../../server/entities/Report
 import { loadInversionResiduals, loadInversionSection, loadInversionView } from '../../server/services/inversionReads';
 import { loadModelVersion } from '../../server/services/models';
 import { loadLogo } from '../../server/services/organisation';
+import { lineBoreholes } from '../../server/services/reportSnapshot';
 import { inversionReportInput } from '../report/inversion/from-views';
 import type { InversionReportInput } from '../report/inversion/types';
 
@@ -48,8 +49,10 @@ export async function gatherInversionReportInput(reportId: string, r: InversionR
     isoVelocity: r.options.isoVelocity,
     coverageThreshold: r.options.coverageThreshold,
   });
-  // The stations as they were when the report was made or submitted, not as edited since.
-  return { ...input, stations: snap.stations };
+  // The stations and holes as they were when the report was made or submitted, not as edited since
+  // (a snapshot taken before reports carried the holes: the line's holes now).
+  const boreholes = snap.boreholes ?? (await lineBoreholes(dataSource.manager, snap.line.id));
+  return { ...input, stations: snap.stations, boreholes };
 }
 
 export const inversionRowOf = async (reportId: string): Promise<InversionReportRow | undefined> =>

@@ -7,7 +7,7 @@ import type { Job } from 'bullmq';
 import { dataSource } from '../../server/db/dataSource';
 import { loadModelVersion } from '../../server/services/models';
 import { loadRays, loadResidualRows, loadFieldRow } from '../../server/services/runResults';
-import { takeReportSnapshot } from '../../server/services/reportSnapshot';
+import { lineBoreholes, takeReportSnapshot } from '../../server/services/reportSnapshot';
 import { renderInversionReportPdf } from '../report/inversion/render';
 import { loadLogo } from '../../server/services/organisation';
 import type { ReportOptions, ReportSnapshot } from '../../server/entities/Report';
@@ -92,5 +92,7 @@ export async function gatherReportInput(reportId: string): Promise<ReportInput> 
     })),
     section: { shotId: options.shotId, grid: field.grid, source: field.source, times, rays },
     isoVelocity: options.isoVelocity,
+    // A snapshot taken before reports carried the holes: the line's holes now.
+    boreholes: snap.boreholes ?? (await lineBoreholes(dataSource.manager, snap.line.id)),
   };
 }

@@ -1,6 +1,8 @@
 /** Section "Depth to the v* surface": a depth profile along the line and a table at the stations. */
 import { nodeX, nodeZ } from '../../shared/grid';
+import { deepestInterfaceDepth, deepestLayerName } from '../../shared/boreholes';
 import { isoVelocityDepth, type IsoDepth } from '../../shared/model/iso-depth';
+import { drawBoreholes, type TieSurface } from './boreholes';
 import type { ReportContext } from './context';
 import { caption, captionHeight, paragraph, sectionHeading } from './flow';
 import { fixed, plain } from './format';
@@ -13,6 +15,21 @@ import { label } from './text';
 import { niceStep } from './ticks';
 
 export const NOT_REACHED = 'not reached within the model';
+
+/**
+ * Section "Boreholes and ties" of a forward-run report: the contacts against the top of the model's
+ * deepest layer (when it has layers) and against the iso-velocity surface of the section before.
+ */
+export function drawReportBoreholes(ctx: ReportContext): void {
+  const { input, model } = ctx;
+  const { grid } = model;
+  const xMax = nodeX(grid, grid.nx - 1);
+  const surfaces: TieSurface[] = [];
+  const interfaceDepth = deepestInterfaceDepth(input.model.file, model.surfaceZ);
+  if (interfaceDepth) surfaces.push({ name: deepestLayerName(input.model.file), depthAt: interfaceDepth });
+  surfaces.push({ name: `the ${plain(input.isoVelocity, 0)} m/s surface`, depthAt: (x) => (x < grid.x0 || x > xMax ? null : isoVelocityDepth(model, input.isoVelocity, x).depth) });
+  drawBoreholes(ctx, 'boreholes', input.boreholes ?? [], surfaces, input.stations);
+}
 export const OUTSIDE = 'outside the model';
 
 /** The iso-velocity depth at each station, or why there is none. */

@@ -3,7 +3,7 @@ import { readInterpretationRecord } from '../../shared/layers/record';
 import { plain } from './format';
 import type { ReportInput } from './types';
 
-export const SECTION_ORDER = ['survey', 'section', 'isoDepth', 'layers', 'curves', 'misfit', 'method', 'cautions'] as const;
+export const SECTION_ORDER = ['survey', 'section', 'isoDepth', 'boreholes', 'layers', 'curves', 'misfit', 'method', 'cautions'] as const;
 export type SectionKey = (typeof SECTION_ORDER)[number];
 
 /** The sections this report has: "Layer interpretation" only when the model was saved from one. */
@@ -17,6 +17,7 @@ export function sectionTitle(key: SectionKey, input: ReportInput): string {
     case 'survey': return 'The survey';
     case 'section': return 'Velocity section';
     case 'isoDepth': return `Depth to the ${plain(input.isoVelocity, 0)} m/s surface`;
+    case 'boreholes': return 'Boreholes and ties';
     case 'layers': return 'Layer interpretation behind the model';
     case 'curves': return 'Travel-time curves';
     case 'misfit': return 'Misfit';

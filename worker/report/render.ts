@@ -1,6 +1,6 @@
 /**
  * The PDF summary of a forward run: cover, survey, velocity section, depth to an iso-velocity
- * surface, the layer interpretation behind the model (when there is one), travel-time curves, misfit, method statement, limitations and cautions. A4 portrait,
+ * surface, boreholes and ties, the layer interpretation behind the model (when there is one), travel-time curves, misfit, method statement, limitations and cautions. A4 portrait,
  * Source Sans 3 embedded, page frames with "page N of M". Pure apart from reading the font files:
  * the same input gives the same pages.
  */
@@ -10,7 +10,7 @@ import { drawCover } from './cover';
 import { drawCurves } from './curves';
 import { openReportDocument } from './document';
 import { drawPageFrames } from './frame';
-import { drawIsoDepth } from './iso-depth';
+import { drawIsoDepth, drawReportBoreholes } from './iso-depth';
 import { drawLayers } from './layers';
 import { drawMethod } from './method';
 import { drawMisfit } from './misfit';
@@ -28,6 +28,7 @@ export async function renderReportPdf(input: ReportInput): Promise<Buffer> {
   drawSurvey(ctx);
   drawSection(ctx);
   drawIsoDepth(ctx);
+  drawReportBoreholes(ctx);
   drawLayers(ctx);
   drawCurves(ctx);
   drawMisfit(ctx);

@@ -19,6 +19,17 @@ export interface ReportMeta {
   reviewedBy: string | null;
 }
 
+/** A borehole or trial pit as the report was made (the snapshot's copy): depths in m below ground. */
+export interface ReportBorehole {
+  name: string;
+  kind: 'borehole' | 'trial_pit';
+  x: number;
+  /** Ground elevation as logged; null: taken from the stations. */
+  groundZ: number | null;
+  waterDepth: number | null;
+  contacts: { depth: number; material: string; rockTop: boolean }[];
+}
+
 /** One pick's residual as a report prints it (ms). */
 export interface ReportResidual {
   shotId: string;
@@ -54,6 +65,8 @@ export interface ReportInput extends ReportMeta {
   section: { shotId: string; grid: Grid; source: { x: number; z: number }; times: Float32Array; rays: { pickIndex: number; points: number[] }[] };
   /** Velocity (m/s) of the iso-velocity surface whose depth is tabulated (e.g. top of rock). */
   isoVelocity: number;
+  /** The line's boreholes and trial pits (absent in inputs made before reports carried them: none). */
+  boreholes?: ReportBorehole[];
 }
 
 export interface RunStatsJson {

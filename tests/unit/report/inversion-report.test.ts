@@ -50,7 +50,7 @@ describe('inversion report: document', () => {
     expect(cover).toContain('Velocity section of line SP-1 by travel-time tomography');
     expect(cover).toContain('Project Harrowby Mill spillway upgrade');
     expect(cover).toContain('has not been approved for issue');
-    expect(cover).toContain('section 7, Limitations and cautions');
+    expect(cover).toContain('section 8, Limitations and cautions');
     expect(cover).toContain('inversion inv-sp1-1 (2026-03-17) of pick set sp-1.picks.csv revision 3; starting model: automatic 1-D gradient');
   });
 
@@ -58,11 +58,12 @@ describe('inversion report: document', () => {
     const headings = [
       '1 Velocity section from the inversion',
       '2 Depth to the 2500 m/s surface',
-      '3 Convergence',
-      '4 Misfit of the final model',
-      '5 Resolution: checkerboard test',
-      '6 Method statement and settings',
-      '7 Limitations and cautions',
+      '3 Boreholes and ties',
+      '4 Convergence',
+      '5 Misfit of the final model',
+      '6 Resolution: checkerboard test',
+      '7 Method statement and settings',
+      '8 Limitations and cautions',
     ];
     const at = headings.map((h) => lines.indexOf(h));
     for (const [i, h] of headings.entries()) {
@@ -164,10 +165,10 @@ describe('inversion report: drawing', () => {
     const g = input.inversion.grid;
     expect(images).toHaveLength(4);
     expect(images[0]).toMatchObject({ page: pageWith('1 Velocity section from the inversion'), width: g.nx, height: g.nz });
-    expect(images[1].page).toBe(pageWith('4 Misfit of the final model'));
+    expect(images[1].page).toBe(pageWith('5 Misfit of the final model'));
     expect(images.slice(2).map((i) => [i.page, i.width, i.height])).toEqual([
-      [pageWith('5 Resolution: checkerboard test'), g.nx, g.nz],
-      [pageWith('5 Resolution: checkerboard test'), g.nx, g.nz],
+      [pageWith('6 Resolution: checkerboard test'), g.nx, g.nz],
+      [pageWith('6 Resolution: checkerboard test'), g.nx, g.nz],
     ]);
   });
 

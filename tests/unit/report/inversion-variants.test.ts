@@ -93,12 +93,12 @@ describe('inversion report on a known answer', () => {
     expect(none.flow).toContain('No ray reaches below the surface: there is no depth of investigation.');
   }, 60_000);
 
-  it('numbers the sections without a checkerboard test, and cautions become section 6', async () => {
+  it('numbers the sections without a checkerboard test, and cautions become section 7', async () => {
     const { lines, flow } = await render(knownInversionInput());
-    for (const h of ['1 Velocity section from the inversion', '2 Depth to the 1500 m/s surface', '3 Convergence', '4 Misfit of the final model', '5 Method statement and settings', '6 Limitations and cautions']) expect(lines, h).toContain(h);
+    for (const h of ['1 Velocity section from the inversion', '2 Depth to the 1500 m/s surface', '3 Boreholes and ties', '4 Convergence', '5 Misfit of the final model', '6 Method statement and settings', '7 Limitations and cautions']) expect(lines, h).toContain(h);
     expect(flow).not.toContain('checkerboard test with');
     expect(flow).toContain('Checkerboard test not run');
-    expect(flow).toContain('section 6, Limitations and cautions');
+    expect(flow).toContain('section 7, Limitations and cautions');
   }, 60_000);
 
   it('names a saved starting model and a fixed smoothing weight', async () => {

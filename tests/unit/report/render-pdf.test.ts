@@ -80,7 +80,7 @@ describe('PDF summary: document', () => {
   });
 
   it('has every section heading, in order, each once', () => {
-    const headings = ['1 The survey', '2 Velocity section', '3 Depth to the 2000 m/s surface', '4 Travel-time curves', '5 Misfit', '6 Method statement', '7 Limitations and cautions'];
+    const headings = ['1 The survey', '2 Velocity section', '3 Depth to the 2000 m/s surface', '4 Boreholes and ties', '5 Travel-time curves', '6 Misfit', '7 Method statement', '8 Limitations and cautions'];
     const at = headings.map((h) => lines.indexOf(h));
     for (const [i, h] of headings.entries()) expect(at[i], h).toBeGreaterThan(0);
     expect([...at].sort((a, b) => a - b)).toEqual(at);
@@ -188,8 +188,8 @@ describe('PDF summary: drawing', () => {
     const g = SMALL_MODEL.grid;
     expect(images).toHaveLength(2);
     expect(images[0]).toMatchObject({ page: pageWith('2 Velocity section'), width: g.nx, height: g.nz });
-    expect(images[1].page).toBe(pageWith('5 Misfit'));
-    expect(images.some((i) => i.page === pageWith('4 Travel-time curves'))).toBe(false);
+    expect(images[1].page).toBe(pageWith('6 Misfit'));
+    expect(images.some((i) => i.page === pageWith('5 Travel-time curves'))).toBe(false);
   });
 
   it('renders page 1 and the velocity section page to PNG, and they are not blank', () => {

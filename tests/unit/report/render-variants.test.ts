@@ -111,20 +111,20 @@ describe('PDF summary of a model saved from the layer methods', () => {
     const base = smallReportInput();
     const file = { ...base.model.file, interpretation: interpretationRecord(result, 'exact.picks.csv revision 0', 3) };
     const { flow } = await textOf({ ...base, model: { ...base.model, file } }, 'layers');
-    expect(flow).toContain('4 Layer interpretation behind the model');
+    expect(flow).toContain('5 Layer interpretation behind the model');
     expect(flow).toContain('generalized reciprocal method (Palmer 1980, 1981)');
     expect(flow).toContain(`XY = ${plainNumber(result.xy!)} m`);
     expect(flow).toContain('3 picks were assigned to a refractor by hand');
     expect(flow).toMatch(/1 \(top\) 500 10\.0 – 10\.0/);
     expect(flow).toMatch(/2 \(below refractor 1\) 2000 —/);
     for (const d of result.depths.slice(0, 5)) expect(flow).toContain(`${d.x.toFixed(2)} 1 10.00`);
-    expect(flow).toContain('8 Limitations and cautions');
-    expect(flow).toContain('section 8, Limitations and cautions');
+    expect(flow).toContain('9 Limitations and cautions');
+    expect(flow).toContain('section 9, Limitations and cautions');
     expect(flow).not.toMatch(/NaN|Infinity|undefined/);
 
     const plain = await textOf(base, 'no-layers');
     expect(plain.flow).not.toContain('Layer interpretation');
-    expect(plain.flow).toContain('7 Limitations and cautions');
+    expect(plain.flow).toContain('8 Limitations and cautions');
   }, 120_000);
 });
 

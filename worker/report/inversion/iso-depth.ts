@@ -8,6 +8,7 @@ import { nodeX } from '../../../shared/grid';
 import { isoVelocityDepth, type IsoDepth } from '../../../shared/model/iso-depth';
 import { caption, paragraph, sectionHeading } from '../flow';
 import { fixed, NONE, plain } from '../format';
+import { drawBoreholes, type TieSurface } from '../boreholes';
 import { drawTable } from '../table';
 import type { InversionContext } from './context';
 
@@ -42,6 +43,26 @@ export function inversionIsoDepth(ctx: InversionContext, velocity: number, x: nu
   while (iz < grid.nz - 1 && !ctx.active[iz * grid.nx + ix]) iz++;
   if (!ctx.covered(iz * grid.nx + ix)) return { result, status: UNCOVERED };
   return { result, status: 'resolved' };
+}
+
+/**
+ * Section "Boreholes and ties" of an inversion report: the contacts against the iso-velocity surface
+ * where the inversion resolves it, and why not where it does not.
+ */
+export function drawInversionBoreholes(ctx: InversionContext): void {
+  const v = ctx.input.isoVelocity;
+  const surface: TieSurface = {
+    name: `the ${plain(v, 0)} m/s surface`,
+    depthAt: (x) => {
+      const r = inversionIsoDepth(ctx, v, x);
+      return r.status === 'resolved' ? (r.result?.depth ?? null) : null;
+    },
+    noneText: (x) => {
+      const r = inversionIsoDepth(ctx, v, x);
+      return r.status === 'resolved' ? NOT_REACHED_ABOVE_DOI : r.status;
+    },
+  };
+  drawBoreholes(ctx, 'boreholes', ctx.input.boreholes ?? [], [surface], ctx.input.stations);
 }
 
 export function stationIsoDepths(ctx: InversionContext): StationIsoDepth[] {

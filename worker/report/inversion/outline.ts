@@ -2,10 +2,10 @@
 import { plain } from '../format';
 import type { InversionReportInput } from './types';
 
-export type InversionSectionKey = 'section' | 'isoDepth' | 'convergence' | 'misfit' | 'checkerboard' | 'method' | 'cautions';
+export type InversionSectionKey = 'section' | 'isoDepth' | 'boreholes' | 'convergence' | 'misfit' | 'checkerboard' | 'method' | 'cautions';
 
 export function inversionSections(input: InversionReportInput): InversionSectionKey[] {
-  const all: InversionSectionKey[] = ['section', 'isoDepth', 'convergence', 'misfit', 'checkerboard', 'method', 'cautions'];
+  const all: InversionSectionKey[] = ['section', 'isoDepth', 'boreholes', 'convergence', 'misfit', 'checkerboard', 'method', 'cautions'];
   return all.filter((k) => k !== 'checkerboard' || input.inversion.checkerboard);
 }
 
@@ -13,6 +13,7 @@ export function inversionSectionTitle(key: InversionSectionKey, input: Inversion
   switch (key) {
     case 'section': return 'Velocity section from the inversion';
     case 'isoDepth': return `Depth to the ${plain(input.isoVelocity, 0)} m/s surface`;
+    case 'boreholes': return 'Boreholes and ties';
     case 'convergence': return 'Convergence';
     case 'misfit': return 'Misfit of the final model';
     case 'checkerboard': return 'Resolution: checkerboard test';

@@ -1,6 +1,6 @@
 /**
  * The PDF summary of an inversion: cover, velocity section with coverage mask and DOI, depth to an
- * iso-velocity at the stations, convergence, misfit, checkerboard test (when run), method and
+ * iso-velocity at the stations, boreholes and ties, convergence, misfit, checkerboard test (when run), method and
  * settings, limitations and cautions. Same page, type and frame as the forward-run report; pure
  * apart from reading the font files.
  */
@@ -12,7 +12,7 @@ import { drawInversionCautions } from './cautions';
 import { drawCheckerboard } from './checkerboard';
 import { InversionContext } from './context';
 import { drawConvergence } from './convergence';
-import { drawInversionIsoDepth } from './iso-depth';
+import { drawInversionBoreholes, drawInversionIsoDepth } from './iso-depth';
 import { drawInversionMethod } from './method';
 import { drawInversionMisfit } from './misfit';
 import { inversionHeadingText } from './outline';
@@ -33,6 +33,7 @@ export async function renderInversionReportPdf(input: InversionReportInput): Pro
   });
   drawInversionSection(ctx);
   drawInversionIsoDepth(ctx);
+  drawInversionBoreholes(ctx);
   drawConvergence(ctx);
   drawInversionMisfit(ctx);
   drawCheckerboard(ctx);

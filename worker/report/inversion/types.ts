@@ -1,6 +1,6 @@
 import type { Grid } from '../../../shared/grid';
 import type { InversionSettings, StopReason } from '../../../shared/inversion/types';
-import type { ReportMeta, ReportResidual } from '../types';
+import type { ReportBorehole, ReportMeta, ReportResidual } from '../types';
 
 /** A node array as the engine gives it (Float32Array, NaN in the air) or as the API shows it (null in the air). */
 export type NodeValues = ArrayLike<number | null>;
@@ -54,6 +54,8 @@ export interface InversionReportInput extends ReportMeta {
   isoVelocity: number;
   /** Nodes with less summed ray length than this (m) are greyed as unresolved; default 1 m. */
   coverageThreshold?: number;
+  /** The line's boreholes and trial pits (absent in inputs made before reports carried them: none). */
+  boreholes?: ReportBorehole[];
 }
 
 export const DEFAULT_COVERAGE_THRESHOLD = 1;
