@@ -17,6 +17,22 @@ export function shotMark(doc: PDFKit.PDFDocument, x: number, y: number, r = 4.5,
   doc.save().lineWidth(0.5).fillColor(colour).strokeColor('#ffffff').polygon(...points).fillAndStroke().restore();
 }
 
+/**
+ * Borehole or trial pit: a dark column from the ground at (x, top) down to its deepest contact at
+ * `bottom`, a tick at each contact (longer at the top of rock), drawn with a white edge so it reads on
+ * any colour, its name above.
+ */
+export function holeMark(doc: PDFKit.PDFDocument, x: number, top: number, bottom: number, contacts: { y: number; rockTop: boolean }[]): void {
+  doc.save().lineCap('butt');
+  doc.lineWidth(3.2).strokeColor('#ffffff').moveTo(x, top).lineTo(x, Math.max(bottom, top + 2)).stroke();
+  doc.lineWidth(1.8).strokeColor(COLOUR.ink).moveTo(x, top).lineTo(x, Math.max(bottom, top + 2)).stroke();
+  for (const c of contacts) {
+    const half = c.rockTop ? 5 : 3;
+    doc.lineWidth(c.rockTop ? 1.4 : 0.8).strokeColor(COLOUR.ink).moveTo(x - half, c.y).lineTo(x + half, c.y).stroke();
+  }
+  doc.restore();
+}
+
 /** A small filled (or hollow) circle, e.g. a pick. */
 export function dot(doc: PDFKit.PDFDocument, x: number, y: number, r: number, colour: string, hollow = false): void {
   doc.save();

@@ -27,7 +27,7 @@ export function drawSection(ctx: ReportContext): void {
     ctx,
     'Figure',
     `Velocity section with the wavefronts of shot ${input.section.shotId} every ${plain(info.contourStepMs, 3)} ms (black lines, labels in ms), ` +
-      `rays from the shot to the geophones (red), ground surface (solid)${info.interfaces ? ' and layer interfaces (dashed)' : ''}; stations as triangles, the shot as a star. ` +
+      `rays from the shot to the geophones (red), ground surface (solid)${info.interfaces ? ' and layer interfaces (dashed)' : ''}; stations as triangles, the shot as a star${info.holes ? '; boreholes and trial pits as dark columns with a tick at each logged contact (longer at the top of rock)' : ''}. ` +
       `Colours give the velocity in m/s (${plain(info.velocityRange.min, 0)} to ${plain(info.velocityRange.max, 0)} m/s). ${ve}`,
   );
 

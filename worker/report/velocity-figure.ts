@@ -12,7 +12,8 @@ import { contourLines } from './contours';
 import { plain } from './format';
 import { layerOutlines } from './interfaces';
 import { groundLine, lineRange } from './line-geometry';
-import { shotMark, stationMark } from './markers';
+import { groundAt } from '../../shared/boreholes';
+import { holeMark, shotMark, stationMark } from './markers';
 import { Plot, type Box } from './plot';
 import { encodeRgbPng } from './png';
 import { COLOUR, SIZE } from './style';
@@ -62,6 +63,8 @@ export interface SectionFigureInfo {
   contourStepMs: number;
   exaggeration: number;
   velocityRange: { min: number; max: number };
+  /** How many boreholes and trial pits were drawn. */
+  holes: number;
 }
 
 export function drawVelocityFigure(ctx: ReportContext, layout: SectionLayout): SectionFigureInfo {
@@ -136,6 +139,13 @@ export function drawVelocityFigure(ctx: ReportContext, layout: SectionLayout): S
   plot.restore();
 
   for (const s of input.stations) if (s.x >= plot.x.min && s.x <= plot.x.max) stationMark(doc, plot.px(s.x), plot.py(s.z), 4);
+  const holes = (input.boreholes ?? []).filter((h) => h.x >= plot.x.min && h.x <= plot.x.max);
+  for (const h of holes) {
+    const ground = h.groundZ ?? groundAt(input.stations, h.x) ?? ctx.model.surfaceZ(h.x);
+    const deepest = Math.max(0, ...h.contacts.map((c) => c.depth));
+    holeMark(doc, plot.px(h.x), plot.py(ground), plot.py(ground - deepest), h.contacts.map((c) => ({ y: plot.py(ground - c.depth), rockTop: c.rockTop })));
+    label(doc, h.name, plot.px(h.x), plot.py(ground) - 7, { size: SIZE.tick - 1, align: 'center' });
+  }
   shotMark(doc, shot.x, shot.y, 5);
   // The shot's name above its star, kept within the plot's width so it never runs into the axis labels.
   const shotName = `shot ${input.section.shotId}`;
@@ -147,7 +157,7 @@ export function drawVelocityFigure(ctx: ReportContext, layout: SectionLayout): S
   plot.xAxis('Distance along line x (m)');
   plot.yAxis('Elevation (m)', { target: 5 });
   verticalColourBar(doc, { stops: VELOCITY_STOPS, min: range.min, max: range.max, title: 'Velocity (m/s)' }, plot.right + 12, plot.box.top, 9, plot.box.height);
-  return { interfaces: layers.some((l) => l.base.length > 0), contourStepMs: stepMs, exaggeration: layout.exaggeration, velocityRange: range };
+  return { interfaces: layers.some((l) => l.base.length > 0), contourStepMs: stepMs, exaggeration: layout.exaggeration, velocityRange: range, holes: holes.length };
 }
 
 /** Velocity range over ground nodes; widened a little when the ground is uniform. */
