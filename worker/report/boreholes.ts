@@ -32,7 +32,7 @@ export function drawBoreholes<K extends string>(ctx: PageFlow<K>, key: K, holes:
   const pits = holes.filter((h) => h.kind === 'trial_pit').length;
   paragraph(
     ctx,
-    `${count(holes.length - pits, 'borehole')} and ${count(pits, 'trial pit')} on the line, as logged by the project team (depth below ground where each material begins; ` +
+    `${[count(holes.length - pits, 'borehole'), count(pits, 'trial pit')].filter(Boolean).join(' and ')} on the line, as logged by the project team (depth below ground where each material begins; ` +
       'ground elevation as logged, else from the stations).',
   );
   ctx.y += 2;
@@ -98,7 +98,8 @@ export function drawBoreholes<K extends string>(ctx: PageFlow<K>, key: K, holes:
   ]);
 }
 
-const count = (n: number, what: string): string => `${n === 0 ? 'No' : n} ${what}${n === 1 ? '' : 's'}`;
+/** "1 borehole", "3 trial pits"; empty for none. */
+const count = (n: number, what: string): string => (n === 0 ? '' : `${n} ${what}${n === 1 ? '' : 's'}`);
 const signed = (d: number): string => `${d > 0 ? '+' : ''}${fixed(d, 1)}`;
 /** A table header short enough for its column. */
 const short = (name: string): string => (name.length > 22 ? `${name.slice(0, 21)}…` : name);

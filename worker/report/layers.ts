@@ -5,9 +5,16 @@
  */
 import { readInterpretationRecord, type InterpretationRecord } from '../../shared/layers/record';
 import type { ReportContext } from './context';
-import { bullets, caption, paragraph, sectionHeading } from './flow';
+import { bullets, caption, captionHeight, paragraph, sectionHeading } from './flow';
 import { fixed, plain } from './format';
 import { drawTable } from './table';
+import { groundAt } from '../../shared/boreholes';
+import { lineRange } from './line-geometry';
+import { dot, holeMark, shotMark, stationMark } from './markers';
+import { Plot } from './plot';
+import { COLOUR, CONTENT, SIZE } from './style';
+import { label } from './text';
+import { niceStep } from './ticks';
 
 const METHOD_TEXT: Record<InterpretationRecord['method'], string> = {
   grm: 'the generalized reciprocal method (Palmer 1980, 1981): velocity-analysis and time-depth functions from reversed shots, at the XY whose velocity-analysis functions lie closest to straight lines',
@@ -52,6 +59,8 @@ export function drawLayers(ctx: ReportContext): void {
     rows,
   });
 
+  drawDepthFigure(ctx, record);
+
   ctx.ensureSpace(60);
   const table = caption(ctx, 'Table', 'Vertical depth of each refractor below the ground at each geophone (m), as interpreted.');
   ctx.y -= 8;
@@ -75,4 +84,66 @@ export function drawLayers(ctx: ReportContext): void {
   ];
   ctx.y += 4;
   bullets(ctx, items);
+}
+
+/** Colours of refractors 1, 2, … in the depth figure (dark enough on white; our own choice). */
+const REFRACTOR_COLOURS = ['#1d4e89', '#8a3b12', '#2f6b3a'];
+
+/**
+ * The depth section of the interpretation: the model's ground, each refractor at its interpreted
+ * elevation under the geophones (a point per geophone), the shots, and the boreholes and trial pits
+ * with their logged contacts, at a modest vertical exaggeration stated in the caption.
+ */
+function drawDepthFigure(ctx: ReportContext, record: InterpretationRecord): void {
+  const { doc, model, input } = ctx;
+  const x = lineRange(model);
+  const refractors = [...new Set(record.depths.map((d) => d[1]))].sort((a, b) => a - b);
+  const ground = (at: number) => model.surfaceZ(at);
+  const zs = [...record.depths.map(([at, , d]) => ground(at) - d), ...input.stations.map((s) => s.z)];
+  for (const h of input.boreholes ?? []) zs.push((h.groundZ ?? groundAt(input.stations, h.x) ?? ground(h.x)) - Math.max(0, ...h.contacts.map((c) => c.depth)));
+  const step = niceStep((Math.max(...zs) - Math.min(...zs)) / 4 || 1);
+  const y = { min: Math.floor(Math.min(...zs) / step) * step - step / 2, max: Math.ceil(Math.max(...zs) / step) * step + step / 2 };
+  const width = CONTENT.width - 52;
+  // As flat as the page allows, at most 1:1 steeper than true scale by a whole factor.
+  const trueHeight = (width * (y.max - y.min)) / (x.max - x.min);
+  const exaggeration = Math.max(1, Math.ceil(120 / Math.max(trueHeight, 1e-6)));
+  const height = Math.min(220, trueHeight * exaggeration);
+  const text =
+    `Depth section of the interpretation: ground surface of the model (grey), ${refractors.map((n) => `refractor ${n}`).join(', ')} at the interpreted elevation under each geophone (points joined), stations as triangles, shots as stars` +
+    `${input.boreholes?.length ? ', boreholes and trial pits as dark columns with a tick at each logged contact (longer at the top of rock)' : ''}. ` +
+    `Elevation and distance along the line in metres; ${exaggeration === 1 ? 'true scale' : `vertical exaggeration ${exaggeration}:1`}.`;
+  ctx.ensureSpace(height + 56 + captionHeight(ctx, text));
+  const plot = new Plot(doc, { left: CONTENT.left + 44, top: ctx.y + 10, width, height }, x, y);
+  plot.clip();
+  const groundLine: number[] = [];
+  for (let k = 0; k <= 200; k++) {
+    const at = x.min + ((x.max - x.min) * k) / 200;
+    groundLine.push(at, ground(at));
+  }
+  doc.save().lineWidth(1.2).strokeColor(COLOUR.muted);
+  plot.polyline(groundLine);
+  doc.stroke().restore();
+  refractors.forEach((n, k) => {
+    const pts = record.depths.filter((d) => d[1] === n).sort((a, b) => a[0] - b[0]);
+    const colour = REFRACTOR_COLOURS[k % REFRACTOR_COLOURS.length];
+    doc.save().lineWidth(1).strokeColor(colour);
+    plot.polyline(pts.flatMap(([at, , d]) => [at, ground(at) - d]));
+    doc.stroke().restore();
+    for (const [at, , d] of pts) dot(doc, plot.px(at), plot.py(ground(at) - d), 1.4, colour);
+  });
+  plot.restore();
+  for (const s of input.stations) if (s.x >= x.min && s.x <= x.max) stationMark(doc, plot.px(s.x), plot.py(s.z), 3.5);
+  for (const s of input.shots) if (s.sourceX >= x.min && s.sourceX <= x.max) shotMark(doc, plot.px(s.sourceX), plot.py(s.sourceZ ?? ground(s.sourceX)), 3.5);
+  for (const h of input.boreholes ?? []) {
+    if (h.x < x.min || h.x > x.max) continue;
+    const top = h.groundZ ?? groundAt(input.stations, h.x) ?? ground(h.x);
+    const deepest = Math.max(0, ...h.contacts.map((c) => c.depth));
+    holeMark(doc, plot.px(h.x), plot.py(top), plot.py(top - deepest), h.contacts.map((c) => ({ y: plot.py(top - c.depth), rockTop: c.rockTop })));
+    label(doc, h.name, plot.px(h.x), plot.py(top) - 7, { size: SIZE.tick - 1, align: 'center' });
+  }
+  plot.frame();
+  plot.xAxis('Distance along line x (m)');
+  plot.yAxis('Elevation (m)', { target: 4 });
+  ctx.y += height + 10 + 40;
+  caption(ctx, 'Figure', text);
 }
