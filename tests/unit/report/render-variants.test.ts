@@ -112,6 +112,7 @@ describe('PDF summary of a model saved from the layer methods', () => {
     const file = { ...base.model.file, interpretation: interpretationRecord(result, 'exact.picks.csv revision 0', 3) };
     const { flow } = await textOf({ ...base, model: { ...base.model, file } }, 'layers');
     expect(flow).toContain('5 Layer interpretation behind the model');
+    expect(flow).toContain('Depth section of the interpretation: ground surface of the model (grey), refractor 1 at the interpreted elevation under each geophone');
     expect(flow).toContain('generalized reciprocal method (Palmer 1980, 1981)');
     expect(flow).toContain(`XY = ${plainNumber(result.xy!)} m`);
     expect(flow).toContain('3 picks were assigned to a refractor by hand');
