@@ -6,6 +6,7 @@
  * channel — the rule of `npm run pick --stations`.
  */
 import { createHash } from 'node:crypto';
+import type { EntityManager } from 'typeorm';
 import { readRecord, RecordFormatError, type SeismicRecord } from '../../shared/records';
 import type { PicksFromRecordsBody, RecordDetailView, RecordGeometryBody, RecordSummaryView, RecordTraceView } from '../../shared/schemas/records';
 import { importPicks, type ImportedPickSet } from './importPicks';
@@ -183,6 +184,8 @@ const csvField = (text: string): string => (/[",\n]/.test(text) ? `"${text.repla
 /**
  * Picks made on a line's records, stored as a new pick set exactly like an uploaded pick file
  * (FORMATS.md §2 text as its original; the same checks, QC and revision 0), linked to the records.
+ * With `replaces`, the new set is the next version of that pick set of the line: the old one is
+ * retired in the same transaction (hidden from new work, kept for the runs that used it).
  */
 export async function picksFromRecords(actorId: string, projectId: string, lineId: string, body: PicksFromRecordsBody): Promise<ImportedPickSet> {
   const rows: { id: string }[] = await dataSource.query('SELECT id FROM records WHERE line_id = $1 AND id = ANY($2::uuid[])', [lineId, body.recordIds]);
@@ -196,5 +199,16 @@ export async function picksFromRecords(actorId: string, projectId: string, lineI
   const fileName = `${body.name.replace(/[^\w.\- ]+/g, '_')}.picks.csv`;
   return importPicks(actorId, projectId, lineId, fileName, Buffer.from(text), async (em, pickSetId) => {
     await em.query('INSERT INTO pick_set_records (pick_set_id, record_id) SELECT $1, unnest($2::uuid[]) ON CONFLICT DO NOTHING', [pickSetId, body.recordIds]);
+    if (body.replaces) await retireReplaced(em, actorId, projectId, lineId, body.replaces, pickSetId, fileName);
   });
+}
+
+async function retireReplaced(em: EntityManager, actorId: string, projectId: string, lineId: string, oldId: string, newId: string, newName: string): Promise<void> {
+  const [old] = await em.query('SELECT retired_at FROM pick_sets WHERE id = $1 AND line_id = $2 FOR UPDATE', [oldId, lineId]);
+  const refuse = (message: string) => new HttpError(422, 'validation_failed', `replaces: ${message}`, [{ path: 'replaces', message }]);
+  if (!old) throw refuse('no pick set of this line has that id');
+  if (old.retired_at) throw refuse('that pick set is already retired; save as a new pick set instead');
+  const reason = `replaced by ${newName}, picked on the records`;
+  await em.query('UPDATE pick_sets SET retired_at = now(), retired_by = $2, retire_reason = $3 WHERE id = $1', [oldId, actorId, reason]);
+  await audit(em, { actorId, action: 'pickset.retire', objectType: 'pick_set', objectId: oldId, projectId, detail: { reason, replacedBy: newId } });
 }

@@ -86,5 +86,7 @@ export const picksFromRecordsBody = z.strictObject({
   name: z.string().trim().min(1, 'give the pick set a name').max(200),
   recordIds: z.array(z.uuid('not a record id')).min(1, 'no records').max(2000),
   picks: z.array(pickRowSchema).min(1, 'no picks').max(MAX_PICK_ROWS),
+  /** A pick set of the line these picks are a new version of: it is retired (kept for what used it) as the new one is stored. */
+  replaces: z.uuid('not a pick set id').optional(),
 });
 export type PicksFromRecordsBody = z.infer<typeof picksFromRecordsBody>;

@@ -2,7 +2,7 @@ import { useReducer } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router';
 import { useLine } from '../api/lines';
 import { useRecords } from '../api/records';
-import type { ProjectRole } from '../api/types';
+import { pickSetsInUse, type ProjectRole } from '../api/types';
 import { LeavePrompt } from '../components/LeavePrompt';
 import { EmptyState } from '../components/EmptyState';
 import { Loading, LoadError } from '../components/LoadState';
@@ -59,6 +59,7 @@ export function PickingPage() {
           record={record}
           onRecord={(id) => setParams({ record: id }, { replace: true })}
           canPick={canPick}
+          pickSets={pickSetsInUse(line.data.pickSets)}
           picking={picking}
           dispatch={dispatch}
         />

@@ -111,6 +111,31 @@ describe('records on a line', () => {
     expect(del.body.error).toBe('record_in_use');
   });
 
+  it('saves picks as the next version of a pick set: the old one retired in the same step, kept readable; a wrong id changes nothing', async () => {
+    const [rec] = (await tech.get(`/api/lines/${world.lineA.id}/records`)).body.filter((r: { fileName: string }) => r.fileName === 'S101.sg2');
+    const picks = [1, 2, 3].map((c) => ({ shot_id: 'S101', source_x: 0, source_z: null, receiver_x: 2.5 * c, receiver_z: null, time_ms: 4.2 + c, sigma_ms: 0.25 }));
+    const first = (await tech.post(`/api/lines/${world.lineA.id}/picksets/from-records`).set('X-CSRF-Token', tech.csrf).send({ name: 'repicked v1', recordIds: [rec.id], picks })).body;
+    const sets = async () => (await tech.get(`/api/lines/${world.lineA.id}`)).body.pickSets as { id: string; retired: { reason: string } | null }[];
+    const before = (await sets()).length;
+
+    // An id that is not a pick set of this line: refused with its path, and no new set is stored.
+    const wrong = await tech.post(`/api/lines/${world.lineA.id}/picksets/from-records`).set('X-CSRF-Token', tech.csrf).send({ name: 'repicked v2', recordIds: [rec.id], picks, replaces: rec.id });
+    expect(wrong.status).toBe(422);
+    expect(wrong.body.issues[0].path).toBe('replaces');
+    expect((await sets()).length).toBe(before);
+
+    const second = await tech.post(`/api/lines/${world.lineA.id}/picksets/from-records`).set('X-CSRF-Token', tech.csrf).send({ name: 'repicked v2', recordIds: [rec.id], picks, replaces: first.id });
+    expect(second.status).toBe(201);
+    const after = await sets();
+    expect(after.find((p) => p.id === first.id)?.retired?.reason).toBe('replaced by repicked v2.picks.csv, picked on the records');
+    expect(after.find((p) => p.id === second.body.id)?.retired).toBeNull();
+    expect((await tech.get(`/api/picksets/${first.id}`)).status).toBe(200); // kept for what used it
+    // Replacing it again is refused: it is already retired.
+    const again = await tech.post(`/api/lines/${world.lineA.id}/picksets/from-records`).set('X-CSRF-Token', tech.csrf).send({ name: 'repicked v3', recordIds: [rec.id], picks, replaces: first.id });
+    expect(again.status).toBe(422);
+    expect(again.body.message).toMatch(/already retired/);
+  });
+
   it('sets a missing shot position and deletes an unlinked record', async () => {
     const [rec] = (await tech.get(`/api/lines/${world.lineA.id}/records`)).body.filter((r: { fileName: string }) => r.fileName === 'S103.sg2');
     expect((await tech.patch(`/api/records/${rec.id}`).set('X-CSRF-Token', tech.csrf).send({})).status).toBe(400);

@@ -129,6 +129,19 @@ describe('records tab and first-break picking', () => {
     const after = await api(page, 'GET', `/api/lines/${lineId}/records`);
     expect((after.body as unknown as { id: string; pickSetIds: string[] }[]).find((r) => r.id === record.id)!.pickSetIds).toEqual([pickSetId]);
 
+    // A correction saved as the next version of that set: the first one is retired, kept readable.
+    await page.getByTestId('record-canvas').click();
+    await page.keyboard.press('ArrowUp');
+    await page.getByTestId('save-picks-as').selectOption({ label: 'A new version of Picked on X1.picks.csv' });
+    await expect.poll(() => page.getByTestId('save-picks-replaces').textContent()).toMatch(/Picked on X1\.picks\.csv will be retired/);
+    await page.getByTestId('save-picks-name').fill('Picked on X1 v2');
+    await page.getByTestId('save-picks-button').click();
+    await expect.poll(async () => (await page.getByTestId('save-picks-done').getByRole('link').getAttribute('href')) ?? '').not.toContain(pickSetId);
+    const line = await api(page, 'GET', `/api/lines/${lineId}`);
+    const sets = line.body.pickSets as unknown as { id: string; fileName: string; retired: { reason: string } | null }[];
+    expect(sets.find((p) => p.id === pickSetId)!.retired!.reason).toBe('replaced by Picked on X1 v2.picks.csv, picked on the records');
+    expect(sets.find((p) => p.fileName === 'Picked on X1 v2.picks.csv')!.retired).toBeNull();
+
     // Saved: leaving is free now.
     await page.getByRole('link', { name: demoLine.name }).click();
     await page.waitForURL(/tab=records/);

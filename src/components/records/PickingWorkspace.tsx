@@ -4,6 +4,7 @@ import { errorMessage } from '../../api/errors';
 import { recordDetailQuery, recordFileQuery, recordKeys, useRecordDetail, useRecordFile } from '../../api/records';
 import type { SeismicRecord } from '../../../shared/records';
 import type { RecordDetailView, RecordSummaryView } from '../../../shared/schemas/records';
+import type { PickSetSummary } from '../../api/types';
 import { prepareTraces } from '../../lib/traces/prepare';
 import { snapToOnset } from '../../lib/traces/snap';
 import { Button } from '../Button';
@@ -24,6 +25,8 @@ interface Props {
   record: RecordSummaryView;
   onRecord: (recordId: string) => void;
   canPick: boolean;
+  /** The line's pick sets in use: the ones the picks can be saved as a new version of. */
+  pickSets: PickSetSummary[];
   picking: PickingState;
   dispatch: Dispatch<PickingAction>;
 }
@@ -36,7 +39,7 @@ const keepHandPicks = (auto: RecordPickMarks, before: RecordPickMarks | undefine
  * keyboard and pointer picking, the automatic picker, the travel-time curves of all picks so far,
  * and saving them as a pick set.
  */
-export function PickingWorkspace({ lineId, records, record, onRecord, canPick, picking, dispatch }: Props) {
+export function PickingWorkspace({ lineId, records, record, onRecord, canPick, pickSets, picking, dispatch }: Props) {
   const queryClient = useQueryClient();
   const file = useRecordFile(record.id, record.fileName);
   const detail = useRecordDetail(record.id);
@@ -117,7 +120,7 @@ export function PickingWorkspace({ lineId, records, record, onRecord, canPick, p
             <h2 className="mb-2 font-semibold text-stone-900">Travel times picked so far</h2>
             <PickCurves curves={curves} />
           </section>
-          {canPick && <SavePicksPanel lineId={lineId} records={records} picking={picking} onSaved={() => dispatch({ kind: 'saved' })} />}
+          {canPick && <SavePicksPanel lineId={lineId} records={records} pickSets={pickSets} picking={picking} onSaved={() => dispatch({ kind: 'saved' })} />}
         </div>
       </div>
     </div>

@@ -3,20 +3,26 @@ import { Link } from 'react-router';
 import { useQueryClient } from '@tanstack/react-query';
 import { errorMessage } from '../../api/errors';
 import { recordDetailQuery, useSavePicksFromRecords } from '../../api/records';
-import type { PickSetCreated } from '../../api/types';
+import type { PickSetCreated, PickSetSummary } from '../../api/types';
 import type { RecordSummaryView } from '../../../shared/schemas/records';
 import { Button } from '../Button';
-import { TextField } from '../Field';
+import { SelectField, TextField } from '../Field';
 import type { PickingState } from './pickingState';
 import { pickRows } from './pickRows';
 
-/** Save every record's picks as one new pick set of the line, linked to the records it came from. */
-export function SavePicksPanel({ lineId, records, picking, onSaved }: { lineId: string; records: RecordSummaryView[]; picking: PickingState; onSaved: () => void }) {
+/**
+ * Save every record's picks as one pick set of the line, linked to the records it came from: a new
+ * set, or the next version of one in use (which is then retired, kept for the runs that used it).
+ */
+export function SavePicksPanel({ lineId, records, pickSets, picking, onSaved }: { lineId: string; records: RecordSummaryView[]; pickSets: PickSetSummary[]; picking: PickingState; onSaved: () => void }) {
   const queryClient = useQueryClient();
   const save = useSavePicksFromRecords(lineId);
   const [name, setName] = useState(() => `Picks from records ${new Date().toISOString().slice(0, 10)}`);
   const [problems, setProblems] = useState<string[]>([]);
   const [saved, setSaved] = useState<PickSetCreated | null>(null);
+  /** '' for a new pick set, else the id of the set these picks replace. */
+  const [replaces, setReplaces] = useState('');
+  const replaced = pickSets.find((p) => p.id === replaces) ?? null;
   const [preparing, setPreparing] = useState(false);
   const withPicks = records.filter((r) => picking.byRecord[r.id]?.some((m) => m !== null));
 
@@ -37,10 +43,11 @@ export function SavePicksPanel({ lineId, records, picking, onSaved }: { lineId: 
         return;
       }
       save.mutate(
-        { name: name.trim(), recordIds: result.recordIds, picks: result.rows },
+        { name: name.trim(), recordIds: result.recordIds, picks: result.rows, ...(replaced ? { replaces: replaced.id } : {}) },
         {
           onSuccess: (created) => {
             setSaved(created);
+            setReplaces('');
             setProblems(result.unplaced > 0 ? found : []);
             onSaved();
           },
@@ -61,7 +68,20 @@ export function SavePicksPanel({ lineId, records, picking, onSaved }: { lineId: 
       <p className="mt-1 text-sm text-stone-600">
         {withPicks.length} of {records.length} records picked · {picking.unsaved > 0 ? `${picking.unsaved} changes not saved` : 'nothing unsaved'}
       </p>
-      <div className="mt-3">
+      <div className="mt-3 flex flex-col gap-3">
+        <SelectField label="Save as" value={replaces} onChange={(e) => setReplaces(e.target.value)} data-testid="save-picks-as">
+          <option value="">A new pick set</option>
+          {pickSets.map((p) => (
+            <option key={p.id} value={p.id}>
+              A new version of {p.fileName}
+            </option>
+          ))}
+        </SelectField>
+        {replaced && (
+          <p data-testid="save-picks-replaces" className="text-sm text-stone-700">
+            {replaced.fileName} will be retired: hidden from new runs, inversions and checks, kept for the ones that used it. Reinstate it on the Pick sets tab if needed.
+          </p>
+        )}
         <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} data-testid="save-picks-name" />
       </div>
       <Button className="mt-3" onClick={() => void submit()} busy={preparing || save.isPending} busyLabel="Saving…" disabled={!withPicks.length} data-testid="save-picks-button">
