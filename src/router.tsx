@@ -9,6 +9,7 @@ import { ProjectPage } from './routes/ProjectPage';
 import { ProjectsPage } from './routes/ProjectsPage';
 import { RouteErrorPage } from './routes/RouteErrorPage';
 import { SignInPage } from './routes/SignInPage';
+import { ResetPasswordPage } from './routes/ResetPasswordPage';
 
 /** Shown while a lazily loaded run page arrives on a first visit straight to its address. */
 const runPageLoading = <Loading what="page" />;
@@ -19,6 +20,7 @@ const loadModelEditor = () => import('./routes/ModelEditorPage').then((m) => ({ 
 /** Every page of the client. Pages inside the shell require a signed-in user. */
 export const router = createBrowserRouter([
   { path: '/signin', element: <SignInPage />, errorElement: <RouteErrorPage /> },
+  { path: '/reset-password', element: <ResetPasswordPage />, errorElement: <RouteErrorPage /> },
   {
     element: <AppShell />,
     errorElement: <RouteErrorPage />,

@@ -22,10 +22,13 @@ export const policyTable = {
   'auth.me': 'signed_in',
   'auth.session': 'anyone',
   'auth.password.change': 'signed_in',
+  // Issue 17 item 3: a new password from a one-time link (the link's token is the credential).
+  'auth.password.reset': 'anyone',
 
   'users.list': { admin: true },
   'users.create': { admin: true },
   'users.update': { admin: true },
+  'users.password_reset': { admin: true },
   'users.directory': { admin: true, leadAnywhere: true },
 
   'projects.list': 'signed_in',

@@ -1,6 +1,6 @@
 import { Router, type Request, type Response } from 'express';
 import type { Redis } from 'ioredis';
-import { changePasswordBody, loginBody } from '../../shared/schemas/accounts';
+import { changePasswordBody, finishPasswordResetBody, loginBody } from '../../shared/schemas/accounts';
 import { config } from '../config';
 import { csrfTokenFor, startSessionToken } from '../auth/csrf';
 import { createLoginLimits, type LoginLimits } from '../auth/loginLimits';
@@ -14,6 +14,7 @@ import { authorize } from '../policies/authorize';
 import { presentMe } from '../presenters/me';
 import { audit } from '../services/audit';
 import { changeOwnPassword } from '../services/users';
+import { finishPasswordReset } from '../services/passwordResets';
 
 const invalidCredentials = () => new HttpError(401, 'invalid_credentials', 'The e-mail or password is not right.');
 
@@ -77,6 +78,12 @@ export function authRouter(redis: Redis): Router {
     const user = req.user!;
     await changeOwnPassword(user, req.sessionID, body, () => admitAttempt(limits, req, res, user.email));
     await limits.succeeded(req.ip ?? '', user.email);
+    res.status(204).end();
+  });
+
+  // A new password from a one-time link an administrator had sent (services/passwordResets.ts).
+  r.post('/auth/password-reset', authorize('auth.password.reset'), async (req, res) => {
+    await finishPasswordReset(parse(finishPasswordResetBody, req.body));
     res.status(204).end();
   });
 

@@ -19,5 +19,5 @@ import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
 export function apiRouters(redis: Redis, queue: Queue, mailer: Mailer): Router[] {
-  return [healthRouter(redis, queue), authRouter(redis), usersRouter(), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), boreholesRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter()];
+  return [healthRouter(redis, queue), authRouter(redis), usersRouter(mailer), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), boreholesRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter()];
 }

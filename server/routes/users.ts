@@ -8,8 +8,10 @@ import { isUuid } from '../policies/scopes';
 import { HttpError } from '../http/errors';
 import { presentUser } from '../presenters/user';
 import { createUser, directoryFor, updateUser } from '../services/users';
+import { startPasswordReset } from '../services/passwordResets';
+import type { Mailer } from '../mail/mailer';
 
-export function usersRouter(): Router {
+export function usersRouter(mailer: Mailer): Router {
   const r = Router();
 
   r.get('/users', authorize('users.list'), async (_req, res) => {
@@ -26,6 +28,13 @@ export function usersRouter(): Router {
   r.get('/users/directory', authorize('users.directory'), async (req, res) => {
     const entries = await directoryFor(req.user!);
     res.json(entries.map((u) => ({ id: u.id, name: u.name, email: u.email })));
+  });
+
+  // A one-time link to set a new password, mailed to the account's owner (services/passwordResets.ts).
+  r.post('/users/:userId/password-reset', authorize('users.password_reset'), async (req, res) => {
+    const userId = req.params.userId as string;
+    if (!isUuid(userId)) throw new HttpError(404, 'user_not_found', 'No such account.');
+    res.status(202).json(await startPasswordReset(req.user!.id, userId, mailer));
   });
 
   r.patch('/users/:userId', authorize('users.update'), async (req, res) => {

@@ -37,3 +37,10 @@ export type LoginBody = z.infer<typeof loginBody>;
 export type CreateUserBody = z.infer<typeof createUserBody>;
 export type UpdateUserBody = z.infer<typeof updateUserBody>;
 export type ChangePasswordBody = z.infer<typeof changePasswordBody>;
+
+/** POST /api/auth/password-reset: the token from a one-time link and the new password. */
+export const finishPasswordResetBody = z.strictObject({
+  token: z.string().min(20, 'is not a reset link token').max(200),
+  newPassword: password,
+});
+export type FinishPasswordResetBody = z.infer<typeof finishPasswordResetBody>;

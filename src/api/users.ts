@@ -39,3 +39,17 @@ export function useUpdateUser() {
     },
   });
 }
+
+/** An administrator e-mails an account's owner a one-time link to set a new password. */
+export function useSendResetLink() {
+  return useMutation({
+    mutationFn: (userId: string) => apiRequest<{ sentTo: string; expiresAt: string }>(`/api/users/${encodeURIComponent(userId)}/password-reset`, { method: 'POST' }),
+  });
+}
+
+/** The owner sets a new password from the link's token (no sign-in needed). */
+export function useFinishPasswordReset() {
+  return useMutation({
+    mutationFn: (body: { token: string; newPassword: string }) => apiRequest<void>('/api/auth/password-reset', { method: 'POST', body }),
+  });
+}

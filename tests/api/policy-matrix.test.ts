@@ -25,6 +25,9 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/auth/session': CALLERS,
   // Issue 16: a signed-in user changes their own password.
   'POST /api/auth/password': SIGNED_IN,
+  // Issue 17 item 3: an administrator mails a one-time link; anyone holding a valid link sets the password.
+  'POST /api/users/:userId/password-reset': ['admin'],
+  'POST /api/auth/password-reset': CALLERS,
   'GET /api/users': ['admin'],
   'POST /api/users': ['admin'],
   'GET /api/users/directory': ['admin', 'lead'],

@@ -70,6 +70,39 @@ describe('passwords in the browser', () => {
     await page.close();
   });
 
+  it('e-mails a one-time link that lets the owner choose a new password; the link works once (issue 17 item 3)', async () => {
+    const page = await browser.newPage();
+    await signIn(page, server.baseUrl, 'admin@timefield.test');
+    await page.goto(`${server.baseUrl}/admin/accounts`);
+    await page.getByTestId('account-client@timefield.test').getByRole('button', { name: 'New password' }).click();
+    const row = page.getByTestId('reset-link-client@timefield.test');
+    await row.getByRole('button', { name: /E-mail .* a link/ }).click();
+    await expect.poll(() => row.textContent()).toMatch(/Sent to client@timefield\.test\. The link works once/);
+    await shot(page, 'accounts-reset-link-sent');
+    // The local mail sink keeps the message; the administrator's outbox shows it.
+    const mails = (await page.evaluate(async () => (await fetch('/api/outbox')).json())) as { to: string[]; subject: string; body: string }[];
+    const mail = mails.filter((m) => m.to.includes('client@timefield.test') && m.subject === 'Set a new Timefield password').at(-1)!;
+    const link = /(http\S+#token=[\w-]+)/.exec(mail.body)![1];
+    await page.close();
+
+    const owner = await (await browser.newContext()).newPage();
+    await owner.goto(link.replace(/^http:\/\/[^/]+/, server.baseUrl));
+    await owner.getByLabel('New password', { exact: true }).fill('harbour lichen spindle nine');
+    await owner.getByLabel('New password again').fill('harbour lichen spindle nine');
+    await owner.getByTestId('reset-submit').click();
+    await owner.getByTestId('reset-done').waitFor();
+    await shot(owner, 'reset-password-done');
+    await signIn(owner, server.baseUrl, 'client@timefield.test', 'harbour lichen spindle nine');
+
+    // The same link a second time: refused in plain words.
+    const again = await (await browser.newContext()).newPage();
+    await again.goto(link.replace(/^http:\/\/[^/]+/, server.baseUrl));
+    await again.getByLabel('New password', { exact: true }).fill('another quiet meadow four');
+    await again.getByLabel('New password again').fill('another quiet meadow four');
+    await again.getByTestId('reset-submit').click();
+    await expect.poll(() => again.getByTestId('reset-error').textContent()).toMatch(/does not work any more/);
+  });
+
   it('asks before making an administrator or deactivating, says what follows, and "Keep" changes nothing (issue 17 item 4)', async () => {
     const page = await browser.newPage();
     await signIn(page, server.baseUrl, 'admin@timefield.test');
