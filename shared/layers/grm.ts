@@ -59,12 +59,15 @@ function analyse(pairs: readonly ReversedPair[], geophones: readonly number[], x
   return { velocity, rms: count ? Math.sqrt(sq / count) : Number.NaN, timeDepth };
 }
 
-/** GRM at the given XY, or at the optimum over 0 … maxXY in steps of `step`. */
-export function grm(pairs: readonly ReversedPair[], geophones: readonly number[], choice: { xy: number } | { maxXY: number; step: number }): GrmResult {
-  // The refractor velocity from the velocity-analysis function at XY = 0, where each geophone's
+/**
+ * GRM at the given XY, or at the optimum over 0 … maxXY in steps of `step`. `knownVelocity`: the
+ * refractor velocity when found otherwise (interpret.ts: on the curves reduced to a datum).
+ */
+export function grm(pairs: readonly ReversedPair[], geophones: readonly number[], choice: { xy: number } | { maxXY: number; step: number }, knownVelocity?: number): GrmResult {
+  // Else the refractor velocity from the velocity-analysis function at XY = 0, where each geophone's
   // own delay cancels: at XY > 0 the delays under X and Y differ on uneven ground and tilt the
   // function (measured: +5 % on 2.5 m of topography over a 4 m undulation, +3 % at XY = 0).
-  const velocity = analyse(pairs, geophones, 0).velocity;
+  const velocity = knownVelocity ?? analyse(pairs, geophones, 0).velocity;
   if ('xy' in choice) {
     const a = analyse(pairs, geophones, choice.xy, velocity);
     return { velocity: a.velocity, timeDepth: a.timeDepth, xy: choice.xy, scan: [{ xy: choice.xy, rms: a.rms }] };

@@ -3,6 +3,7 @@
  * layer methods. The same code serves the interpretation pages and `npm run layers`.
  */
 import { assignRefractors, segmentSide } from './assign';
+import { suggestAssignment } from './datum';
 import { refractorBranches, reversedPairs } from './branches';
 import { strippedDepth, verticalDepths } from './depth';
 import { grm } from './grm';
@@ -24,6 +25,8 @@ export function interpretLayers(shots: readonly LayerShot[], surfaceZ: (x: numbe
     throw new LayerInputError(`XY ${options.xy} m must be from 0 to the spread's length (${+spread.toFixed(3)} m)`);
   }
   const assignment = options.assignment ?? assignRefractors(shots, layers);
+  // The refractor velocities are read on the split of the curves reduced to a flat datum (datum.ts).
+  const forVelocity = options.assignment ?? suggestAssignment(shots, layers);
   const warnings: string[] = [];
   const v1 = directVelocity(shots, assignment);
   if (!Number.isFinite(v1)) throw new LayerInputError('no direct-wave picks: the top layer\'s velocity needs picks near the shots, before the first slope break');
@@ -51,11 +54,16 @@ export function interpretLayers(shots: readonly LayerShot[], surfaceZ: (x: numbe
     const pairs = reversedPairs(branches, geophones);
     if (!pairs.length) throw reversedError(n, branches);
     let times: RefractorTimes = plusMinus(pairs);
+    if (forVelocity !== assignment) {
+      const reduced = reversedPairs(refractorBranches(shots, forVelocity, n), geophones);
+      const v = reduced.length ? plusMinus(reduced).velocity : Number.NaN;
+      if (Number.isFinite(v)) times = { ...times, velocity: v };
+    }
     let usedXY = 0;
     if (options.method === 'grm') {
       const depthGuess = median([...times.timeDepth.values()]) / Math.sqrt(Math.max(1e-12, 1 / velocities[n - 1] ** 2 - 1 / times.velocity ** 2));
       const theory = 2 * depthGuess * velocities[n - 1] / Math.sqrt(Math.max(1e-9, times.velocity ** 2 - velocities[n - 1] ** 2));
-      const g = grm(pairs, geophones, options.xy !== undefined ? { xy: options.xy } : { maxXY: Math.min(spread / 4, Math.max(2 * spacing, 1.5 * theory)), step: spacing / 2 });
+      const g = grm(pairs, geophones, options.xy !== undefined ? { xy: options.xy } : { maxXY: Math.min(spread / 4, Math.max(2 * spacing, 1.5 * theory)), step: spacing / 2 }, times.velocity);
       if (g.timeDepth.size) {
         times = g;
         usedXY = g.xy;

@@ -141,7 +141,7 @@ function Interpretation({ picks, model, modelId, pickSetName, settings, hand, on
   const placement = useMemo(() => placeLine(picks, model), [picks, model]);
   const automatic = useMemo(() => (placement.ok ? automaticAssignment(placement.line, settings.layers) : null), [placement, settings.layers]);
   const assignment = useMemo(() => (placement.ok && automatic ? withHandChanges(automatic, placement.line, hand, settings.layers) : null), [placement, automatic, hand, settings.layers]);
-  const outcome = useMemo(() => (placement.ok && assignment ? interpret(placement.line, assignment, settings) : null), [placement, assignment, settings]);
+  const outcome = useMemo(() => (placement.ok && assignment ? interpret(placement.line, hand.size ? assignment : null, settings) : null), [placement, assignment, hand, settings]);
 
   if (!placement.ok) return <Problem text={placement.message} />;
   const pl = placement.line;

@@ -62,9 +62,13 @@ export function withHandChanges(automatic: Assignment, line: PlacedLine, hand: H
 
 export type Interpretation = { ok: true; result: LayerResult } | { ok: false; message: string };
 
-export function interpret(line: PlacedLine, assignment: Assignment, settings: LayerSettings): Interpretation {
+/**
+ * The interpretation with the hand assignment, or (`assignment` null: no hand changes) with the
+ * automatic one exactly as `npm run layers` makes it, velocities read on the curves reduced to a datum.
+ */
+export function interpret(line: PlacedLine, assignment: Assignment | null, settings: LayerSettings): Interpretation {
   try {
-    const result = interpretLayers(line.shots, line.surfaceZ, { method: settings.method, layers: settings.layers, xy: settings.xy ?? undefined, assignment });
+    const result = interpretLayers(line.shots, line.surfaceZ, { method: settings.method, layers: settings.layers, xy: settings.xy ?? undefined, assignment: assignment ?? undefined });
     if (!result.depths.length) return { ok: false, message: 'No geophone lies between reversed shots on the refractor, so no depth can be given.' };
     if (result.velocities.some((v) => !Number.isFinite(v))) return { ok: false, message: 'A layer velocity could not be found from these picks.' };
     return { ok: true, result };

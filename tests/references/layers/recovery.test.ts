@@ -63,6 +63,9 @@ describe.each(['grm', 'plus-minus'] as const)('%s on an undulating refractor, en
   it.each([
     { name: '4 m relief under ±2.5 m of topography', relief: 4, topography: 2.5 },
     { name: '6 m relief under flat ground', relief: 6, topography: 0 },
+    // Met since the refractor velocity is read on the curves reduced to a datum (shared/layers/datum.ts): 7 % high before.
+    { name: '6 m relief under ±2.5 m of topography', relief: 6, topography: 2.5 },
+    { name: 'a flat refractor under ±2.5 m of topography', relief: 0, topography: 2.5 },
   ])('$name: velocities within 5 %, depths within 5 % (median) and 12 % (p90)', ({ relief, topography }) => {
     const { errors, velocityError, topError } = check(undulatingSurvey(600, 2400, relief, topography, 0.0003, 5), method);
     expect(topError).toBeLessThan(0.05);
