@@ -1,5 +1,6 @@
 import { parseDecimal, splitCsvLine } from '../picks/fields';
 import { boreholeBody, type BoreholeBody } from '../schemas/boreholes';
+import { notTextMessage } from '../files/not-text';
 
 /** One problem in a borehole file, tied to its line (1-based) and column. */
 export interface BoreholeFileIssue {
@@ -26,6 +27,8 @@ const FIELD_COLUMN: Record<string, Column> = { name: 'hole', kind: 'kind', x: 'x
  * the same things. Any problem rejects the whole file; each names its line and column.
  */
 export function parseBoreholeCsv(text: string): BoreholeCsvResult {
+  const notText = notTextMessage(text, 'a borehole file (CSV text)');
+  if (notText) return { ok: false, issues: [{ line: 1, column: null, message: notText }] };
   const issues: BoreholeFileIssue[] = [];
   const lines = text.split(/\r?\n/);
   let header: Partial<Record<Column, number>> | null = null;

@@ -9,6 +9,7 @@ import { clip, readHeader, type ColumnIndex, type PickColumn } from './columns';
 import { parseDecimal, splitCsvLine } from './fields';
 import { atSource, PickSetTracker } from './pick-set';
 import type { Pick, PickError, PickParseResult } from './types';
+import { notTextKind } from '../files/not-text';
 
 export interface PickParserOptions {
   maxErrors?: number;
@@ -60,7 +61,8 @@ export function createPickParser(options: PickParserOptions = {}): PickParser {
     lineNo++;
     const text = raw.endsWith('\r') ? raw.slice(0, -1) : raw;
     if (NOT_TEXT.test(text)) {
-      stop({ line: lineNo, column: null, message: 'the file is not CSV text (binary or non-UTF-8 bytes found)' });
+      const kind = lineNo === 1 ? notTextKind(text) : null;
+      stop({ line: lineNo, column: null, message: kind ? `the file is ${kind}, not a pick file (CSV text)` : 'the file is not CSV text (binary or non-UTF-8 bytes found)' });
       return;
     }
     const trimmed = text.trim();

@@ -2,6 +2,7 @@ import { outOfRange, X_RANGE, Z_RANGE } from '../limits';
 import { parseDecimal, splitCsvLine } from '../picks/fields';
 import type { Station } from '../schemas/stations';
 import { checkStationTable, type StationIssue } from './rules';
+import { notTextMessage } from '../files/not-text';
 
 const COLUMNS = ['station', 'x', 'z'] as const;
 
@@ -12,6 +13,8 @@ export type StationCsvResult = { ok: true; stations: Station[] } | { ok: false; 
  * ignored. Any error rejects the whole table; each issue names the file line and the column.
  */
 export function parseStationCsv(text: string): StationCsvResult {
+  const notText = notTextMessage(text, 'a station table (CSV text)');
+  if (notText) return { ok: false, issues: [{ row: 0, line: 1, column: null, message: notText }] };
   const issues: StationIssue[] = [];
   const stations: Station[] = [];
   const lines = text.split(/\r?\n/);

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router';
 import { useFinishPasswordReset } from '../api/users';
 import { Button } from '../components/Button';
-import { CautionFooter } from '../components/CautionFooter';
+import { SignedOutShell } from '../components/SignedOutShell';
 import { TextField } from '../components/Field';
 import { FormAlert } from '../components/FormAlert';
 import { formProblems, hasErrors, mergeFieldErrors, type FieldErrors } from '../lib/formErrors';
@@ -32,39 +32,32 @@ export function ResetPasswordPage() {
   }
 
   return (
-    <div className="flex min-h-screen flex-col">
-      <title>Set a new password · Timefield</title>
-      <main className="flex flex-1 items-start justify-center px-4 pt-16 pb-12 sm:pt-24">
-        <div className="w-full max-w-sm">
-          <p className="text-3xl font-bold tracking-tight text-stone-900">Timefield</p>
-          {finish.isSuccess ? (
-            <div role="status" data-testid="reset-done" className="mt-8 rounded-lg border border-stone-200 bg-white p-6">
-              <h1 className="text-xl font-semibold text-stone-900">Your password is set</h1>
-              <p className="mt-2 text-stone-700">You have been signed out everywhere. Sign in with the new password.</p>
-              <Link to="/signin" className="mt-4 inline-block font-semibold">
-                Sign in
-              </Link>
-            </div>
-          ) : !token ? (
-            <p role="alert" className="mt-8 rounded-lg border border-red-300 bg-red-50 p-4 text-red-900">
-              This address holds no reset link. Open the link from the e-mail in full, or ask your administrator for a new one.
-            </p>
-          ) : (
-            <form noValidate onSubmit={onSubmit} aria-labelledby="reset-title" className="mt-8 flex flex-col gap-5 rounded-lg border border-stone-200 bg-white p-6 shadow-xs">
-              <h1 id="reset-title" className="text-xl font-semibold text-stone-900">
-                Set a new password
-              </h1>
-              <FormAlert problems={problems} testId="reset-error" />
-              <TextField label="New password" name="newPassword" type="password" autoComplete="new-password" hint="At least 10 characters; not your name or e-mail." value={password} onChange={(e) => setPassword(e.target.value)} error={fieldErrors.newPassword} autoFocus />
-              <TextField label="New password again" name="again" type="password" autoComplete="new-password" value={again} onChange={(e) => setAgain(e.target.value)} error={fieldErrors.again} />
-              <Button type="submit" busy={finish.isPending} busyLabel="Saving…" data-testid="reset-submit">
-                Set password
-              </Button>
-            </form>
-          )}
+    <SignedOutShell title="Set a new password">
+      {finish.isSuccess ? (
+        <div role="status" data-testid="reset-done" className="mt-8 rounded-lg border border-stone-200 bg-white p-6">
+          <h1 className="text-xl font-semibold text-stone-900">Your password is set</h1>
+          <p className="mt-2 text-stone-700">You have been signed out everywhere. Sign in with the new password.</p>
+          <Link to="/signin" className="mt-4 inline-block font-semibold">
+            Sign in
+          </Link>
         </div>
-      </main>
-      <CautionFooter />
-    </div>
+      ) : !token ? (
+        <p role="alert" className="mt-8 rounded-lg border border-red-300 bg-red-50 p-4 text-red-900">
+          This address holds no reset link. Open the link from the e-mail in full, or ask your administrator for a new one.
+        </p>
+      ) : (
+        <form noValidate onSubmit={onSubmit} aria-labelledby="reset-title" className="mt-8 flex flex-col gap-5 rounded-lg border border-stone-200 bg-white p-6 shadow-xs">
+          <h1 id="reset-title" className="text-xl font-semibold text-stone-900">
+            Set a new password
+          </h1>
+          <FormAlert problems={problems} testId="reset-error" />
+          <TextField label="New password" name="newPassword" type="password" autoComplete="new-password" hint="At least 10 characters; not your name or e-mail." value={password} onChange={(e) => setPassword(e.target.value)} error={fieldErrors.newPassword} autoFocus />
+          <TextField label="New password again" name="again" type="password" autoComplete="new-password" value={again} onChange={(e) => setAgain(e.target.value)} error={fieldErrors.again} />
+          <Button type="submit" busy={finish.isPending} busyLabel="Saving…" data-testid="reset-submit">
+            Set password
+          </Button>
+        </form>
+      )}
+    </SignedOutShell>
   );
 }

@@ -3,7 +3,7 @@ import { Navigate, useLocation, useNavigate } from 'react-router';
 import { useMe, useSignIn } from '../api/auth';
 import { isApiError } from '../api/errors';
 import { Button } from '../components/Button';
-import { CautionFooter } from '../components/CautionFooter';
+import { SignedOutShell } from '../components/SignedOutShell';
 import { TextField } from '../components/Field';
 import { FormAlert } from '../components/FormAlert';
 import { Loading } from '../components/LoadState';
@@ -68,48 +68,41 @@ export function SignInPage() {
   }
 
   return (
-    <div className="flex min-h-screen flex-col">
-      <title>Sign in · Timefield</title>
-      <main className="flex flex-1 items-start justify-center px-4 pt-16 pb-12 sm:pt-24">
-        <div className="w-full max-w-sm">
-          <p className="text-3xl font-bold tracking-tight text-stone-900">Timefield</p>
-          <p className="mt-1 mb-8 text-stone-600">Seismic refraction modelling for engineering site surveys.</p>
-          <form noValidate onSubmit={onSubmit} aria-labelledby="signin-title" className="flex flex-col gap-5 rounded-lg border border-stone-200 bg-white p-6 shadow-xs">
-            <h1 id="signin-title" className="text-xl font-semibold text-stone-900">
-              Sign in
-            </h1>
-            <FormAlert problems={problems} testId="signin-error" />
-            <TextField
-              label="E-mail address"
-              name="email"
-              type="email"
-              autoComplete="username"
-              inputMode="email"
-              autoFocus
-              required
-              value={email}
-              onChange={(e) => setEmail(e.target.value)}
-              error={fieldErrors.email}
-              inputRef={emailRef}
-            />
-            <TextField
-              label="Password"
-              name="password"
-              type="password"
-              autoComplete="current-password"
-              required
-              value={password}
-              onChange={(e) => setPassword(e.target.value)}
-              error={fieldErrors.password}
-              inputRef={passwordRef}
-            />
-            <Button type="submit" busy={signIn.isPending} busyLabel="Signing in…" data-testid="signin-submit">
-              Sign in
-            </Button>
-          </form>
-        </div>
-      </main>
-      <CautionFooter />
-    </div>
+    <SignedOutShell title="Sign in">
+      <p className="mt-1 mb-8 text-stone-600">Seismic refraction modelling for engineering site surveys.</p>
+      <form noValidate onSubmit={onSubmit} aria-labelledby="signin-title" className="flex flex-col gap-5 rounded-lg border border-stone-200 bg-white p-6 shadow-xs">
+        <h1 id="signin-title" className="text-xl font-semibold text-stone-900">
+          Sign in
+        </h1>
+        <FormAlert problems={problems} testId="signin-error" />
+        <TextField
+          label="E-mail address"
+          name="email"
+          type="email"
+          autoComplete="username"
+          inputMode="email"
+          autoFocus
+          required
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={fieldErrors.email}
+          inputRef={emailRef}
+        />
+        <TextField
+          label="Password"
+          name="password"
+          type="password"
+          autoComplete="current-password"
+          required
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={fieldErrors.password}
+          inputRef={passwordRef}
+        />
+        <Button type="submit" busy={signIn.isPending} busyLabel="Signing in…" data-testid="signin-submit">
+          Sign in
+        </Button>
+      </form>
+    </SignedOutShell>
   );
 }

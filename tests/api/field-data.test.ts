@@ -85,7 +85,7 @@ describe('stations, pick uploads and quality checks', () => {
       ['shot-two-positions.picks.csv', 422, { column: 'source_x', message: /A02/ }],
       ['empty.picks.csv', 422, { message: /empty/i }],
       ['header-only.picks.csv', 422, { message: /no picks|header/i }],
-      ['binary.picks.csv', 422, { message: /binary|not text/i }],
+      ['binary.picks.csv', 422, { message: /is a ZIP archive .*not a pick file \(CSV text\)/ }],
       ['duplicate-pick.picks.csv', 422, { line: 5, message: /./ }],
     ];
     for (const [name, status, expected] of badFiles) {

@@ -1,5 +1,6 @@
 import type { Grid } from '../../shared/grid';
 import type { ModelFile } from '../../shared/model';
+import type { SnapshotBorehole } from '../../server/entities/Report';
 
 /** Who, where, when and in which state: the part every report (forward run or inversion) shares. */
 export interface ReportMeta {
@@ -20,15 +21,7 @@ export interface ReportMeta {
 }
 
 /** A borehole or trial pit as the report was made (the snapshot's copy): depths in m below ground. */
-export interface ReportBorehole {
-  name: string;
-  kind: 'borehole' | 'trial_pit';
-  x: number;
-  /** Ground elevation as logged; null: taken from the stations. */
-  groundZ: number | null;
-  waterDepth: number | null;
-  contacts: { depth: number; material: string; rockTop: boolean }[];
-}
+export type ReportBorehole = SnapshotBorehole;
 
 /** One pick's residual as a report prints it (ms). */
 export interface ReportResidual {

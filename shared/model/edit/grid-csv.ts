@@ -11,6 +11,7 @@ import type { Grid } from '../../grid';
 import { MODEL_FORMAT, type ModelFile } from '../../schemas/model';
 import { parseModelFile } from '../parse';
 import type { Point } from './polyline-edit';
+import { notTextMessage } from '../../files/not-text';
 
 export interface GridCsvError {
   /** 1-based file line, null for whole-file problems. */
@@ -58,6 +59,8 @@ interface Row {
 }
 
 export function parseGridCsv(text: string): GridCsvResult {
+  const notText = notTextMessage(text, 'a velocity grid (CSV text)');
+  if (notText) return { ok: false, errors: [{ line: 1, column: null, message: notText }] };
   const errors: GridCsvError[] = [];
   const fail = (line: number | null, column: GridCsvError['column'], message: string): void => {
     if (errors.length < MAX_ERRORS) errors.push({ line, column, message });

@@ -8,6 +8,7 @@ import { parseModelFile, type ModelFile, type RasterModel } from '../../../share
 import { formatGridCsv, formatModelFile, parseGridCsv } from '../../../shared/model/edit';
 import { Button } from '../Button';
 import { downloadText, safeFileName } from './download';
+import { notTextMessage } from '../../../shared/files/not-text';
 
 export interface ImportExportProps {
   model: ModelFile;
@@ -109,6 +110,8 @@ function readCsv(text: string): ReadResult {
 }
 
 function readModelJson(text: string): ReadResult {
+  const notText = notTextMessage(text, 'a model file (JSON text)');
+  if (notText) return { ok: false, lines: [notText] };
   let json: unknown;
   try {
     json = JSON.parse(text);

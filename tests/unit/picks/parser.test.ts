@@ -103,7 +103,8 @@ describe('parsePickText: bad files are rejected whole with line and column', () 
   it('binary garbage stops at once with one error', () => {
     const errors = errorsOf(parsePickText(fixture('binary.picks.csv')));
     expect(errors).toHaveLength(1);
-    expect(errors[0]).toMatch(/^line 1: the file is not CSV text/);
+    // The fixture starts with a ZIP local file header (50 4B 03 04): named for what it is.
+    expect(errors[0]).toBe('line 1: the file is a ZIP archive (for example an .xlsx or .docx file), not a pick file (CSV text)');
   });
 
   it('wrong field count, empty required values, bad sigma, duplicate header column', () => {
