@@ -17,6 +17,8 @@ const MAX_SLOWNESS = 1 / 200;
 const THRESHOLD = Math.log(4);
 /** Largest log ratio one trace contributes (a ratio of 8). */
 const CAP = Math.log(8);
+/** Samples stacked at a time before looking for the rise. */
+const BLOCK = 256;
 
 export interface StackTrace {
   /** Demeaned samples; null for a dead trace. */
@@ -45,27 +47,33 @@ export function stackedArrivals(traces: StackTrace[], members: number[], dt: num
     const step = spread > 0 ? (2 * dt) / spread : MAX_SLOWNESS;
     const best = new Float64Array(n);
     const sum = new Float64Array(n);
-    for (let s = 0; s <= MAX_SLOWNESS + 1e-12; s += step) {
-      sum.fill(0);
-      for (const j of group) {
-        const e = cf.get(j)!;
-        const shift = Math.round((s * (traces[j].offset! - traces[i].offset!)) / dt);
-        const lo = Math.max(0, -shift), hi = Math.min(n, n - shift);
-        for (let t = lo; t < hi; t++) sum[t] += e[t + shift];
+    const shifts = (slowness: number) => group.map((j) => Math.round((slowness * (traces[j].offset! - traces[i].offset!)) / dt));
+    // Block by block from the shot on: the first rise is early in a long record, and nothing after
+    // it need be summed. A block's stack runs `long` samples past its end, for the top of a rise.
+    for (let a = from; a < n; a += BLOCK) {
+      const end = Math.min(n, a + BLOCK), b = Math.min(n, end + long);
+      best.fill(0, a, b);
+      for (let slowness = 0; slowness <= MAX_SLOWNESS + 1e-12; slowness += step) {
+        sum.fill(0, a, b);
+        shifts(slowness).forEach((shift, g) => {
+          const e = cf.get(group[g])!;
+          const hi = Math.min(b, n - shift);
+          for (let t = Math.max(a, -shift); t < hi; t++) sum[t] += e[t + shift];
+        });
+        for (let t = a; t < b; t++) {
+          const mean = sum[t] / group.length;
+          if (mean > best[t]) best[t] = mean;
+        }
       }
-      for (let t = 0; t < n; t++) {
-        const mean = sum[t] / group.length;
-        if (mean > best[t]) best[t] = mean;
+      for (let t = a; t < end; t++) {
+        if (best[t] < THRESHOLD) continue;
+        // The top of this rise: the arrival's energy is all inside the short window there.
+        let peak = t;
+        for (let u = t; u < Math.min(n, t + long); u++) if (best[u] >= best[peak]) peak = u;
+        else if (best[u] < THRESHOLD) break;
+        out[i] = peak;
+        return;
       }
-    }
-    for (let t = from; t < n; t++) {
-      if (best[t] < THRESHOLD) continue;
-      // The top of this rise: the arrival's energy is all inside the short window there.
-      let peak = t;
-      for (let u = t; u < Math.min(n, t + long); u++) if (best[u] >= best[peak]) peak = u;
-      else if (best[u] < THRESHOLD) break;
-      out[i] = peak;
-      return;
     }
   });
   return out;
