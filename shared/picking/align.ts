@@ -43,16 +43,22 @@ export function alignToNeighbours(x: (Float64Array | null)[], pick: (number | nu
     });
     current = next;
   }
-  // Last, the onset read on the pilot by the tangent to its first rise (below), where it has one.
+  // Last, the onset read by the tangent to the first rise (below) of the pilot with the trace itself
+  // added at its alignment, where it has one: the trace's own waveform counts in its own onset.
   const next = [...current];
   picked.forEach((i, k) => {
     const group = [...picked.slice(Math.max(0, k - NEIGHBOURS), k), ...picked.slice(k + 1, k + 1 + NEIGHBOURS)];
     if (group.length < 2) return;
     const pilot = pilotOf(x, current, group, w);
     const lag = pilot ? bestLag(x[i]!, current[i]!, pilot, w) : null;
-    const tangent = pilot ? tangentOnset(pilot, w) : null;
-    if (lag === null || tangent === null) return;
-    next[i] = Math.round(current[i]! + lag) - w.before + tangent + 0.5 + subSample(x[i]!, current[i]! + lag, pilot!, w);
+    if (lag === null) return;
+    const frac = subSample(x[i]!, current[i]! + lag, pilot!, w);
+    const own = [...current];
+    own[i] = current[i]! + lag;
+    const withSelf = pilotOf(x, own, [i, ...group], w);
+    const tangent = withSelf ? tangentOnset(withSelf, w) : null;
+    if (tangent === null) return;
+    next[i] = Math.round(current[i]! + lag) - w.before + tangent + 0.5 + frac;
   });
   return next;
 }

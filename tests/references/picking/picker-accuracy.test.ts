@@ -39,11 +39,11 @@ describe('first-break picker accuracy on synthetic gathers', () => {
     }
   });
 
-  // The median at SNR 5 is within a tenth of a sample of the target, not under it on every seed
-  // (measured 0.245–0.266 ms on seeds 1–3, docs/records.md); the test holds the measured level so it
-  // cannot slip back, and the target stays open.
-  it('SNR 5: median |error| within 1.1 samples on each of three noise seeds (target: 1 sample, not yet met on every seed)', () => {
-    for (const seed of [1, 2, 3]) expect(measurePicker(5, seed).median_abs_error_ms).toBeLessThanOrEqual(0.275);
+  // The median at SNR 5 meets the target on seeds 2 and 3 and misses it by a hundredth of a sample on
+  // seed 1 (0.234–0.252 ms, docs/records.md); the test holds the measured level so it cannot slip back.
+  it('SNR 5: median |error| ≤ 1 sample on seeds 2 and 3, within 1.02 samples on seed 1 (target: 1 sample)', () => {
+    for (const seed of [2, 3]) expect(measurePicker(5, seed).median_abs_error_ms).toBeLessThanOrEqual(0.25);
+    expect(measurePicker(5, 1).median_abs_error_ms).toBeLessThanOrEqual(0.255);
   });
 
   it('the gather pass finds the first break a single trace misses under a stronger later arrival', () => {
