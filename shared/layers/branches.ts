@@ -18,6 +18,11 @@ export interface Branch {
   t: Float64Array;
 }
 
+/** Every geophone position of the line's picks (to the millimetre), in order along the line. */
+export function lineGeophones(shots: readonly LayerShot[]): number[] {
+  return [...new Set(shots.flatMap((s) => Array.from({ length: s.times.length }, (_, i) => +s.receivers[2 * i].toFixed(3))))].sort((a, b) => a - b);
+}
+
 export function refractorBranches(shots: readonly LayerShot[], assignment: Assignment, refractor: number): Branch[] {
   const out: Branch[] = [];
   for (const side of shotSides(shots)) {

@@ -12,16 +12,16 @@
  * which places the picks near the breaks better on these surveys.
  */
 import { assignRefractors } from './assign';
-import { refractorBranches, reversedPairs } from './branches';
+import { lineGeophones, refractorBranches, reversedPairs } from './branches';
 import { directVelocity } from './overburden';
 import { plusMinus } from './plus-minus';
 import type { Assignment, LayerShot } from './types';
 
-export function suggestAssignment(shots: readonly LayerShot[], layers: number): Assignment {
-  const first = assignRefractors(shots, layers);
+/** `first`: the split as the curves stand, when the caller has it already. */
+export function suggestAssignment(shots: readonly LayerShot[], layers: number, first: Assignment = assignRefractors(shots, layers)): Assignment {
   const v1 = directVelocity(shots, first);
   if (!Number.isFinite(v1)) return first;
-  const geophones = [...new Set(shots.flatMap((s) => Array.from({ length: s.times.length }, (_, i) => +s.receivers[2 * i].toFixed(3))))].sort((a, b) => a - b);
+  const geophones = lineGeophones(shots);
   const speeds = [v1];
   for (let n = 1; n < layers; n++) {
     const pairs = reversedPairs(refractorBranches(shots, first, n), geophones);

@@ -4,7 +4,7 @@
  */
 import { assignRefractors, segmentSide } from './assign';
 import { suggestAssignment } from './datum';
-import { refractorBranches, reversedPairs } from './branches';
+import { lineGeophones, refractorBranches, reversedPairs } from './branches';
 import { strippedDepth, verticalDepths } from './depth';
 import { grm } from './grm';
 import { interceptRefractor, type BranchLine } from './intercept';
@@ -19,14 +19,14 @@ export function interpretLayers(shots: readonly LayerShot[], surfaceZ: (x: numbe
   const layers = options.layers;
   const withPicks = shots.filter((s) => s.times.length > 0);
   if (withPicks.length < 2) throw new LayerInputError(`the layer methods need picks from at least two shots, one from each end (there ${withPicks.length === 1 ? 'is one' : 'are none'})`);
-  const geophones = [...new Set(shots.flatMap((s) => Array.from({ length: s.times.length }, (_, i) => +s.receivers[2 * i].toFixed(3))))].sort((a, b) => a - b);
+  const geophones = lineGeophones(shots);
   const spread = geophones[geophones.length - 1] - geophones[0];
   if (options.xy !== undefined && !(options.xy >= 0 && options.xy <= spread)) {
     throw new LayerInputError(`XY ${options.xy} m must be from 0 to the spread's length (${+spread.toFixed(3)} m)`);
   }
   const assignment = options.assignment ?? assignRefractors(shots, layers);
   // The refractor velocities are read on the split of the curves reduced to a flat datum (datum.ts).
-  const forVelocity = options.assignment ?? suggestAssignment(shots, layers);
+  const forVelocity = options.assignment ?? suggestAssignment(shots, layers, assignment);
   const warnings: string[] = [];
   const v1 = directVelocity(shots, assignment);
   if (!Number.isFinite(v1)) throw new LayerInputError('no direct-wave picks: the top layer\'s velocity needs picks near the shots, before the first slope break');

@@ -1,6 +1,6 @@
 import { alignToNeighbours } from './align';
 import { stackedArrivals } from './local-stack';
-import { pickBefore, pickInWindow, pickTrace, traceCandidates, windowsOf, type PickerOptions, type PickOutcome, type TraceCandidates } from './pick-trace';
+import { firstBreak, pickBefore, pickInWindow, traceCandidates, windowsOf, type PickerOptions, type PickOutcome, type TraceCandidates } from './pick-trace';
 
 export interface GatherTrace {
   samples: Float64Array;
@@ -30,10 +30,12 @@ const NEIGHBOURS = 3;
  * without positions the traces are picked on their own. docs/records.md has the measured accuracy.
  */
 export function pickGather(traces: GatherTrace[], positions: (number | null)[] | null, options: PickerOptions = {}): PickOutcome[] {
-  const outcomes = traces.map((t) => pickTrace(t.samples, t.sampleInterval, t.delay, options));
+  // Each trace demeaned and its candidates found once, for every pass below.
+  const prepared = traces.map((t) => traceCandidates(t.samples, t.sampleInterval, t.delay, options));
+  const outcomes = prepared.map((p): PickOutcome => (p === 'dead' ? { ok: false, reason: 'dead' } : firstBreak(p, options)));
   if (!positions) return outcomes;
   const shared = oneRecord(traces);
-  if (shared) stackedPass(traces, positions, outcomes, options);
+  if (shared) stackedPass(traces, prepared, positions, outcomes, options);
   for (const side of [-1, 1]) {
     const members = traces.map((_, i) => i).filter((i) => positions[i] !== null && Math.sign(positions[i]!) === side);
     members.sort((a, b) => Math.abs(positions[a]!) - Math.abs(positions[b]!));
@@ -54,7 +56,7 @@ export function pickGather(traces: GatherTrace[], positions: (number | null)[] |
       if (!changes.length) break;
     }
   }
-  if (shared) alignPass(traces, positions, outcomes);
+  if (shared) alignPass(traces, prepared, positions, outcomes);
   return outcomes;
 }
 
@@ -67,9 +69,9 @@ function oneRecord(traces: GatherTrace[]): boolean {
 const ALIGN = { before: 0.002, after: 0.006, maxLag: 0.002 };
 
 /** Each side's picks aligned to their neighbours' waveforms (align.ts); quality and sigma kept. */
-function alignPass(traces: GatherTrace[], positions: (number | null)[], outcomes: PickOutcome[]): void {
+function alignPass(traces: GatherTrace[], prepared: (TraceCandidates | 'dead')[], positions: (number | null)[], outcomes: PickOutcome[]): void {
   const { sampleInterval: dt, delay } = traces[0];
-  const x = traces.map((t, i) => (outcomes[i].ok ? demean(t.samples) : null));
+  const x = prepared.map((p, i) => (outcomes[i].ok && p !== 'dead' ? p.x : null));
   const w = { before: Math.round(ALIGN.before / dt), after: Math.round(ALIGN.after / dt), maxLag: Math.round(ALIGN.maxLag / dt) };
   for (const side of [-1, 1]) {
     const members = traces.map((_, i) => i).filter((i) => positions[i] !== null && Math.sign(positions[i]!) === side);
@@ -84,12 +86,6 @@ function alignPass(traces: GatherTrace[], positions: (number | null)[], outcomes
       outcomes[i] = { ok: true, pick: { ...o.pick, time: delay + (p - 0.5) * dt, index: Math.round(p) } };
     }
   }
-}
-
-function demean(samples: Float64Array): Float64Array {
-  const sorted = Float64Array.from(samples).sort();
-  const median = sorted[sorted.length >> 1];
-  return samples.map((v) => v - median);
 }
 
 /** The time the neighbours' trend predicts at member k (s), or null with fewer than three picked neighbours. */
@@ -124,9 +120,8 @@ function median(v: number[]): number {
  * arrival, when the traces share one sample interval and delay (one record); the trace's own pick
  * stays where the stack finds nothing.
  */
-function stackedPass(traces: GatherTrace[], positions: (number | null)[], outcomes: PickOutcome[], options: PickerOptions): void {
+function stackedPass(traces: GatherTrace[], prepared: (TraceCandidates | 'dead')[], positions: (number | null)[], outcomes: PickOutcome[], options: PickerOptions): void {
   const { sampleInterval: dt, delay } = traces[0];
-  const prepared = traces.map((t) => traceCandidates(t.samples, dt, delay, options));
   const live = prepared.map((p) => (p === 'dead' ? null : p));
   const stackTraces = live.map((p, i) => ({ x: p?.x ?? null, offset: positions[i] === null ? null : Math.abs(positions[i]!) }));
   const { short, long } = windowsOf(dt, options);

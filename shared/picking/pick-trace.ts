@@ -39,9 +39,13 @@ const DEFAULTS = { shortWindow: 0.002, longWindow: 0.01, minRatio: 8, minSnr: 3,
  * it (docs/records.md gives the measured errors behind the mapping).
  */
 export function pickTrace(samples: Float64Array, sampleInterval: number, delay: number, options: PickerOptions = {}): PickOutcome {
+  const found = traceCandidates(samples, sampleInterval, delay, options);
+  return found === 'dead' ? { ok: false, reason: 'dead' } : firstBreak(found, options);
+}
+
+/** pickTrace's choice among a live trace's candidates. */
+export function firstBreak(found: TraceCandidates, options: PickerOptions = {}): PickOutcome {
   const o = { ...DEFAULTS, ...options };
-  const found = traceCandidates(samples, sampleInterval, delay, o);
-  if (found === 'dead') return { ok: false, reason: 'dead' };
   // The first break is the first candidate that stands out nearly as well as the best one (later
   // arrivals are often stronger; chance bursts of noise are weaker).
   const { candidates } = found;
