@@ -19,6 +19,13 @@ export class Project {
   @Column({ type: 'text', default: 'active' })
   status: ProjectStatus;
 
+  /** The project's velocity colour range (m/s), used by every section unless a viewer overrides it. */
+  @Column({ type: 'real', name: 'velocity_colour_min', default: 200 })
+  velocityColourMin: number;
+
+  @Column({ type: 'real', name: 'velocity_colour_max', default: 5000 })
+  velocityColourMax: number;
+
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
   createdAt: Date;
 }

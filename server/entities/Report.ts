@@ -34,6 +34,8 @@ export interface ReportSnapshot {
   consultancy: { name: string; address: string };
   /** The line's boreholes and trial pits (depths in m below ground); absent in snapshots taken before reports carried them. */
   boreholes?: SnapshotBorehole[];
+  /** The project's velocity colour range (m/s) when the report was made; absent in older snapshots (the section's own range is used). */
+  velocityColours?: { min: number; max: number };
 }
 
 export interface SnapshotBorehole {

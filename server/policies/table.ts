@@ -34,6 +34,8 @@ export const policyTable = {
   'projects.list': 'signed_in',
   'projects.create': { admin: true, leadAnywhere: true },
   'project.read': { admin: true, roles: MEMBERS },
+  // Issue 17 item 6: name, status and the velocity colour range of a project.
+  'project.update': { admin: true, roles: ['lead'] },
   'project.members.add': { admin: true, roles: ['lead'] },
   'project.members.remove': { admin: true, roles: ['lead'] },
   'project.members.update': { admin: true, roles: ['lead'] },

@@ -2,7 +2,7 @@ import type { Project, SurveyLine } from '../entities';
 import type { ProjectRole } from '../../shared/schemas/projects';
 
 export function presentProject(p: Project, myRole: ProjectRole | null) {
-  return { id: p.id, name: p.name, site: p.site, clientOrganisation: p.clientOrganisation, status: p.status, myRole, createdAt: p.createdAt };
+  return { id: p.id, name: p.name, site: p.site, clientOrganisation: p.clientOrganisation, status: p.status, myRole, createdAt: p.createdAt, velocityColours: { min: p.velocityColourMin, max: p.velocityColourMax } };
 }
 
 export function presentLine(l: SurveyLine) {

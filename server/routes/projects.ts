@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { addMemberBody, changeMemberRoleBody, createLineBody, createProjectBody } from '../../shared/schemas/projects';
+import { addMemberBody, changeMemberRoleBody, createLineBody, createProjectBody, updateProjectBody } from '../../shared/schemas/projects';
 import { parse } from '../http/parse';
 import { authorize } from '../policies/authorize';
 import { isUuid, projectFromParam } from '../policies/scopes';
@@ -29,6 +29,12 @@ export function projectsRouter(): Router {
       role === 'client' ? Promise.resolve([]) : projects.listLines(projectId),
     ]);
     res.json({ ...presentProject(project, role), lines: lines.map(presentLine), members });
+  });
+
+  r.patch('/projects/:projectId', authorize('project.update', projectFromParam), async (req, res) => {
+    const { projectId, role } = req.access!;
+    const project = await projects.updateProject(req.user!.id, projectId, parse(updateProjectBody, req.body));
+    res.json(presentProject(project, role));
   });
 
   r.post('/projects/:projectId/members', authorize('project.members.add', projectFromParam), async (req, res) => {

@@ -1,7 +1,7 @@
 import { dataSource } from '../db/dataSource';
 import { Project, ProjectMember, SurveyLine, User } from '../entities';
 import { HttpError } from '../http/errors';
-import type { AddMemberBody, ChangeMemberRoleBody, CreateLineBody, CreateProjectBody, ProjectRole } from '../../shared/schemas/projects';
+import type { AddMemberBody, ChangeMemberRoleBody, CreateLineBody, CreateProjectBody, ProjectRole, UpdateProjectBody } from '../../shared/schemas/projects';
 import type { MemberRow } from '../presenters/project';
 import { audit } from './audit';
 
@@ -33,6 +33,25 @@ export async function getProject(id: string): Promise<Project> {
   const project = await dataSource.getRepository(Project).findOneBy({ id });
   if (!project) throw new HttpError(404, 'not_found', 'Not found.');
   return project;
+}
+
+/** Changes a project's settings; the audit log keeps what each was before. */
+export async function updateProject(actorId: string, projectId: string, body: UpdateProjectBody): Promise<Project> {
+  return dataSource.transaction(async (em) => {
+    const project = await em.findOne(Project, { where: { id: projectId }, lock: { mode: 'pessimistic_write' } });
+    if (!project) throw new HttpError(404, 'not_found', 'Not found.');
+    const before = { name: project.name, site: project.site, clientOrganisation: project.clientOrganisation, status: project.status, velocityColours: { min: project.velocityColourMin, max: project.velocityColourMax } };
+    const { velocityColours, ...plain } = body;
+    Object.assign(project, plain);
+    if (velocityColours) {
+      project.velocityColourMin = velocityColours.min;
+      project.velocityColourMax = velocityColours.max;
+    }
+    await em.save(project);
+    const changed = Object.fromEntries(Object.keys(body).map((k) => [k, { from: before[k as keyof typeof before], to: body[k as keyof UpdateProjectBody] }]));
+    await audit(em, { actorId, action: 'project.update', objectType: 'project', objectId: projectId, projectId, detail: changed });
+    return project;
+  });
 }
 
 export async function listMembers(projectId: string): Promise<MemberRow[]> {

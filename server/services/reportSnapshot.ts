@@ -16,7 +16,7 @@ export const sourceOf = (r: { runId: string | null; inversionId: string | null }
 export async function takeReportSnapshot(em: EntityManager, source: ReportSource, preparedById: string | null): Promise<ReportSnapshot> {
   const fromRun = 'runId' in source;
   const [r] = await em.query(
-    `SELECT p.name AS project, p.site, p.client_organisation, l.id AS line_id, l.name AS line, l.notes AS line_notes,
+    `SELECT p.name AS project, p.site, p.client_organisation, p.velocity_colour_min, p.velocity_colour_max, l.id AS line_id, l.name AS line, l.notes AS line_notes,
             src.model_id, src.pick_set_revision, s.file_name, author.name AS prepared_by
      FROM ${fromRun ? '(SELECT id, line_id, pick_set_id, pick_set_revision, model_id FROM runs)' : '(SELECT id, line_id, pick_set_id, pick_set_revision, start_model_id AS model_id FROM inversions)'} src
      JOIN survey_lines l ON l.id = src.line_id JOIN projects p ON p.id = l.project_id
@@ -38,6 +38,7 @@ export async function takeReportSnapshot(em: EntityManager, source: ReportSource
     preparedBy: r.prepared_by ?? 'unknown',
     consultancy: await loadOrganisationText(em),
     boreholes: await lineBoreholes(em, r.line_id),
+    velocityColours: { min: Number(r.velocity_colour_min), max: Number(r.velocity_colour_max) },
   };
 }
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { VELOCITY_COLOUR_LIMITS } from '../colour/velocity-scale';
 
 export const PROJECT_ROLES = ['geophysicist', 'field_tech', 'lead', 'client'] as const;
 export const PROJECT_STATUSES = ['active', 'on_hold', 'closed'] as const;
@@ -13,6 +14,26 @@ export const createProjectBody = z.strictObject({
   clientOrganisation: text(160),
   status: z.enum(PROJECT_STATUSES).optional().default('active'),
 });
+
+const { min: LO, max: HI } = VELOCITY_COLOUR_LIMITS;
+const colourEnd = (end: string) =>
+  z.number({ error: `the ${end} end of the colour range must be a number of m/s` }).min(LO, `the ${end} end of the colour range must be at least ${LO} m/s`).max(HI, `the ${end} end of the colour range must be at most ${HI} m/s`);
+
+/** A project's velocity colour range (m/s): every section of the project is coloured on it by default. */
+export const velocityColoursBody = z
+  .strictObject({ min: colourEnd('slow'), max: colourEnd('fast') })
+  .refine((r) => r.max > r.min, { error: 'the fast end of the colour range must be above the slow end', path: ['max'] });
+
+/** PATCH /api/projects/:projectId: the project's settings; send only what changes. */
+export const updateProjectBody = z
+  .strictObject({
+    name: text(160).optional(),
+    site: text(160).optional(),
+    clientOrganisation: text(160).optional(),
+    status: z.enum(PROJECT_STATUSES, { error: `status must be one of ${PROJECT_STATUSES.join(', ')}` }).optional(),
+    velocityColours: velocityColoursBody.optional(),
+  })
+  .refine((b) => Object.keys(b).length > 0, { error: 'send at least one setting to change' });
 
 export const addMemberBody = z.strictObject({
   userId: z.uuid('must be an account id'),
@@ -30,6 +51,8 @@ export const createLineBody = z.strictObject({
 });
 
 export type CreateProjectBody = z.infer<typeof createProjectBody>;
+export type UpdateProjectBody = z.infer<typeof updateProjectBody>;
+export type VelocityColoursBody = z.infer<typeof velocityColoursBody>;
 export type AddMemberBody = z.infer<typeof addMemberBody>;
 export type ChangeMemberRoleBody = z.infer<typeof changeMemberRoleBody>;
 export type CreateLineBody = z.infer<typeof createLineBody>;

@@ -67,3 +67,16 @@ export function useChangeMemberRole(projectId: string) {
     },
   });
 }
+
+/** The project's settings (lead or administrator): send only what changes. */
+export function useUpdateProject(projectId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: Partial<Pick<ProjectSummary, 'name' | 'site' | 'clientOrganisation' | 'status' | 'velocityColours'>>) =>
+      apiRequest<ProjectSummary>(projectPath(projectId), { method: 'PATCH', body }),
+    onSuccess: async () => {
+      await queryClient.invalidateQueries({ queryKey: queryKeys.project(projectId) });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.projects, exact: true });
+    },
+  });
+}

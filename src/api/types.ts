@@ -42,6 +42,8 @@ export interface ProjectSummary {
   status: ProjectStatus;
   myRole: ProjectRole | null;
   createdAt: string;
+  /** The project's velocity colour range (m/s): every section is coloured on it unless the viewer overrides it. */
+  velocityColours: { min: number; max: number };
 }
 
 export interface Line {

@@ -12,6 +12,9 @@ export const canCreateProject = (me: Me): boolean => isAdmin(me) || me.projectRo
 export const canManageMembers = (me: Me, project: ProjectSummary): boolean =>
   isAdmin(me) || project.myRole === 'lead';
 
+/** Project settings (name, status, velocity colour range): as the policy table's project.update. */
+export const canEditProject = (me: Me, project: ProjectSummary): boolean => isAdmin(me) || project.myRole === 'lead';
+
 const LINE_CREATORS: ProjectRole[] = ['geophysicist', 'field_tech', 'lead'];
 export const canCreateLine = (project: ProjectSummary): boolean =>
   project.myRole !== null && LINE_CREATORS.includes(project.myRole);

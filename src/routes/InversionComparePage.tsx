@@ -11,12 +11,14 @@ import { parseCompareParam, type CompareTarget } from '../components/inversion/C
 import { DEFAULT_COVERAGE_THRESHOLD_M, thresholdCeiling } from '../components/inversion/coverageMask';
 import { InversionSectionCanvas, type InversionSectionScene } from '../components/inversion/InversionSectionCanvas';
 import { inversionTitle } from '../components/inversion/InversionHeader';
+import { SectionColoursControl } from '../components/plot/colours/SectionColoursControl';
+import { useLineSectionColours } from '../components/plot/colours/useSectionColours';
 import { SectionControls } from '../components/inversion/SectionControls';
 import { SectionLegend } from '../components/inversion/SectionLegend';
 import { TomographyCaution } from '../components/inversion/TomographyCaution';
 import { modelRange, padScene, sharedRange, unionExtent, useModelScene, type Extent } from '../components/inversion/compareScenes';
 import { coveredRange, toFloat32 } from '../components/inversion/sectionArrays';
-import { useSectionScene } from '../components/inversion/useSectionScene';
+import { useSectionArrays, useSectionScene } from '../components/inversion/useSectionScene';
 import { runLabel } from '../components/run/compare/CompareChooser';
 import { DifferenceView } from '../components/run/compare/DifferenceView';
 import { ms, num } from '../components/run/format';
@@ -116,10 +118,12 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
   const rangeA = useMemo(() => (sectionA.data ? sectionRange(sectionA.data) : null), [sectionA.data]);
   const rangeB = useMemo(() => (isInv ? (sectionB.data ? sectionRange(sectionB.data) : null) : modelRange(runGrid.data?.values ?? null)), [isInv, sectionB.data, runGrid.data]);
   const range = useMemo(() => sharedRange(rangeA, rangeB), [rangeA, rangeB]);
+  // One colour scale over both sides: the project's, the two sections' joint range, or the viewer's.
+  const colours = useLineSectionColours(inversion.lineId, range);
   const gridB = isInv ? sectionB.data?.grid : runGrid.data?.grid;
   const extent = useMemo(() => (sectionA.data && gridB ? unionExtent(sectionA.data.grid, gridB) : null), [sectionA.data, gridB]);
   const surface = (runModel.data?.model.surface as [number, number][] | undefined) ?? null;
-  const runScene = useModelScene(isInv ? undefined : runGrid.data, surface, line?.stations ?? [], runShots.data, range, contours);
+  const runScene = useModelScene(isInv ? undefined : runGrid.data, surface, line?.stations ?? [], runShots.data, range ? colours.range : null, contours, range);
 
   const bLoading = isInv ? bInv.isPending : bRun.isPending;
   const bError = isInv ? bInv.error : bRun.error;
@@ -154,21 +158,23 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
           onExaggeration={setVe}
           contours={contours}
           onContours={setContours}
-        />
+        >
+          <SectionColoursControl colours={colours} />
+        </SectionControls>
         <p className="mb-3 text-sm text-stone-700" data-testid="compare-range">
-          {range ? `Both sections use one colour scale, ${Math.round(range.min)} to ${Math.round(range.max)} m/s, so the same colour is the same velocity.` : 'Loading the sections…'}
+          {range ? `Both sections use one colour scale, ${Math.round(colours.range.min)} to ${Math.round(colours.range.max)} m/s, so the same colour is the same velocity.` : 'Loading the sections…'}
           {!isInv && ' The forward run’s model was drawn by hand, so it has no coverage mask or depth of investigation.'}
         </p>
         {(sectionA.error || sectionB.error || runGrid.error) && <LoadError error={sectionA.error ?? sectionB.error ?? runGrid.error} what="section" />}
         <div className="grid grid-cols-1 gap-6 xl:grid-cols-2">
           {sectionA.data && range ? (
-            <InversionSideView letter="A" extent={extent} inversion={inversion} section={sectionA.data} range={range} threshold={threshold} contours={contours} exaggeration={ve} />
+            <InversionSideView letter="A" extent={extent} inversion={inversion} section={sectionA.data} range={colours.range} contourRange={range} threshold={threshold} contours={contours} exaggeration={ve} />
           ) : (
             <Side letter="A" extent={extent} title={inversionTitle(inversion)} to={`/lines/${inversion.lineId}/inversions/${inversion.id}`} chi2={inversion.stats?.chi2} rmsMs={inversion.stats?.rms_ms} scene={null} exaggeration={ve} />
           )}
           {isInv ? (
             sectionB.data && range && bInv.data ? (
-              <InversionSideView letter="B" extent={extent} inversion={bInv.data} section={sectionB.data} range={range} threshold={threshold} contours={contours} exaggeration={ve} />
+              <InversionSideView letter="B" extent={extent} inversion={bInv.data} section={sectionB.data} range={colours.range} contourRange={range} threshold={threshold} contours={contours} exaggeration={ve} />
             ) : (
               <Side letter="B" extent={extent} title={bTitle} to="#" chi2={null} rmsMs={null} scene={null} exaggeration={ve} />
             )
@@ -197,9 +203,10 @@ function Comparison({ inversion, target, line }: { inversion: InversionView; tar
   );
 }
 
-function InversionSideView(props: { letter: 'A' | 'B'; extent: Extent | null; inversion: InversionView; section: InversionSectionView; range: { min: number; max: number }; threshold: number; contours: boolean; exaggeration: number }) {
-  const { inversion, section, threshold, contours, range } = props;
-  const scene = useSectionScene(section, threshold, contours, range);
+function InversionSideView(props: { letter: 'A' | 'B'; extent: Extent | null; inversion: InversionView; section: InversionSectionView; range: { min: number; max: number }; contourRange: { min: number; max: number }; threshold: number; contours: boolean; exaggeration: number }) {
+  const { inversion, section, threshold, contours, range, contourRange } = props;
+  const arrays = useSectionArrays(section);
+  const scene = useSectionScene(section, arrays, threshold, contours, range, contourRange);
   return (
     <Side
       letter={props.letter}

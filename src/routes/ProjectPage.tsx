@@ -6,6 +6,7 @@ import { Disclosure } from '../components/Disclosure';
 import { EmptyState } from '../components/EmptyState';
 import { AddMemberForm } from '../components/forms/AddMemberForm';
 import { NewLineForm } from '../components/forms/NewLineForm';
+import { ProjectColoursForm } from '../components/forms/ProjectColoursForm';
 import { LinesTable } from '../components/LinesTable';
 import { Loading, LoadError } from '../components/LoadState';
 import { MembersTable } from '../components/MembersTable';
@@ -16,7 +17,7 @@ import { Section } from '../components/Section';
 import { StatusBadge } from '../components/StatusBadge';
 import { useSignedInUser } from '../components/meContext';
 import { formatDate, ROLE_LABELS } from '../lib/format';
-import { canCreateLine, canManageMembers, canSeeLines, isAdmin } from '../lib/permissions';
+import { canCreateLine, canEditProject, canManageMembers, canSeeLines, isAdmin } from '../lib/permissions';
 
 function Fact({ term, children }: { term: string; children: ReactNode }) {
   return (
@@ -119,6 +120,12 @@ export function ProjectPage() {
         <>
           <LinesSection me={me} project={p} />
           <ReportsSection project={p} />
+          <Section
+            title="Velocity colours"
+            description="One colour scale for every velocity section of this project (models, runs, inversions, reports), so the same colour always means the same velocity. A viewer can stretch it over one section on that page."
+          >
+            <ProjectColoursForm project={p} canEdit={canEditProject(me, p)} />
+          </Section>
         </>
       )}
       <MembersSection me={me} project={p} />

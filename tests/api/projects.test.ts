@@ -97,6 +97,27 @@ describe('projects, members and lines', () => {
     expect(trail.map((r: { detail: unknown }) => r.detail)).toEqual([{ from: 'client', to: 'geophysicist' }, { from: 'geophysicist', to: 'lead' }, { from: 'lead', to: 'geophysicist' }]);
   });
 
+  it('keeps a velocity colour range per project (issue 17 item 6): default, changed by the lead, bad ranges refused in plain words', async () => {
+    const lead = await signedInAgent(t.app, emailOf('lead'), PASSWORD);
+    const path = `/api/projects/${world.projectA.id}`;
+    expect((await lead.get(path)).body.velocityColours).toEqual({ min: 200, max: 5000 });
+    const changed = await lead.patch(path).set('X-CSRF-Token', lead.csrf).send({ velocityColours: { min: 300, max: 4500 } });
+    expect(changed.status).toBe(200);
+    expect(changed.body).toMatchObject({ name: 'Project A', velocityColours: { min: 300, max: 4500 } });
+    const geophysicist = await signedInAgent(t.app, emailOf('geophysicist'), PASSWORD);
+    expect((await geophysicist.get(path)).body.velocityColours).toEqual({ min: 300, max: 4500 });
+    const upsideDown = await lead.patch(path).set('X-CSRF-Token', lead.csrf).send({ velocityColours: { min: 3000, max: 1000 } });
+    expect(upsideDown.status).toBe(400);
+    expect(upsideDown.body.issues).toEqual([{ path: 'velocityColours.max', message: 'the fast end of the colour range must be above the slow end' }]);
+    const tooFast = await lead.patch(path).set('X-CSRF-Token', lead.csrf).send({ velocityColours: { min: 300, max: 40000 } });
+    expect(tooFast.body.issues[0].message).toBe('the fast end of the colour range must be at most 10000 m/s');
+    expect((await lead.patch(path).set('X-CSRF-Token', lead.csrf).send({})).status).toBe(400);
+    expect((await lead.patch(path).set('X-CSRF-Token', lead.csrf).send({ owner: 'me' })).status).toBe(400);
+    expect((await lead.get(path)).body.velocityColours).toEqual({ min: 300, max: 4500 });
+    const [entry] = await dataSource.query(`SELECT detail FROM audit_log WHERE action = 'project.update' AND project_id = $1 ORDER BY id DESC LIMIT 1`, [world.projectA.id]);
+    expect(entry.detail.velocityColours).toEqual({ from: { min: 200, max: 5000 }, to: { min: 300, max: 4500 } });
+  });
+
   it('creates survey lines for staff, refuses duplicates and unknown fields', async () => {
     const tech = await signedInAgent(t.app, emailOf('field_tech'), PASSWORD);
     const url = `/api/projects/${world.projectA.id}/lines`;

@@ -200,7 +200,10 @@ describe('inversion pages: start form, progress, section checks, save, compare, 
     await page.getByTestId('inversion-compare-link').click();
     await page.getByTestId('compare-canvas-A').waitFor();
     await page.getByTestId('compare-canvas-B').waitFor();
-    // One colour scale over both: the lowest and highest velocity of the ray-covered ground of either section.
+    // One colour scale over both: the project's by default (issue 17 item 6), or on request the lowest and
+    // highest velocity of the ray-covered ground of either section.
+    expect(await page.getByTestId('compare-range').textContent()).toContain('one colour scale, 200 to 5000 m/s');
+    await page.getByTestId('section-colours-source').selectOption('section');
     let lo = Infinity;
     let hi = -Infinity;
     for (const id of [inversionId, other]) {

@@ -35,6 +35,7 @@ export async function gatherInversionReportInput(reportId: string, r: InversionR
       consultancyAddress: snap.consultancy.address,
       consultancyLogo: logo?.data ?? null,
       project: snap.project,
+      velocityColours: snap.velocityColours ?? null,
       line: { name: snap.line.name, notes: r.options.acquisitionNotes || snap.line.notes },
       preparedBy: snap.preparedBy,
       reviewedBy: r.reviewed_by ?? null,

@@ -79,6 +79,7 @@ export async function gatherReportInput(reportId: string): Promise<ReportInput> 
     consultancyAddress: snap.consultancy.address,
     consultancyLogo: (await loadLogo())?.data ?? null,
     project: snap.project,
+    velocityColours: snap.velocityColours ?? null,
     line: { name: snap.line.name, notes: snap.line.notes },
     preparedBy: snap.preparedBy,
     reviewedBy: r.reviewed_by ?? null,

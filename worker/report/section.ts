@@ -1,6 +1,7 @@
 /** Section "Velocity section": the model and the chosen shot's wavefronts and rays, with a layer table. */
 import type { ReportContext } from './context';
 import { caption, captionHeight, paragraph, sectionHeading } from './flow';
+import { colourText } from './colour';
 import { plain } from './format';
 import { layerOutlines } from './interfaces';
 import { CONTENT } from './style';
@@ -28,7 +29,7 @@ export function drawSection(ctx: ReportContext): void {
     'Figure',
     `Velocity section with the wavefronts of shot ${input.section.shotId} every ${plain(info.contourStepMs, 3)} ms (black lines, labels in ms), ` +
       `rays from the shot to the geophones (red), ground surface (solid)${info.interfaces ? ' and layer interfaces (dashed)' : ''}; stations as triangles, the shot as a star${info.holes ? '; boreholes and trial pits as dark columns with a tick at each logged contact (longer at the top of rock)' : ''}. ` +
-      `Colours give the velocity in m/s (${plain(info.velocityRange.min, 0)} to ${plain(info.velocityRange.max, 0)} m/s). ${ve}`,
+      `${colourText(info.colourRange, info.velocityRange, 'the model')} ${ve}`,
   );
 
   const layers = layerOutlines(m.file, ctx.model);

@@ -18,6 +18,8 @@ export interface ReportMeta {
   preparedBy: string;
   /** Name of the lead who approved it; null before approval. */
   reviewedBy: string | null;
+  /** The project's velocity colour range (m/s) for every section figure; null: each figure's own range (older reports). */
+  velocityColours?: { min: number; max: number } | null;
 }
 
 /** A borehole or trial pit as the report was made (the snapshot's copy): depths in m below ground. */

@@ -62,7 +62,10 @@ export interface SectionFigureInfo {
   interfaces: boolean;
   contourStepMs: number;
   exaggeration: number;
+  /** The velocities of the ground drawn (m/s). */
   velocityRange: { min: number; max: number };
+  /** The range the colours span: the project's, or the ground's own in an older report. */
+  colourRange: { min: number; max: number };
   /** How many boreholes and trial pits were drawn. */
   holes: number;
 }
@@ -71,7 +74,8 @@ export function drawVelocityFigure(ctx: ReportContext, layout: SectionLayout): S
   const { doc, model, input } = ctx;
   const { grid } = model;
   const plot = new Plot(doc, layout.box, lineRange(model), { min: layout.zBottom, max: layout.zTop });
-  const range = groundVelocityRange(ctx);
+  const groundRange = groundVelocityRange(ctx);
+  const range = ctx.input.velocityColours ?? groundRange;
   const ground = groundLine(model, input.model.file);
 
   // Raster: one pixel per node centred on it, clipped by the ground surface.
@@ -157,7 +161,7 @@ export function drawVelocityFigure(ctx: ReportContext, layout: SectionLayout): S
   plot.xAxis('Distance along line x (m)');
   plot.yAxis('Elevation (m)', { target: 5 });
   verticalColourBar(doc, { stops: VELOCITY_STOPS, min: range.min, max: range.max, title: 'Velocity (m/s)' }, plot.right + 12, plot.box.top, 9, plot.box.height);
-  return { interfaces: layers.some((l) => l.base.length > 0), contourStepMs: stepMs, exaggeration: layout.exaggeration, velocityRange: range, holes: holes.length };
+  return { interfaces: layers.some((l) => l.base.length > 0), contourStepMs: stepMs, exaggeration: layout.exaggeration, velocityRange: groundRange, colourRange: range, holes: holes.length };
 }
 
 /** Velocity range over ground nodes; widened a little when the ground is uniform. */

@@ -5,16 +5,45 @@ import { LazyPlot } from '../plot/LazyPlot';
 import { axisStyle } from '../line/plot/chartTheme';
 import { LAYER_CHART_CONFIG, LAYER_CHART_LAYOUT } from './chartLayout';
 import { LAYER_COLOURS } from './layerColours';
+import { layerBands } from './layerBands';
 
 /**
- * The depth section at true scale (1:1): the ground under the geophones and each refractor at its
+ * The depth section at true scale (1:1): each layer filled in its velocity's colour on the project's
+ * scale (as every velocity section), the ground under the geophones and each refractor at its
  * interpreted elevation, one point per geophone, shots marked on the ground, boreholes and trial pits
  * as columns from their ground with a mark at each logged contact.
  */
-export const DepthSection = memo(function DepthSection({ result, ground, shots, holes }: { result: LayerResult; ground: { x: number[]; z: number[] }; shots: { x: number; z: number; id: string }[]; holes: readonly BoreholeView[] }) {
+export const DepthSection = memo(function DepthSection({
+  result,
+  ground,
+  shots,
+  holes,
+  colourRange,
+}: {
+  result: LayerResult;
+  ground: { x: number[]; z: number[] };
+  shots: { x: number; z: number; id: string }[];
+  holes: readonly BoreholeView[];
+  colourRange: { min: number; max: number };
+}) {
   const data = useMemo(() => {
     const refractors = [...new Set(result.depths.map((d) => d.refractor))].sort((a, b) => a - b);
+    const deepest = Math.min(...result.depths.map((d) => d.refractorZ), ...ground.z);
+    const relief = Math.max(...ground.z) - deepest;
+    const bands = layerBands(result, ground, deepest - Math.max(3, 0.25 * relief), colourRange);
     return [
+      ...bands.map((b) => ({
+        type: 'scatter',
+        mode: 'lines',
+        fill: 'toself',
+        fillcolor: b.colour,
+        line: { width: 0 },
+        name: `Layer ${b.layer + 1}, ${Math.round(b.velocity)} m/s`,
+        legendgroup: 'bands',
+        x: b.x,
+        y: b.z,
+        hoverinfo: 'name',
+      })),
       { type: 'scatter', mode: 'lines', name: 'Ground', x: ground.x, y: ground.z, line: { color: '#57534e', width: 2 }, hovertemplate: 'ground at %{x:.2f} m: %{y:.2f} m<extra></extra>' },
       ...refractors.map((n) => {
         const pts = result.depths.filter((d) => d.refractor === n).sort((a, b) => a.x - b.x);
@@ -56,7 +85,7 @@ export const DepthSection = memo(function DepthSection({ result, ground, shots, 
         };
       }),
     ];
-  }, [result, ground, shots, holes]);
+  }, [result, ground, shots, holes, colourRange]);
   const layout = useMemo(
     () => ({
       ...LAYER_CHART_LAYOUT,

@@ -11,6 +11,8 @@ import { SelectField, TextField } from '../Field';
 import { Loading, LoadError } from '../LoadState';
 import { AssignmentChart } from './AssignmentChart';
 import { DepthSection } from './DepthSection';
+import { SectionColoursControl } from '../plot/colours/SectionColoursControl';
+import { useLineSectionColours } from '../plot/colours/useSectionColours';
 import { useBoreholes } from '../../api/boreholes';
 import { depthBetween } from '../../../shared/boreholes';
 import { BoreholeTiesTable } from '../boreholes/BoreholeTiesTable';
@@ -201,6 +203,8 @@ function Result({ result, line, model, modelId, pickSetName, lineId, canSave, ha
   const shots = useMemo(() => line.placed.map((s) => ({ x: s.source.x, z: s.source.z, id: s.shotId })), [line]);
   const refractors = result.velocities.length - 1;
   const holes = useBoreholes(lineId);
+  const ownRange = useMemo(() => ({ min: Math.min(...result.velocities), max: Math.max(...result.velocities) }), [result]);
+  const colours = useLineSectionColours(lineId, ownRange);
   // Ties to the logs: the deepest refractor, between the geophones where it was interpreted.
   const rockTop = useMemo(() => (refractors > 0 ? depthBetween(result.depths.filter((d) => d.refractor === refractors)) : null), [result, refractors]);
   return (
@@ -220,8 +224,11 @@ function Result({ result, line, model, modelId, pickSetName, lineId, canSave, ha
       <div className="mb-6">
         <LayerTable result={result} />
       </div>
-      <h4 className="mb-1 font-semibold">Depth section (true scale)</h4>
-      <DepthSection result={result} ground={ground} shots={shots} holes={holes.data ?? []} />
+      <div className="mb-1 flex flex-wrap items-end justify-between gap-3">
+        <h4 className="font-semibold">Depth section (true scale)</h4>
+        <SectionColoursControl colours={colours} testId="layers-colours" />
+      </div>
+      <DepthSection result={result} ground={ground} shots={shots} holes={holes.data ?? []} colourRange={colours.range} />
       {rockTop && <BoreholeTiesTable holes={holes.data ?? []} depthAt={rockTop} surfaceName={`refractor ${refractors} (${Math.round(result.velocities[refractors])} m/s)`} />}
       {result.method !== 'intercept' &&
         Array.from({ length: refractors }, (_, k) => (

@@ -10,7 +10,9 @@ import { DEFAULT_COVERAGE_THRESHOLD_M, thresholdCeiling } from './coverageMask';
 import { InversionSectionCanvas } from './InversionSectionCanvas';
 import { SectionControls } from './SectionControls';
 import { SectionLegend } from './SectionLegend';
-import { useSectionScene } from './useSectionScene';
+import { useSectionArrays, useSectionScene } from './useSectionScene';
+import { SectionColoursControl } from '../plot/colours/SectionColoursControl';
+import { useLineSectionColours } from '../plot/colours/useSectionColours';
 
 /** Where the ties start: a common threshold for weathered over sound rock (common practice, no source); the user sets the site's. */
 const DEFAULT_ROCK_VELOCITY = 2500;
@@ -39,7 +41,9 @@ export function InversionSectionPanel({ section, lineId }: { section: InversionS
   const [ve, setVe] = useState(2);
   const [contours, setContours] = useState(true);
   const [rockVelocity, setRockVelocity] = useState(DEFAULT_ROCK_VELOCITY);
-  const sectionScene = useSectionScene(section, threshold, contours);
+  const arrays = useSectionArrays(section);
+  const colours = useLineSectionColours(lineId, arrays.range);
+  const sectionScene = useSectionScene(section, arrays, threshold, contours, colours.range);
   const holes = useBoreholes(lineId);
   const iso = useMemo(() => isoModel(section, sectionScene.velocity), [section, sectionScene.velocity]);
   const scene = useMemo(() => ({ ...sectionScene, boreholes: holes.data ?? [] }), [sectionScene, holes.data]);
@@ -56,7 +60,9 @@ export function InversionSectionPanel({ section, lineId }: { section: InversionS
         onExaggeration={setVe}
         contours={contours}
         onContours={setContours}
-      />
+      >
+        <SectionColoursControl colours={colours} />
+      </SectionControls>
       <p className="mb-2 text-sm text-stone-700" aria-live="polite" data-testid="inversion-section-caption" data-masked={scene.maskedCount}>
         {share}% of the ground is greyed: fewer than {threshold.toFixed(1)} m of ray crossed it, so its velocity comes from the smoothing and the
         starting model, not from the picks. Below the dashed line no ray turned.

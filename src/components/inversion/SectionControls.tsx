@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useId, type ReactNode } from 'react';
 import { SelectField } from '../Field';
 
 export const EXAGGERATIONS = [1, 2, 3, 5] as const;
@@ -12,6 +12,7 @@ export function SectionControls({
   onExaggeration,
   contours,
   onContours,
+  children,
 }: {
   threshold: number;
   ceiling: number;
@@ -20,6 +21,8 @@ export function SectionControls({
   onExaggeration: (v: number) => void;
   contours: boolean;
   onContours: (on: boolean) => void;
+  /** More controls on the same row (the colour range). */
+  children?: ReactNode;
 }) {
   const sliderId = useId();
   return (
@@ -53,6 +56,7 @@ export function SectionControls({
         <input type="checkbox" checked={contours} onChange={(e) => onContours(e.target.checked)} className="accent-accent-700" data-testid="show-contours" />
         Iso-velocity contours
       </label>
+      {children}
     </div>
   );
 }

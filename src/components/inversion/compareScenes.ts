@@ -26,22 +26,24 @@ export function useModelScene(
   shots: PickSetShot[] | undefined,
   range: { min: number; max: number } | null,
   showContours: boolean,
+  contourRange: { min: number; max: number } | null = range,
 ): InversionSectionScene | null {
   return useMemo(() => {
     if (!grid || !range) return null;
+    const levels = contourRange ?? range;
     return {
       grid: grid.grid,
       velocity: grid.values,
       range,
       mask: null,
       coverage: null,
-      contours: showContours ? isoVelocityContours(grid.values, grid.grid, isoVelocityLevels(range.min, range.max)) : null,
+      contours: showContours ? isoVelocityContours(grid.values, grid.grid, isoVelocityLevels(levels.min, levels.max)) : null,
       doi: [],
       surface,
       stations: stations.map((s) => ({ x: s.x, z: s.z })),
       shots: (shots ?? []).map((s) => ({ shotId: s.shotId, x: s.sourceX, z: s.sourceZ ?? (surface ? evalPolyline(surface, s.sourceX) : Number.NaN) })),
     };
-  }, [grid, surface, stations, shots, range, showContours]);
+  }, [grid, surface, stations, shots, range, showContours, contourRange]);
 }
 
 /** Node-centre extent (m) shared by the two sides of a comparison. */

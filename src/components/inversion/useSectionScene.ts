@@ -18,14 +18,20 @@ export function useSectionArrays(section: InversionSectionView) {
  * What the canvas draws for a threshold: the mask, and contours that stop where the mask starts
  * (an iso-velocity line through cells no ray crossed would suggest knowledge the picks do not hold).
  */
-export function useSectionScene(section: InversionSectionView, threshold: number, showContours: boolean, range?: { min: number; max: number }): InversionSectionScene & { maskedCount: number } {
-  const arrays = useSectionArrays(section);
+export function useSectionScene(
+  section: InversionSectionView,
+  arrays: ReturnType<typeof useSectionArrays>,
+  threshold: number,
+  showContours: boolean,
+  colourRange: { min: number; max: number },
+  contourRange: { min: number; max: number } = arrays.range,
+): InversionSectionScene & { maskedCount: number } {
   const mask = useMemo(() => coverageMask(section.coverage, threshold), [section.coverage, threshold]);
-  const colourRange = range ?? arrays.range;
   const contours = useMemo(() => {
     if (!showContours) return null;
-    return isoVelocityContours(withoutMasked(arrays.velocity, mask), section.grid, isoVelocityLevels(colourRange.min, colourRange.max));
-  }, [showContours, arrays.velocity, mask, section.grid, colourRange.min, colourRange.max]);
+    // Levels over the section's own velocities: a wide project colour scale must not thin them out.
+    return isoVelocityContours(withoutMasked(arrays.velocity, mask), section.grid, isoVelocityLevels(contourRange.min, contourRange.max));
+  }, [showContours, arrays.velocity, mask, section.grid, contourRange.min, contourRange.max]);
   return useMemo(() => {
     let maskedCount = 0;
     for (const m of mask) maskedCount += m;

@@ -24,6 +24,9 @@ import { LayerTable } from './LayerTable';
 import { PreviewPanel } from './PreviewPanel';
 import { SavePanel } from './SavePanel';
 import { SectionView } from './SectionView';
+import { velocityRange } from './colourScale';
+import { SectionColoursControl } from '../plot/colours/SectionColoursControl';
+import { useSectionColours } from '../plot/colours/useSectionColours';
 import { defaultExaggeration } from './sectionGeometry';
 import { Toolbar } from './Toolbar';
 import type { Tool } from './tools';
@@ -75,6 +78,8 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
   }, [draft]);
   // Ties to the logs: the top of the deepest layer (the base of the one above it), below the model's ground.
   const rockTop = useMemo(() => (raster ? deepestInterfaceDepth(draft, raster.surfaceZ) : null), [draft, raster]);
+  const ownRange = useMemo(() => (raster ? velocityRange(raster.velocity, raster.active) : null), [raster]);
+  const colours = useSectionColours(line.projectId, ownRange ? { min: ownRange.lo, max: ownRange.hi } : null);
   const deferred = useDeferredValue(draft);
   const check = useMemo(() => {
     const t0 = performance.now();
@@ -194,6 +199,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
         exaggeration={exaggeration}
         onExaggeration={setExaggeration}
         readOnly={readOnly}
+        colours={<SectionColoursControl colours={colours} />}
       />
       <WithPreview job={job}>
         {(preview) => {
@@ -224,6 +230,7 @@ export function ModelEditor({ line, versions, initial, base, readOnly, onSaved }
                   onSelectShot={shots.setShotId}
                   preview={preview}
                   previewShot={shots.placed?.ok ? shots.placed.shot : null}
+                  colourRange={colours.range}
                 />
               ) : (
                 <p role="alert" className="rounded-md border border-red-300 bg-red-50 px-4 py-3 text-red-900">

@@ -10,7 +10,6 @@ import type { ModelFile, RasterModel } from '../../../shared/model';
 import { brushCells, brushStrokeCells, nearestNode, rectangleCells } from '../../../shared/model/edit';
 import type { PlacedShot } from '../../../shared/picks';
 import { ColourBar } from './ColourBar';
-import { velocityRange } from './colourScale';
 import { drawSection, heatmapImage, type SceneInterface, type SectionScene } from './drawSection';
 import { paintedOutline } from './paintedOutline';
 import { distanceToSegment, insidePlot, layoutSection, pxToX, pxToZ, xToPx, zToPx } from './sectionGeometry';
@@ -43,6 +42,8 @@ export interface SectionViewProps {
   onSelectShot: (id: string) => void;
   preview: PreviewState;
   previewShot: PlacedShot | null;
+  /** The velocity colour range (m/s): the project's unless the viewer chose another. */
+  colourRange: { min: number; max: number };
 }
 
 type Gesture =
@@ -78,7 +79,8 @@ export function SectionView(props: SectionViewProps) {
   }, []);
 
   const layout = useMemo(() => layoutSection(raster.grid, width, exaggeration), [raster.grid, width, exaggeration]);
-  const range = useMemo(() => velocityRange(raster.velocity, raster.active), [raster]);
+  const { min: colourMin, max: colourMax } = props.colourRange;
+  const range = useMemo(() => ({ lo: colourMin, hi: colourMax }), [colourMin, colourMax]);
   const heatmap = useMemo(() => {
     const t0 = performance.now();
     const image = heatmapImage(raster, range);

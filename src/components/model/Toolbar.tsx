@@ -1,4 +1,5 @@
-/** Tools, paint settings, undo/redo and the vertical exaggeration, in one row above the section. */
+/** Tools, paint settings, undo/redo, the colour range and the vertical exaggeration, in one row above the section. */
+import type { ReactNode } from 'react';
 import { Button } from '../Button';
 import { NumberInput } from './NumberInput';
 import { EXAGGERATIONS } from './sectionGeometry';
@@ -19,6 +20,8 @@ export interface ToolbarProps {
   onExaggeration: (e: number) => void;
   readOnly: boolean;
   paintInvalid?: string;
+  /** The velocity colour control, beside the exaggeration. */
+  colours?: ReactNode;
 }
 
 export function Toolbar(p: ToolbarProps) {
@@ -87,21 +90,24 @@ export function Toolbar(p: ToolbarProps) {
           </Button>
         </div>
       )}
-      <label className="ml-auto flex flex-col text-sm font-semibold text-stone-800">
-        Vertical exaggeration
-        <select
-          data-testid="exaggeration"
-          value={p.exaggeration}
-          onChange={(e) => p.onExaggeration(Number(e.target.value))}
-          className="rounded-md border border-stone-300 bg-white px-2 py-1 font-normal"
-        >
-          {EXAGGERATIONS.map((e) => (
-            <option key={e} value={e}>
-              {e}×
-            </option>
-          ))}
-        </select>
-      </label>
+      <div className="ml-auto flex flex-wrap items-end gap-x-5 gap-y-3">
+        {p.colours}
+        <label className="flex flex-col text-sm font-semibold text-stone-800">
+          Vertical exaggeration
+          <select
+            data-testid="exaggeration"
+            value={p.exaggeration}
+            onChange={(e) => p.onExaggeration(Number(e.target.value))}
+            className="rounded-md border border-stone-300 bg-white px-2 py-1 font-normal"
+          >
+            {EXAGGERATIONS.map((e) => (
+              <option key={e} value={e}>
+                {e}×
+              </option>
+            ))}
+          </select>
+        </label>
+      </div>
     </div>
   );
 }

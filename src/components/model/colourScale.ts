@@ -1,27 +1,16 @@
-/**
- * The velocity colour scale: slow ground light and warm, fast rock dark and cool, so the eye
- * reads "darker = stiffer" at once. Anchors are our own; colours between them are interpolated
- * in sRGB, which is smooth enough at this number of anchors.
- */
-const ANCHORS: [number, number, number][] = [
-  [253, 244, 200],
-  [246, 200, 110],
-  [229, 137, 64],
-  [196, 72, 62],
-  [140, 40, 88],
-  [84, 36, 110],
-  [36, 38, 92],
-];
+import { colourAt, VELOCITY_STOPS } from '../../../shared/colour/velocity-scale';
 
+/**
+ * The editor's velocity colours: the product's one scale (shared/colour/velocity-scale.ts) sampled
+ * into a 256-entry table, so a heatmap of a million cells costs one look-up per cell.
+ */
 export const LUT_SIZE = 256;
 /** 256 colours, r g b per entry. */
 export const VELOCITY_LUT: Uint8Array = (() => {
   const lut = new Uint8Array(LUT_SIZE * 3);
   for (let i = 0; i < LUT_SIZE; i++) {
-    const t = (i / (LUT_SIZE - 1)) * (ANCHORS.length - 1);
-    const k = Math.min(ANCHORS.length - 2, Math.floor(t));
-    const f = t - k;
-    for (let c = 0; c < 3; c++) lut[3 * i + c] = Math.round(ANCHORS[k][c] + (ANCHORS[k + 1][c] - ANCHORS[k][c]) * f);
+    const c = colourAt(VELOCITY_STOPS, i / (LUT_SIZE - 1));
+    for (let k = 0; k < 3; k++) lut[3 * i + k] = Math.round(c[k]);
   }
   return lut;
 })();

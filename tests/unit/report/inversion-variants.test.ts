@@ -62,6 +62,35 @@ describe('inversion report on a known answer', () => {
     expect(grey).toBe(15); // 3 columns × 5 rows
   }, 60_000);
 
+  it('colours the section on the project scale when the report carries one (issue 17 item 6), and says so', async () => {
+    // Stops of the product's velocity scale (shared/colour/velocity-scale.ts), interpolated here on their own
+    // so the check does not run through the report's colour code.
+    const stops: [number, number[]][] = [[0, [246, 231, 200]], [0.3, [223, 232, 201]], [0.6, [181, 214, 214]], [1, [127, 169, 201]]];
+    const expected = (v: number) => {
+      const t = Math.min(1, Math.max(0, (v - 300) / (3300 - 300)));
+      const k = stops.findIndex(([at]) => at >= t);
+      if (k <= 0) return stops[0][1];
+      const [t0, c0] = stops[k - 1], [t1, c1] = stops[k];
+      return c0.map((c, i) => c + ((c1[i] - c) * (t - t0)) / (t1 - t0));
+    };
+    const input = { ...knownInversionInput(), velocityColours: { min: 300, max: 3300 } };
+    const { path, pages, flow } = await render(input);
+    expect(flow).toContain('Colours give the velocity on one scale from 300 to 3300 m/s, the project\'s scale');
+    expect(flow).toContain('velocities in the covered nodes: 500 to 2500 m/s');
+    expect(flow, 'no number printed with a floating-point tail (a one-step convergence axis once read 0.6000000000000001)').not.toMatch(/\d\.\d{7,}/);
+    const page = pages.findIndex((p) => p.includes('Velocity section from the inversion')) + 1;
+    const img = readPpm(extractImages(path, page, join(dir, 'project-scale'))[0]);
+    const velocity = input.inversion.velocity as number[];
+    let checked = 0;
+    for (let i = 0; i < velocity.length; i++) {
+      const px = [img.rgb[3 * i], img.rgb[3 * i + 1], img.rgb[3 * i + 2]];
+      if (neutral(px[0], px[1], px[2])) continue; // greyed: no coverage
+      expected(velocity[i]).forEach((c, k) => expect(Math.abs(px[k] - c), `node ${i}`).toBeLessThanOrEqual(1));
+      checked++;
+    }
+    expect(checked).toBeGreaterThan(velocity.length / 2);
+  }, 60_000);
+
   it('moves the mask with the threshold given: 6 m of ray greys every node (5 m each), 0 none', async () => {
     for (const [threshold, share] of [[6, 1], [0, 0]] as const) {
       const input = { ...knownInversionInput(), coverageThreshold: threshold };

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { Grid } from '../../../shared/grid';
 import { niceTicks, sampleNearest, sectionFrame } from '../../../src/components/run/section/sectionScale';
-import { finiteRange, velocityPixels, velocityRgb } from '../../../src/components/run/section/velocityColours';
+import { finiteRange, velocityPixels } from '../../../src/components/run/section/velocityColours';
+import { colourAt, VELOCITY_STOPS } from '../../../shared/colour/velocity-scale';
 
 // The demo grid (FORMATS.md §1 convention: node (ix, iz) at x = x0 + ix·dx, z = z0 − iz·dz).
 const grid: Grid = { x0: -20, dx: 0.3, nx: 526, z0: 104, dz: 0.3, nz: 101 };
@@ -65,7 +66,7 @@ describe('sampleNearest', () => {
  * steadily darker with velocity, so "darker = faster" reads the same everywhere on the section,
  * and never darker than a level at which black lines stay legible (luminance above 0.3 — our choice).
  */
-function luminance([r, g, b]: [number, number, number]): number {
+function luminance([r, g, b]: readonly [number, number, number]): number {
   const lin = (c: number) => (c / 255 <= 0.04045 ? c / 255 / 12.92 : ((c / 255 + 0.055) / 1.055) ** 2.4);
   return 0.2126 * lin(r) + 0.7152 * lin(g) + 0.0722 * lin(b);
 }
@@ -74,7 +75,7 @@ describe('velocity colours', () => {
   it('darken steadily from slow to fast and stay light enough for black lines', () => {
     let previous = Number.POSITIVE_INFINITY;
     for (let k = 0; k <= 50; k++) {
-      const l = luminance(velocityRgb(k / 50));
+      const l = luminance(colourAt(VELOCITY_STOPS, k / 50));
       expect(l).toBeLessThan(previous);
       expect(l).toBeGreaterThan(0.3);
       previous = l;

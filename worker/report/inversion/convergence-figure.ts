@@ -27,7 +27,8 @@ export function drawConvergenceChart(ctx: InversionContext, left: number, top: n
   const gap = 56;
   const w = (width - gap) / 2;
   const iterations = { min: 0, max: Math.max(1, h[h.length - 1].iteration) };
-  const xStep = niceStep(iterations.max / 8);
+  // Iterations are whole numbers: never a tick between two (a one-step inversion got 0, 0.2, … 1).
+  const xStep = Math.max(1, niceStep(iterations.max / 8));
 
   // χ², logarithmic: plotted as log10 on a linear scale.
   const chi = h.map((r) => Math.max(r.chi2, 1e-3));

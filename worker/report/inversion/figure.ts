@@ -25,7 +25,10 @@ export const MASK_GREY: Rgb = [212, 214, 216];
 export const DOI_COLOUR = '#6b2d5c';
 
 export interface TomogramInfo {
+  /** Velocities over the covered nodes (m/s). */
   velocityRange: { min: number; max: number };
+  /** The range the colours span: the project's, or the covered range in an older report. */
+  colourRange: { min: number; max: number };
   contourStep: number;
   /** Whether the chosen iso-velocity lies inside the colour range and was drawn. */
   isoDrawn: boolean;
@@ -38,6 +41,8 @@ export function drawTomogram(ctx: InversionContext, layout: SectionLayout): Tomo
   const { doc, grid, velocity, input } = ctx;
   const plot = new Plot(doc, layout.box, ctx.xRange, { min: layout.zBottom, max: layout.zTop });
   const range = coveredRange(ctx);
+  // Colours on the project's scale; contours and the iso-velocity over the covered velocities.
+  const colours = ctx.input.velocityColours ?? range;
 
   // Raster: one pixel per node centred on it, masked nodes grey, clipped by the ground surface.
   const rgb = new Uint8Array(velocity.length * 3);
@@ -47,7 +52,7 @@ export function drawTomogram(ctx: InversionContext, layout: SectionLayout): Tomo
     if (ctx.active[i]) ground++;
     const hidden = ctx.active[i] && !ctx.covered(i);
     if (hidden) masked++;
-    const c = hidden ? MASK_GREY : colourAt(VELOCITY_STOPS, (velocity[i] - range.min) / (range.max - range.min));
+    const c = hidden ? MASK_GREY : colourAt(VELOCITY_STOPS, (velocity[i] - colours.min) / (colours.max - colours.min));
     rgb.set([c[0], c[1], c[2]], 3 * i);
   }
   plot.clip();
@@ -109,8 +114,8 @@ export function drawTomogram(ctx: InversionContext, layout: SectionLayout): Tomo
   plot.frame();
   plot.xAxis('Distance along line x (m)');
   plot.yAxis('Elevation (m)', { target: 5 });
-  verticalColourBar(doc, { stops: VELOCITY_STOPS, min: range.min, max: range.max, title: 'Velocity (m/s)' }, plot.right + 12, plot.box.top, 9, plot.box.height);
-  return { velocityRange: range, contourStep: step, isoDrawn, maskedShare: ground ? masked / ground : 0, doiDrawn };
+  verticalColourBar(doc, { stops: VELOCITY_STOPS, min: colours.min, max: colours.max, title: 'Velocity (m/s)' }, plot.right + 12, plot.box.top, 9, plot.box.height);
+  return { velocityRange: range, colourRange: colours, contourStep: step, isoDrawn, maskedShare: ground ? masked / ground : 0, doiDrawn };
 }
 
 /** Velocity range over the covered nodes (all ground nodes when none is covered); widened when uniform. */

@@ -1,5 +1,6 @@
 /** Section "Velocity section from the inversion": the final model with its coverage mask and DOI. */
 import { caption, captionHeight, paragraph, sectionHeading } from '../flow';
+import { colourText } from '../colour';
 import { count, fixed, plain } from '../format';
 import { stationSpacing } from '../line-geometry';
 import { COLOUR, CONTENT } from '../style';
@@ -44,7 +45,7 @@ export function drawInversionSection(ctx: InversionContext): void {
   caption(
     ctx,
     'Figure',
-    `Velocity section from the inversion, colours in m/s (${plain(info.velocityRange.min, 0)} to ${plain(info.velocityRange.max, 0)} m/s over the covered nodes). ` +
+    `Velocity section from the inversion. ${colourText(info.colourRange, info.velocityRange, 'the covered nodes')} ` +
       `Grey: ray coverage mask, nodes crossed by less than ${plain(ctx.threshold, 2)} m of ray in total (${plain(100 * info.maskedShare, 0)} % of the ground nodes), not resolved; its boundary dotted. ` +
       `Black lines: iso-velocity contours every ${plain(info.contourStep, 0)} m/s with labels in m/s, drawn where the rays reach` +
       (info.isoDrawn ? `; thick blue line: the ${plain(input.isoVelocity, 0)} m/s contour tabulated in section ${sectionNo(ctx, 'isoDepth')}. ` : '. ') +

@@ -3,7 +3,7 @@ import type { Grid } from '../../../../shared/grid';
 import { sToMs } from '../../../../shared/units';
 import { drawSection, type SectionScene } from './drawSection';
 import { sampleNearest, sectionFrame } from './sectionScale';
-import { finiteRange, velocityPixels } from './velocityColours';
+import { velocityPixels } from './velocityColours';
 
 /** What is drawn over the velocities; the parent memoises it, so the canvas redraws only when it changes. */
 export type SectionOverlay = Omit<SectionScene, 'image' | 'vRange' | 'grid'>;
@@ -15,28 +15,29 @@ interface SectionCanvasProps {
   width: number;
   exaggeration: number;
   label: string;
+  /** The velocity colour range (m/s). */
+  colourRange: { min: number; max: number };
 }
 
 /** One pixel per node: built once per model version, then scaled onto the section by drawImage. */
-function useVelocityImage(velocity: { grid: Grid; values: Float32Array }) {
+function useVelocityImage(velocity: { grid: Grid; values: Float32Array }, range: { min: number; max: number }) {
   return useMemo(() => {
-    const range = finiteRange(velocity.values) ?? { min: 0, max: 1 };
     const canvas = document.createElement('canvas');
     canvas.width = velocity.grid.nx;
     canvas.height = velocity.grid.nz;
     const pixels = velocityPixels(velocity.values, range);
     canvas.getContext('2d')?.putImageData(new ImageData(pixels, velocity.grid.nx, velocity.grid.nz), 0, 0);
     return { canvas, range };
-  }, [velocity]);
+  }, [velocity, range]);
 }
 
 /**
  * The section drawn on a canvas: a shot change redraws in a few milliseconds, with no chart library
  * to load. Moving the pointer reads out position, velocity and first-arrival time below the drawing.
  */
-export function SectionCanvas({ velocity, field, width, exaggeration, label, overlay }: SectionCanvasProps) {
+export function SectionCanvas({ velocity, field, width, exaggeration, label, overlay, colourRange }: SectionCanvasProps) {
   const ref = useRef<HTMLCanvasElement>(null);
-  const image = useVelocityImage(velocity);
+  const image = useVelocityImage(velocity, colourRange);
   const frame = useMemo(() => sectionFrame(velocity.grid, width, exaggeration), [velocity.grid, width, exaggeration]);
   const [readout, setReadout] = useState<string | null>(null);
 

@@ -14,6 +14,9 @@ import { useElementWidth } from '../useElementWidth';
 import { contourLevels, defaultContourInterval, finiteMax, usableIntervals } from './contourLevels';
 import { SECTION_COLOURS } from './drawSection';
 import { SectionCanvas, type SectionOverlay } from './SectionCanvas';
+import { finiteRange } from './velocityColours';
+import { SectionColoursControl } from '../../plot/colours/SectionColoursControl';
+import { useLineSectionColours } from '../../plot/colours/useSectionColours';
 import { wavefronts } from './wavefronts';
 
 const EXAGGERATIONS = [1, 2, 3, 5] as const;
@@ -52,6 +55,8 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
   const [ve, setVe] = useState<number>(2);
   const [showRays, setShowRays] = useState(true);
   const { ref, width } = useElementWidth<HTMLDivElement>();
+  const ownRange = useMemo(() => (velocity.data ? finiteRange(velocity.data.values) : null), [velocity.data]);
+  const colours = useLineSectionColours(run.lineId, ownRange);
 
   // The neighbours are one key press away: fetch them now so switching feels instant.
   const at = shotIds.indexOf(shotId);
@@ -138,6 +143,7 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
           <input type="checkbox" checked={showRays} onChange={(e) => setShowRays(e.target.checked)} className="accent-accent-700" />
           Show rays
         </label>
+        <SectionColoursControl colours={colours} />
       </div>
 
       <p data-testid="section-caption" className="mb-2 text-sm text-stone-700" aria-live="polite">
@@ -164,6 +170,7 @@ export function SectionView({ run, stations, shotIds, shotId, highlightPick, onS
             width={Math.max(320, width - 16)}
             exaggeration={ve}
             label={`Velocity section with the wavefronts and rays of shot ${shotId}, vertical exaggeration ${ve} times`}
+            colourRange={colours.range}
           />
         ) : (
           <div role="status" className="flex h-72 items-center justify-center text-stone-600">

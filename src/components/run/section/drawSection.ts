@@ -1,7 +1,7 @@
 import { drawBoreholes, type SectionHole } from '../../plot/drawBoreholes';
 import type { RayPath, Station } from '../../../api/types';
 import { sectionFrame, niceTicks, type SectionFrame } from './sectionScale';
-import { VELOCITY_STOPS } from './velocityColours';
+import { VELOCITY_CSS_STOPS } from '../../../../shared/colour/velocity-scale';
 import type { Wavefronts } from './wavefronts';
 import type { Grid } from '../../../../shared/grid';
 
@@ -218,7 +218,7 @@ function colourBar(ctx: CanvasRenderingContext2D, f: SectionFrame, range: { min:
   const top = plot.top;
   const h = plot.height;
   const gradient = ctx.createLinearGradient(0, top + h, 0, top);
-  for (const [t, colour] of VELOCITY_STOPS) gradient.addColorStop(t, colour);
+  for (const [t, colour] of VELOCITY_CSS_STOPS) gradient.addColorStop(t, colour);
   ctx.fillStyle = gradient;
   ctx.fillRect(x, top, 12, h);
   ctx.strokeStyle = SECTION_COLOURS.axis;
