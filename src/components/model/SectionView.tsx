@@ -281,14 +281,14 @@ export function SectionView(props: SectionViewProps) {
         onDoubleClick={onDoubleClick}
         onKeyDown={onKeyDown}
       />
-      <Readout hover={hover} raster={raster} preview={preview} exaggeration={layout.exaggeration} />
+      <Readout hover={hover} raster={raster} preview={preview} exaggeration={layout.exaggeration} asked={exaggeration} />
       </div>
       <ColourBar range={range} height={layout.plot.height} top={layout.plot.top} />
     </div>
   );
 }
 
-function Readout({ hover, raster, preview, exaggeration }: { hover: Hover | null; raster: RasterModel; preview: PreviewState; exaggeration: number }) {
+function Readout({ hover, raster, preview, exaggeration, asked }: { hover: Hover | null; raster: RasterModel; preview: PreviewState; exaggeration: number; asked: number }) {
   let text = 'Point at the section to read x, z and velocity.';
   if (hover) {
     const node = nearestNode(raster.grid, hover);
@@ -309,7 +309,12 @@ function Readout({ hover, raster, preview, exaggeration }: { hover: Hover | null
   return (
     <p data-testid="section-readout" className="mt-1 flex flex-wrap justify-between gap-2 text-sm tabular-nums text-stone-700" aria-live="off">
       <span>{text}</span>
-      <span className="text-stone-500">vertical exaggeration {+exaggeration.toFixed(2)}×</span>
+      <span className="text-stone-500" data-testid="section-exaggeration">
+        {/* The plot keeps a readable height: on a narrow screen (or a very long line) the drawn exaggeration differs from the one chosen. */}
+        {Math.abs(exaggeration - asked) < 0.01
+          ? `vertical exaggeration ${asked}×`
+          : `drawn at ${+exaggeration.toFixed(2)}× vertical exaggeration, not ${asked}×: at this width a ${asked}× section would be too ${exaggeration > asked ? 'flat' : 'tall'} to read`}
+      </span>
     </p>
   );
 }
