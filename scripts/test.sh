@@ -4,7 +4,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/test-services.sh
-start_test_services chromium poppler-utils python3-segyio
+start_test_services chromium poppler-utils python3-segyio python3-ezdxf proj-bin
 
 log "type-checking"
 npx tsc --noEmit -p tsconfig.json

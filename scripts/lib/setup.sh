@@ -30,6 +30,9 @@ ensure_system_packages() {
       poppler-utils) command -v pdftotext >/dev/null || missing+=(poppler-utils) ;;
       # Only the SEG-Y reference tests use it (a writer to check our reader against); the product never does.
       python3-segyio) /usr/bin/python3 -c 'import segyio' 2>/dev/null || missing+=(python3-segyio) ;;
+      # Outside checks of the exports (issue 19): a DXF reader and the PROJ command line; the product uses neither.
+      python3-ezdxf) /usr/bin/python3 -c 'import ezdxf' 2>/dev/null || missing+=(python3-ezdxf) ;;
+      proj-bin) command -v cs2cs >/dev/null || missing+=(proj-bin) ;;
     esac
   done
   if [ ${#missing[@]} -gt 0 ]; then apt_install "${missing[@]}"; fi

@@ -26,6 +26,10 @@ export class Project {
   @Column({ type: 'real', name: 'velocity_colour_max', default: 5000 })
   velocityColourMax: number;
 
+  /** EPSG code of the project's coordinate reference system (projected, metres); null until set. */
+  @Column({ type: 'integer', name: 'crs_epsg', nullable: true })
+  crsEpsg: number | null;
+
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
   createdAt: Date;
 }

@@ -16,4 +16,11 @@ export class Station {
   /** Ground elevation, m. */
   @Column({ type: 'double precision' })
   z: number;
+
+  /** Easting and northing (m) in the project's coordinate reference system; null in chainage only. */
+  @Column({ type: 'double precision', nullable: true })
+  easting: number | null;
+
+  @Column({ type: 'double precision', nullable: true })
+  northing: number | null;
 }

@@ -36,6 +36,8 @@ export const policyTable = {
   'project.read': { admin: true, roles: MEMBERS },
   // Issue 17 item 6: name, status and the velocity colour range of a project.
   'project.update': { admin: true, roles: ['lead'] },
+  // Issue 19: the list of coordinate reference systems (public reference data) for the project form.
+  'crs.search': 'signed_in',
   'project.members.add': { admin: true, roles: ['lead'] },
   'project.members.remove': { admin: true, roles: ['lead'] },
   'project.members.update': { admin: true, roles: ['lead'] },

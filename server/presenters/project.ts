@@ -1,8 +1,16 @@
 import type { Project, SurveyLine } from '../entities';
 import type { ProjectRole } from '../../shared/schemas/projects';
+import { crsByCode } from '../geo/crs';
+
+/** The project's CRS as the pages show it: code, name and area of use. */
+function crsSummary(code: number | null) {
+  if (code === null) return null;
+  const c = crsByCode(code);
+  return { code: c.code, name: c.name, area: c.area, lonLat: c.noDatumShift === null };
+}
 
 export function presentProject(p: Project, myRole: ProjectRole | null) {
-  return { id: p.id, name: p.name, site: p.site, clientOrganisation: p.clientOrganisation, status: p.status, myRole, createdAt: p.createdAt, velocityColours: { min: p.velocityColourMin, max: p.velocityColourMax } };
+  return { id: p.id, name: p.name, site: p.site, clientOrganisation: p.clientOrganisation, status: p.status, myRole, createdAt: p.createdAt, velocityColours: { min: p.velocityColourMin, max: p.velocityColourMax }, crs: crsSummary(p.crsEpsg) };
 }
 
 export function presentLine(l: SurveyLine) {

@@ -15,6 +15,7 @@ import { listPickSetSummaries } from '../services/lineSummary';
 import { listModelVersions } from '../services/models';
 import { listLineRuns } from '../services/runResults';
 import { listStationRevisions, listStations, replaceStations, stationRevision } from '../services/stations';
+import { lonLatConverter, outsideAreaIssues, projectCrs } from '../services/stationCoordinates';
 
 const STATION_FILE_BYTES = 1024 * 1024;
 
@@ -46,8 +47,9 @@ export function linesRouter(): Router {
     next();
   }, async (req, res) => {
     let stations;
+    const crs = await projectCrs(req.access!.projectId);
     if (req.file) {
-      const parsed = parseStationCsv(req.file.buffer.toString('utf8'));
+      const parsed = parseStationCsv(req.file.buffer.toString('utf8'), { lonLatToMap: lonLatConverter(crs) });
       if (!parsed.ok) throw invalidStations(parsed.issues);
       stations = parsed.stations;
     } else {
@@ -55,7 +57,7 @@ export function linesRouter(): Router {
       if (!parsed.success) {
         throw invalidStations(parsed.error.issues.map((i) => ({
           row: typeof i.path[0] === 'number' ? i.path[0] + 1 : 0,
-          column: (['station', 'x', 'z'].includes(String(i.path[1])) ? i.path[1] : null) as StationIssue['column'],
+          column: (['station', 'x', 'z', 'easting', 'northing'].includes(String(i.path[1])) ? i.path[1] : null) as StationIssue['column'],
           message: i.message,
         })));
       }
@@ -63,6 +65,8 @@ export function linesRouter(): Router {
       if (issues.length) throw invalidStations(issues);
       stations = parsed.data;
     }
+    const outside = outsideAreaIssues(stations, crs);
+    if (outside.length) throw invalidStations(outside);
     await replaceStations(req.user!.id, req.access!.projectId, req.params.lineId as string, stations);
     res.json({ stations: await listStations(req.params.lineId as string) });
   });

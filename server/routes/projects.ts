@@ -6,6 +6,7 @@ import { isUuid, projectFromParam } from '../policies/scopes';
 import { HttpError } from '../http/errors';
 import { presentLine, presentProject } from '../presenters/project';
 import * as projects from '../services/projects';
+import { searchCrs } from '../geo/crs';
 
 export function projectsRouter(): Router {
   const r = Router();
@@ -18,6 +19,12 @@ export function projectsRouter(): Router {
   r.post('/projects', authorize('projects.create'), async (req, res) => {
     const { project, role } = await projects.createProject(req.user!, parse(createProjectBody, req.body));
     res.status(201).json(presentProject(project, role));
+  });
+
+  // Coordinate reference systems a project can use (projected, metres), by EPSG code or words of the name.
+  r.get('/crs', authorize('crs.search'), (req, res) => {
+    const q = typeof req.query.q === 'string' ? req.query.q.slice(0, 80) : '';
+    res.json(searchCrs(q).map((c) => ({ code: c.code, name: c.name, area: c.area, lonLat: c.noDatumShift === null })));
   });
 
   r.get('/projects/:projectId', authorize('project.read', projectFromParam), async (req, res) => {

@@ -4,6 +4,18 @@ import { HttpError } from '../http/errors';
 import type { AddMemberBody, ChangeMemberRoleBody, CreateLineBody, CreateProjectBody, ProjectRole, UpdateProjectBody } from '../../shared/schemas/projects';
 import type { MemberRow } from '../presenters/project';
 import { audit } from './audit';
+import { crsByCode, CrsError } from '../geo/crs';
+
+/** A project's CRS must be one Timefield can compute with: 422 with the reason otherwise. */
+function checkProjectCrs(code: number): void {
+  try {
+    const crs = crsByCode(code);
+    if (crs.kind !== 'projected') throw new CrsError(`EPSG:${code} (${crs.name}) is geographic (degrees): a project needs a projected grid in metres, such as a UTM zone or a national grid.`);
+  } catch (e) {
+    if (e instanceof CrsError) throw new HttpError(422, 'unknown_crs', e.message, [{ path: 'crsEpsg', message: e.message }]);
+    throw e;
+  }
+}
 
 /** Projects the user belongs to (all projects for an admin), with the user's role in each. */
 export async function listProjectsFor(user: Express.User): Promise<{ project: Project; role: ProjectRole | null }[]> {
@@ -40,7 +52,8 @@ export async function updateProject(actorId: string, projectId: string, body: Up
   return dataSource.transaction(async (em) => {
     const project = await em.findOne(Project, { where: { id: projectId }, lock: { mode: 'pessimistic_write' } });
     if (!project) throw new HttpError(404, 'not_found', 'Not found.');
-    const before = { name: project.name, site: project.site, clientOrganisation: project.clientOrganisation, status: project.status, velocityColours: { min: project.velocityColourMin, max: project.velocityColourMax } };
+    const before = { name: project.name, site: project.site, clientOrganisation: project.clientOrganisation, status: project.status, velocityColours: { min: project.velocityColourMin, max: project.velocityColourMax }, crsEpsg: project.crsEpsg };
+    if (body.crsEpsg) checkProjectCrs(body.crsEpsg);
     const { velocityColours, ...plain } = body;
     Object.assign(project, plain);
     if (velocityColours) {

@@ -3,9 +3,13 @@ import { Station } from '../entities';
 import type { Station as StationRow } from '../../shared/schemas/stations';
 import { audit } from './audit';
 
+/** A stored station as the API shows it: easting and northing only where the line has coordinates. */
+export const stationView = ({ station, x, z, easting, northing }: Pick<Station, 'station' | 'x' | 'z' | 'easting' | 'northing'>): StationRow =>
+  easting === null || northing === null ? { station, x, z } : { station, x, z, easting, northing };
+
 export async function listStations(lineId: string): Promise<StationRow[]> {
   const rows = await dataSource.getRepository(Station).find({ where: { lineId }, order: { x: 'ASC' } });
-  return rows.map(({ station, x, z }) => ({ station, x, z }));
+  return rows.map(stationView);
 }
 
 /** An earlier station table of a line, as GET /api/lines/:lineId/stations/revisions lists it. */
@@ -27,16 +31,18 @@ export async function replaceStations(actorId: string, projectId: string, lineId
     const previous = await em.getRepository(Station).find({ where: { lineId }, order: { x: 'ASC' } });
     let kept: number | null = null;
     // A save that changes nothing keeps no copy of what it did not change.
-    const same = previous.length === stations.length && previous.every((p, i) => p.station === stations[i].station && p.x === stations[i].x && p.z === stations[i].z);
+    const same =
+      previous.length === stations.length &&
+      previous.every((p, i) => p.station === stations[i].station && p.x === stations[i].x && p.z === stations[i].z && p.easting === (stations[i].easting ?? null) && p.northing === (stations[i].northing ?? null));
     if (previous.length && !same) {
       const [{ next }] = await em.query(`SELECT coalesce(max(number), 0) + 1 AS next FROM station_revisions WHERE line_id = $1`, [lineId]);
       kept = Number(next);
       await em.query(`INSERT INTO station_revisions (line_id, number, stations, station_count, replaced_by) VALUES ($1, $2, $3, $4, $5)`, [
-        lineId, kept, JSON.stringify(previous.map(({ station, x, z }) => ({ station, x, z }))), previous.length, actorId,
+        lineId, kept, JSON.stringify(previous.map(stationView)), previous.length, actorId,
       ]);
     }
     await em.delete(Station, { lineId });
-    if (stations.length) await em.insert(Station, stations.map((s) => ({ lineId, ...s })));
+    if (stations.length) await em.insert(Station, stations.map((s) => ({ lineId, ...s, easting: s.easting ?? null, northing: s.northing ?? null })));
     await audit(em, {
       actorId,
       action: restoredFrom === null ? 'line.stations.replace' : 'line.stations.restore',

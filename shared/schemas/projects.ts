@@ -32,6 +32,8 @@ export const updateProjectBody = z
     clientOrganisation: text(160).optional(),
     status: z.enum(PROJECT_STATUSES, { error: `status must be one of ${PROJECT_STATUSES.join(', ')}` }).optional(),
     velocityColours: velocityColoursBody.optional(),
+    /** EPSG code of the project's coordinate reference system (projected, metres); null clears it. */
+    crsEpsg: z.number({ error: 'the coordinate reference system must be an EPSG code (a whole number)' }).int('the coordinate reference system must be an EPSG code (a whole number)').positive().max(999_999).nullable().optional(),
   })
   .refine((b) => Object.keys(b).length > 0, { error: 'send at least one setting to change' });
 

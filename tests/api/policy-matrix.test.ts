@@ -37,6 +37,8 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/projects/:projectId': ['admin', ...MEMBERS_A],
   // Issue 17 item 6: the project's settings (name, status, velocity colour range) are the lead's.
   'PATCH /api/projects/:projectId': ['admin', 'lead'],
+  // Issue 19: searching the EPSG list is reference data for any signed-in user.
+  'GET /api/crs': SIGNED_IN,
   'POST /api/projects/:projectId/members': ['admin', 'lead'],
   'DELETE /api/projects/:projectId/members/:userId': ['admin', 'lead'],
   // Issue 17 item 5: whoever may add and remove members changes a member's role in place.
