@@ -15,9 +15,10 @@ import { adminRouter } from './admin';
 import { organisationRouter } from './organisation';
 import type { Mailer } from '../mail/mailer';
 import { projectsRouter } from './projects';
+import { exportsRouter } from './exports';
 import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
 export function apiRouters(redis: Redis, queue: Queue, mailer: Mailer): Router[] {
-  return [healthRouter(redis, queue), authRouter(redis), usersRouter(mailer), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), boreholesRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter()];
+  return [healthRouter(redis, queue), authRouter(redis), usersRouter(mailer), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), boreholesRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter(), exportsRouter()];
 }

@@ -72,7 +72,7 @@ export function useChangeMemberRole(projectId: string) {
 export function useUpdateProject(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: Partial<Pick<ProjectSummary, 'name' | 'site' | 'clientOrganisation' | 'status' | 'velocityColours'>>) =>
+    mutationFn: (body: Partial<Pick<ProjectSummary, 'name' | 'site' | 'clientOrganisation' | 'status' | 'velocityColours'> & { crsEpsg: number | null }>) =>
       apiRequest<ProjectSummary>(projectPath(projectId), { method: 'PATCH', body }),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: queryKeys.project(projectId) });

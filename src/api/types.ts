@@ -44,6 +44,17 @@ export interface ProjectSummary {
   createdAt: string;
   /** The project's velocity colour range (m/s): every section is coloured on it unless the viewer overrides it. */
   velocityColours: { min: number; max: number };
+  /** The project's coordinate reference system; null until the lead sets one. */
+  crs: CrsSummary | null;
+}
+
+/** A coordinate reference system as GET /api/crs lists it. */
+export interface CrsSummary {
+  code: number;
+  name: string;
+  area: string;
+  /** Whether longitude/latitude convert to and from it here (false: its datum shift needs a grid file Timefield does not carry). */
+  lonLat: boolean;
 }
 
 export interface Line {
@@ -71,6 +82,9 @@ export interface Station {
   station: number;
   x: number;
   z: number;
+  /** Easting and northing (m) in the project's coordinate reference system, when the line has them. */
+  easting?: number;
+  northing?: number;
 }
 
 export interface PersonRef {

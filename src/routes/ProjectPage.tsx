@@ -7,6 +7,7 @@ import { EmptyState } from '../components/EmptyState';
 import { AddMemberForm } from '../components/forms/AddMemberForm';
 import { NewLineForm } from '../components/forms/NewLineForm';
 import { ProjectColoursForm } from '../components/forms/ProjectColoursForm';
+import { ProjectCrsForm } from '../components/forms/ProjectCrsForm';
 import { LinesTable } from '../components/LinesTable';
 import { Loading, LoadError } from '../components/LoadState';
 import { MembersTable } from '../components/MembersTable';
@@ -125,6 +126,9 @@ export function ProjectPage() {
             description="One colour scale for every velocity section of this project (models, runs, inversions, reports), so the same colour always means the same velocity. A viewer can stretch it over one section on that page."
           >
             <ProjectColoursForm project={p} canEdit={canEditProject(me, p)} />
+          </Section>
+          <Section title="Coordinates" description="The map grid the stations' eastings and northings are in, for the plan view and the CAD and GIS exports.">
+            <ProjectCrsForm project={p} canEdit={canEditProject(me, p)} />
           </Section>
         </>
       )}

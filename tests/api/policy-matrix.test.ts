@@ -39,6 +39,10 @@ const EXPECTED: Record<string, Caller[]> = {
   'PATCH /api/projects/:projectId': ['admin', 'lead'],
   // Issue 19: searching the EPSG list is reference data for any signed-in user.
   'GET /api/crs': SIGNED_IN,
+  // Issue 19: a section's exports (DXF, gridded CSV, depth-to-rock CSV and GeoJSON) go to whoever may read the section.
+  'GET /api/models/:modelId/export/:file': STAFF_A,
+  'GET /api/runs/:runId/export/:file': STAFF_A,
+  'GET /api/inversions/:inversionId/export/:file': STAFF_A,
   'POST /api/projects/:projectId/members': ['admin', 'lead'],
   'DELETE /api/projects/:projectId/members/:userId': ['admin', 'lead'],
   // Issue 17 item 5: whoever may add and remove members changes a member's role in place.
@@ -145,6 +149,7 @@ function concretePath(path: string, w: World): string {
     .replace(':boreholeId', w.boreholeA)
     .replace(':shotId', 'F')
     .replace(':number', '999')
+    .replace(':file', 'section.csv')
     .replace(':userId', w.loner.id);
 }
 

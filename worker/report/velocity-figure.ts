@@ -8,7 +8,7 @@ import { sToMs } from '../../shared/units';
 import { colourAt, VELOCITY_STOPS } from './colour';
 import { verticalColourBar } from './colour-bar';
 import type { ReportContext } from './context';
-import { contourLines } from './contours';
+import { contourLines } from '../../shared/geometry/contour-lines';
 import { plain } from './format';
 import { layerOutlines } from './interfaces';
 import { groundLine, lineRange } from './line-geometry';

@@ -9,7 +9,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Grid } from '../../../shared/grid';
-import { contourLines } from '../../../worker/report/contours';
+import { contourLines } from '../../../shared/geometry/contour-lines';
 
 function field(grid: Grid, f: (x: number, z: number) => number): Float64Array {
   const out = new Float64Array(grid.nx * grid.nz);

@@ -7,7 +7,7 @@ import { colourAt, RESIDUAL_STOPS, type Rgb } from '../colour';
 import { horizontalColourBar } from '../colour-bar';
 import { caption, captionHeight, paragraph, sectionHeading } from '../flow';
 import { fixed, plain } from '../format';
-import { contourLines } from '../contours';
+import { contourLines } from '../../../shared/geometry/contour-lines';
 import { Plot } from '../plot';
 import { encodeRgbPng } from '../png';
 import { COLOUR, CONTENT, SIZE } from '../style';

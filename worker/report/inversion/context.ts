@@ -6,6 +6,7 @@
  */
 import { nodeX, type Grid } from '../../../shared/grid';
 import { evalPolyline, type RasterModel } from '../../../shared/model';
+import { airFilled, doiBetweenColumns } from '../../../shared/model/resolved-iso-depth';
 import { PageFlow } from '../context';
 import { inversionHeadingText, type InversionSectionKey } from './outline';
 import { DEFAULT_COVERAGE_THRESHOLD, type InversionReportInput, type NodeValues } from './types';
@@ -62,31 +63,10 @@ export class InversionContext extends PageFlow<InversionSectionKey> {
 
   /** DOI elevation at x, linear between columns; NaN where either column has no ray. */
   doiAt(x: number): number {
-    const { grid } = this;
-    const f = Math.min(grid.nx - 1, Math.max(0, (x - grid.x0) / grid.dx));
-    const ix = Math.min(grid.nx - 2, Math.floor(f));
-    const w = f - ix;
-    // At a node column only that column counts (its neighbour may have no ray).
-    if (w < 1e-9) return this.doi[ix];
-    if (w > 1 - 1e-9) return this.doi[ix + 1];
-    return (1 - w) * this.doi[ix] + w * this.doi[ix + 1];
+    return doiBetweenColumns(this.grid, this.doi, x);
   }
 
   get xRange(): { min: number; max: number } {
     return { min: this.grid.x0, max: nodeX(this.grid, this.grid.nx - 1) };
   }
-}
-
-/** Air nodes take the velocity of the first ground node below them (a column of air keeps NaN). */
-function airFilled(grid: Grid, velocity: Float32Array): Float32Array {
-  const out = Float32Array.from(velocity);
-  for (let ix = 0; ix < grid.nx; ix++) {
-    let below = Number.NaN;
-    for (let iz = grid.nz - 1; iz >= 0; iz--) {
-      const i = iz * grid.nx + ix;
-      if (Number.isNaN(out[i])) out[i] = below;
-      else below = out[i];
-    }
-  }
-  return out;
 }

@@ -8,7 +8,7 @@
 import { nodeX } from '../../../shared/grid';
 import { colourAt, VELOCITY_STOPS, type Rgb } from '../colour';
 import { verticalColourBar } from '../colour-bar';
-import { contourLines } from '../contours';
+import { contourLines } from '../../../shared/geometry/contour-lines';
 import { FONT } from '../fonts';
 import { plain } from '../format';
 import { shotMark, stationMark } from '../markers';

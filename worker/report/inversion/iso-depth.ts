@@ -4,21 +4,15 @@
  * kept only where the rays say something: a crossing below the depth of investigation, or at a
  * node crossed by less ray than the coverage threshold, is "not resolved".
  */
-import { nodeX } from '../../../shared/grid';
-import { isoVelocityDepth, type IsoDepth } from '../../../shared/model/iso-depth';
+import type { IsoDepth } from '../../../shared/model/iso-depth';
+import { NOT_REACHED_ABOVE_DOI, resolvedIsoDepth, type IsoDepthStatus } from '../../../shared/model/resolved-iso-depth';
 import { caption, paragraph, sectionHeading } from '../flow';
 import { fixed, NONE, plain } from '../format';
 import { drawBoreholes, type TieSurface } from '../boreholes';
 import { drawTable } from '../table';
 import type { InversionContext } from './context';
 
-export const BELOW_DOI = 'not resolved: below the DOI';
-export const UNCOVERED = 'not resolved: too little ray coverage';
-export const NO_RAYS = 'not resolved: no ray reaches here';
-export const NOT_REACHED_ABOVE_DOI = 'not reached above the DOI';
-export const OUTSIDE_GRID = 'outside the section';
-
-export type IsoDepthStatus = 'resolved' | typeof BELOW_DOI | typeof UNCOVERED | typeof NO_RAYS | typeof NOT_REACHED_ABOVE_DOI | typeof OUTSIDE_GRID;
+export { BELOW_DOI, NO_RAYS, NOT_REACHED_ABOVE_DOI, OUTSIDE_GRID, UNCOVERED, type IsoDepthStatus } from '../../../shared/model/resolved-iso-depth';
 
 export interface StationIsoDepth {
   station: number | string;
@@ -27,22 +21,9 @@ export interface StationIsoDepth {
   status: IsoDepthStatus;
 }
 
-/** Depth of the first v* crossing at x and whether the inversion resolves it there. */
+/** Depth of the first v* crossing at x and whether the inversion resolves it there (shared/model/resolved-iso-depth.ts). */
 export function inversionIsoDepth(ctx: InversionContext, velocity: number, x: number): { result: IsoDepth | null; status: IsoDepthStatus } {
-  const { grid } = ctx;
-  if (!(x >= grid.x0 && x <= nodeX(grid, grid.nx - 1))) return { result: null, status: OUTSIDE_GRID };
-  const result = isoVelocityDepth(ctx.raster, velocity, x);
-  const doi = ctx.doiAt(x);
-  if (!Number.isFinite(doi)) return { result, status: NO_RAYS };
-  if (result.elevation === null) return { result, status: NOT_REACHED_ABOVE_DOI };
-  // A crossing within a thousandth of a node row of the DOI counts as on it.
-  if (result.elevation < doi - 1e-3 * grid.dz) return { result, status: BELOW_DOI };
-  // The node nearest to the crossing must be covered (the surface node when it lies in the air above the first row).
-  const ix = Math.round((x - grid.x0) / grid.dx);
-  let iz = Math.min(grid.nz - 1, Math.max(0, Math.round((grid.z0 - result.elevation) / grid.dz)));
-  while (iz < grid.nz - 1 && !ctx.active[iz * grid.nx + ix]) iz++;
-  if (!ctx.covered(iz * grid.nx + ix)) return { result, status: UNCOVERED };
-  return { result, status: 'resolved' };
+  return resolvedIsoDepth(ctx, velocity, x);
 }
 
 /**

@@ -40,7 +40,9 @@ export function StationCsvUpload({ lineId, current, onStored }: { lineId: string
         Upload a station file (CSV)
       </label>
       <p id={`${id}-hint`} className="text-sm text-stone-600">
-        Header <code>station,x,z</code> in any order; lines starting with <code>#</code> are comments. The file replaces the whole table.
+        Header <code>station,x,z</code> in any order; lines starting with <code>#</code> are comments. The file replaces the whole table. With
+        coordinates, add <code>easting,northing</code> (in the project&rsquo;s coordinate system) or give <code>lon,lat</code> from a GNSS export
+        instead; without <code>x</code>, the chainage is measured along the line through the stations in file order.
       </p>
       <div className="mt-2 flex flex-wrap items-center gap-3">
         <input

@@ -4,8 +4,9 @@ import { ScrollTable } from '../ScrollTable';
 
 const metres = (v: number) => v.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 3 });
 
-/** The saved station table, read-only. */
+/** The saved station table, read-only; easting and northing where the line has them. */
 export function StationTable({ stations }: { stations: Station[] }) {
+  const located = stations.some((s) => s.easting !== undefined);
   return (
     <ScrollTable caption="Station table" testId="station-table" minWidth="20rem">
       <thead>
@@ -13,6 +14,8 @@ export function StationTable({ stations }: { stations: Station[] }) {
           <Th numeric>Station</Th>
           <Th numeric>x (m)</Th>
           <Th numeric>Elevation z (m)</Th>
+          {located && <Th numeric>Easting (m)</Th>}
+          {located && <Th numeric>Northing (m)</Th>}
         </tr>
       </thead>
       <tbody>
@@ -21,6 +24,8 @@ export function StationTable({ stations }: { stations: Station[] }) {
             <Td numeric>{s.station}</Td>
             <Td numeric>{metres(s.x)}</Td>
             <Td numeric>{metres(s.z)}</Td>
+            {located && <Td numeric>{s.easting === undefined ? '—' : metres(s.easting)}</Td>}
+            {located && <Td numeric>{s.northing === undefined ? '—' : metres(s.northing)}</Td>}
           </Tr>
         ))}
       </tbody>

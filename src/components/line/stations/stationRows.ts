@@ -16,6 +16,9 @@ export interface DraftRow {
   station: string;
   x: string;
   z: string;
+  /** Map coordinates from the saved table or a CSV, carried through hand edits unchanged (edit them by CSV). */
+  easting?: number;
+  northing?: number;
 }
 
 export const COLUMN_LABELS: Record<StationColumn, string> = { station: 'Station', x: 'x (m)', z: 'Elevation z (m)' };
@@ -24,7 +27,7 @@ let nextKey = 1;
 export const newKey = () => nextKey++;
 
 export function toDraft(stations: readonly Station[]): DraftRow[] {
-  return stations.map((s) => ({ key: newKey(), station: String(s.station), x: String(s.x), z: String(s.z) }));
+  return stations.map((s) => ({ key: newKey(), station: String(s.station), x: String(s.x), z: String(s.z), ...(s.easting !== undefined ? { easting: s.easting, northing: s.northing } : {}) }));
 }
 
 /** A number as typed: empty is missing, anything else must be a finite decimal. */
@@ -66,7 +69,9 @@ export function checkRows(rows: readonly DraftRow[]): { stations: Station[] | nu
     if (z === null) addError(errors, row.key, 'Elevation: enter the elevation (m).');
     else if (z === 'bad') addError(errors, row.key, `Elevation: “${row.z.trim()}” is not a number.`);
     else if (outOfRange(z, Z_RANGE)) addError(errors, row.key, `Elevation: ${outOfRange(z, Z_RANGE)}.`);
-    if (typeof station === 'number' && typeof x === 'number' && typeof z === 'number') stations.push({ station, x, z });
+    if (typeof station === 'number' && typeof x === 'number' && typeof z === 'number') {
+      stations.push(row.easting !== undefined && row.northing !== undefined ? { station, x, z, easting: row.easting, northing: row.northing } : { station, x, z });
+    }
   });
   return { stations: errors.size === 0 ? stations : null, errors };
 }

@@ -1,5 +1,5 @@
 /**
- * Contour lines of a gridded field (travel times) as joined polylines, by marching squares
+ * Contour lines of a gridded field (travel times, velocities) as joined polylines, by marching squares
  * (Lorensen & Cline 1987, "Marching cubes", SIGGRAPH, reduced to 2-D): every cell whose corners
  * straddle the level gets a segment between two crossed edges (a saddle gets two, split by the
  * mean of the corners), crossings placed by linear interpolation along the edge. Segments meet on
@@ -7,7 +7,7 @@
  * one path per line keeps the PDF light. Cells with a NaN corner (air) are skipped, so lines end
  * at the ground surface.
  */
-import type { Grid } from '../../shared/grid';
+import type { Grid } from '../grid';
 
 /** One contour line: x, z pairs in model coordinates (m). */
 export type Polyline = number[];
