@@ -48,6 +48,7 @@ export const router = createBrowserRouter([
           { path: 'account', element: <MyAccountPage /> },
           // Reports, the mail outbox and the audit trail (issue 7), each in its own small chunk.
           { path: 'reports/:reportId', hydrateFallbackElement: <Loading what="report" />, lazy: async () => ({ Component: (await import('./routes/ReportPage')).ReportPage }) },
+          { path: 'projects/:projectId/plan', hydrateFallbackElement: <Loading what="plan" />, lazy: async () => ({ Component: (await import('./routes/PlanPage')).PlanPage }) },
           { path: 'projects/:projectId/audit', hydrateFallbackElement: <Loading what="audit trail" />, lazy: async () => ({ Component: (await import('./routes/AuditPage')).AuditPage }) },
           { path: 'admin/organisation', hydrateFallbackElement: <Loading what="organisation" />, lazy: async () => ({ Component: (await import('./routes/OrganisationPage')).OrganisationPage }) },
           { path: 'admin/outbox', hydrateFallbackElement: <Loading what="outbox" />, lazy: async () => ({ Component: (await import('./routes/OutboxPage')).OutboxPage }) },

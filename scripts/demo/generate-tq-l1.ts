@@ -65,7 +65,20 @@ for (const [shotId, sx] of SHOTS) {
 }
 
 writeFileSync(`${OUT}/tq-l1.model.json`, JSON.stringify(model, null, 2) + '\n');
-writeFileSync(`${OUT}/tq-l1.stations.csv`, ['# Invented demo line TQ-L1: levelled station elevations (m)', 'station,x,z', ...stations.map((s) => `${s.station},${s.x},${s.z}`)].join('\n') + '\n');
+/** Map position of chainage x on the invented line: bearing 70° from grid north, turning to 78° at x = 57.5 m. */
+function mapPosition(x: number): [number, number] {
+  const [e0, n0, bend] = [498200, 6008400, 57.5];
+  const along = (e: number, n: number, d: number, deg: number): [number, number] => [e + d * Math.sin((deg * Math.PI) / 180), n + d * Math.cos((deg * Math.PI) / 180)];
+  return x <= bend ? along(e0, n0, x, 70) : along(...along(e0, n0, bend, 70), x - bend, 78);
+}
+writeFileSync(
+  `${OUT}/tq-l1.stations.csv`,
+  [
+    '# Invented demo line TQ-L1: levelled station elevations (m); easting and northing in EPSG:32630 (WGS 84 / UTM zone 30N) at an invented spot, the line bending 8 degrees at x = 57.5 m',
+    'station,x,z,easting,northing',
+    ...stations.map((s) => `${s.station},${s.x},${s.z},${mapPosition(s.x).map((v) => v.toFixed(3)).join(',')}`),
+  ].join('\n') + '\n',
+);
 writeFileSync(
   `${OUT}/tq-l1.picks.csv`,
   ['# Invented demo picks for line TQ-L1, computed from tq-l1.model.json with Gaussian noise (sigma 0.5 ms); elevations empty = on the ground surface', ...rows].join('\n') + '\n',

@@ -38,6 +38,8 @@ export const policyTable = {
   'project.update': { admin: true, roles: ['lead'] },
   // Issue 19: the list of coordinate reference systems (public reference data) for the project form.
   'crs.search': 'signed_in',
+  // Issue 19: the plan of the project's lines (staff, as the lines themselves).
+  'project.plan': { roles: STAFF },
   'project.members.add': { admin: true, roles: ['lead'] },
   'project.members.remove': { admin: true, roles: ['lead'] },
   'project.members.update': { admin: true, roles: ['lead'] },

@@ -1,7 +1,10 @@
 import { Router, type Request, type Response } from 'express';
 import { HttpError } from '../http/errors';
 import { authorize } from '../policies/authorize';
-import { projectOfInversion, projectOfModel, projectOfRun } from '../policies/scopes';
+import { projectFromParam, projectOfInversion, projectOfModel, projectOfRun } from '../policies/scopes';
+import { planDxf, planGeoJson } from '../../shared/exports/plan';
+import { projectPlan } from '../services/plan';
+import { toLonLat } from '../geo/crs';
 import { EXPORT_FILES, inversionSection, modelSection, runSection, writeExport, type ExportFile, type LoadedSection } from '../services/exports';
 
 /**
@@ -20,7 +23,10 @@ const query = (req: Request, key: string): string | undefined => (typeof req.que
 
 function send(res: Response, loaded: LoadedSection, file: ExportFile, req: Request): void {
   const out = writeExport(loaded, file, { rock: query(req, 'rock'), classes: query(req, 'classes'), levels: query(req, 'levels') });
-  res.type(out.type).attachment(out.name).send(out.body);
+  res.type(out.type);
+  // The pages read the JSON table; every other file is a download.
+  if (file !== 'depth-to-rock.json') res.attachment(out.name);
+  res.send(out.body);
 }
 
 export function exportsRouter(): Router {
@@ -39,6 +45,20 @@ export function exportsRouter(): Router {
     const threshold = t === undefined ? 1 : Number(t);
     if (!(threshold >= 0 && threshold <= 1000)) throw new HttpError(400, 'invalid_threshold', 'threshold must be a ray length between 0 and 1000 m.');
     send(res, await inversionSection(req.params.inversionId as string, threshold), file, req);
+  });
+  // The project's plan: JSON for the plan view, DXF in the project's grid, GeoJSON in WGS 84.
+  r.get('/projects/:projectId/plan', authorize('project.plan', projectFromParam), async (req, res) => {
+    res.json((await projectPlan(req.access!.projectId)).plan);
+  });
+  r.get('/projects/:projectId/plan.dxf', authorize('project.plan', projectFromParam), async (req, res) => {
+    const { plan } = await projectPlan(req.access!.projectId);
+    res.type('application/dxf').attachment(`${plan.project.replace(/[^A-Za-z0-9._-]+/g, '-')}-plan.dxf`).send(planDxf(plan, new Date().toISOString().slice(0, 10)));
+  });
+  r.get('/projects/:projectId/plan.geojson', authorize('project.plan', projectFromParam), async (req, res) => {
+    const { plan, crs } = await projectPlan(req.access!.projectId);
+    if (!crs) throw new HttpError(422, 'no_coordinates', 'GeoJSON needs real-world coordinates: set the project’s coordinate system first.');
+    if (crs.noDatumShift) throw new HttpError(422, 'no_coordinates', `${crs.noDatumShift}, so GeoJSON (WGS 84) cannot be written.`);
+    res.type('application/geo+json').attachment(`${plan.project.replace(/[^A-Za-z0-9._-]+/g, '-')}-plan.geojson`).send(JSON.stringify(planGeoJson(plan, (e, n) => toLonLat(crs.code, e, n))));
   });
   return r;
 }

@@ -9,7 +9,9 @@ import { sectionOfInversion, sectionOfModel, type ExportSection } from '../../sh
 import { sectionDxf } from '../../shared/exports/section-dxf';
 import { depthToRockCsv, sectionCsv } from '../../shared/exports/csv';
 import { depthToRockGeoJson } from '../../shared/exports/geojson';
-import { defaultRockSurface, type RockSurface } from '../../shared/exports/depth-to-rock';
+import { defaultRockSurface, depthToRock, rockDepthAt, rockTies, surfaceName, type RockSurface } from '../../shared/exports/depth-to-rock';
+import { EXCAVATABILITY_CAUTION } from '../../shared/exports/excavatability';
+import { INTERPRETATION_CAUTION } from '../../shared/exports/csv';
 import { parseClasses, WEAVER_1975, type ExcavatabilityClass } from '../../shared/exports/excavatability';
 import type { ModelFile } from '../../shared/model';
 import { listBoreholes } from './boreholes';
@@ -19,7 +21,7 @@ import { listStations } from './stations';
 import { projectCrs } from './stationCoordinates';
 import { toLonLat } from '../geo/crs';
 
-export const EXPORT_FILES = ['section.dxf', 'section.csv', 'depth-to-rock.csv', 'depth-to-rock.geojson'] as const;
+export const EXPORT_FILES = ['section.dxf', 'section.csv', 'depth-to-rock.csv', 'depth-to-rock.geojson', 'depth-to-rock.json'] as const;
 export type ExportFile = (typeof EXPORT_FILES)[number];
 
 interface LineContext {
@@ -142,6 +144,21 @@ export function writeExport(loaded: LoadedSection, file: ExportFile, options: Ex
       return { body: sectionCsv(section), type: 'text/csv; charset=utf-8', name: `${stem}-grid.csv` };
     case 'depth-to-rock.csv':
       return { body: depthToRockCsv(section, rockSurface(section, options.rock), classes(options.classes)), type: 'text/csv; charset=utf-8', name: `${stem}-depth-to-rock.csv` };
+    case 'depth-to-rock.json': {
+      // The same table for the pages: rows, ties at the holes and the depth to each class.
+      const surface = rockSurface(section, options.rock);
+      const bands = (classes(options.classes) ?? []).filter((c) => c.from > 0);
+      const body = JSON.stringify({
+        surface: surfaceName(section, surface),
+        interfaces: section.interfaces.map((f) => f.name),
+        coverage: section.coverage !== null,
+        rows: depthToRock(section, surface).map((r) => ({ ...r, classes: bands.map((b) => rockDepthAt(section, { kind: 'iso', velocity: b.from }, r.x).depth) })),
+        classes: bands,
+        ties: rockTies(section, surface),
+        cautions: [INTERPRETATION_CAUTION, ...(bands.length ? [EXCAVATABILITY_CAUTION] : [])],
+      });
+      return { body, type: 'application/json', name: `${stem}-depth-to-rock.json` };
+    }
     case 'depth-to-rock.geojson': {
       if (!loaded.crsCode || !loaded.lonLat) throw new HttpError(422, 'no_coordinates', loaded.crsCode ? 'This project’s coordinate system converts to longitude/latitude only through a grid file Timefield does not carry, so GeoJSON cannot be written.' : 'GeoJSON needs real-world coordinates: set the project’s coordinate system and give the stations eastings and northings first.');
       const code = loaded.crsCode;

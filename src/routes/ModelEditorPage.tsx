@@ -9,6 +9,7 @@ import { pickSetsInUse, type LineDetail, type ModelVersionDetail, type ModelVers
 import { Loading, LoadError } from '../components/LoadState';
 import { ModelEditor } from '../components/model/ModelEditor';
 import { VersionList } from '../components/model/VersionList';
+import { SectionExports } from '../components/exports/SectionExports';
 import { PageHeader } from '../components/PageHeader';
 import { Section } from '../components/Section';
 import { formatDate } from '../lib/format';
@@ -126,6 +127,7 @@ export function ModelEditorPage() {
           setParams({ from: id }, { replace: true });
         }}
       />
+      {modelId && <SectionExports base={`/api/models/${modelId}/export`} />}
     </>
   );
 }

@@ -129,6 +129,12 @@ export function ProjectPage() {
           </Section>
           <Section title="Coordinates" description="The map grid the stations' eastings and northings are in, for the plan view and the CAD and GIS exports.">
             <ProjectCrsForm project={p} canEdit={canEditProject(me, p)} />
+            <p className="mt-3">
+              <Link to={`/projects/${p.id}/plan`} className="font-semibold" data-testid="plan-link">
+                Plan of the lines
+              </Link>{' '}
+              <span className="text-stone-600">– stations, shots and boreholes on a map grid, with CAD and GIS files</span>
+            </p>
           </Section>
         </>
       )}

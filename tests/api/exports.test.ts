@@ -128,6 +128,30 @@ describe('section exports', () => {
     expect(depths).toEqual([3, 4, 5, 6, 7]);
   });
 
+  it('draws the project plan in its grid (DXF, read back by ezdxf) and in WGS 84 (GeoJSON)', async () => {
+    const plan = await geo.get(`/api/projects/${world.projectA.id}/plan`);
+    expect(plan.status).toBe(200);
+    expect(plan.body.lines.find((l: { name: string }) => l.name === 'A-1').stations).toHaveLength(5);
+    const res = await geo.get(`/api/projects/${world.projectA.id}/plan.dxf`).buffer(true).parse((r, cb) => { let s = ''; r.on('data', (c: Buffer) => (s += c)); r.on('end', () => cb(null, s)); });
+    const dxf = readDxf(res.body as string);
+    for (const layer of ['TF_PLAN_LINES', 'TF_PLAN_STATIONS', 'TF_PLAN_NORTH_ARROW', 'TF_PLAN_SCALE_BAR', 'TF_PLAN_TITLE']) expect(dxf.layers).toContain(layer);
+    const lines = dxf.entities.filter((e) => e.layer === 'TF_PLAN_LINES' && e.type === 'LWPOLYLINE').map((e) => e.points);
+    expect(lines).toEqual([STATIONS.map((s) => [s.easting, s.northing])]);
+    expect(dxf.entities.filter((e) => e.layer === 'TF_PLAN_STATIONS' && e.type === 'POINT')).toHaveLength(5);
+    const texts = dxf.entities.filter((e) => e.type === 'TEXT').map((e) => e.text);
+    expect(texts).toContain('N');
+    expect(texts).toContain('Line A-1');
+    expect(texts.some((t) => /Not drawn \(no station coordinates\): /.test(t ?? ''))).toBe(false); // project A has one line, with coordinates
+    const geojson = await geo.get(`/api/projects/${world.projectA.id}/plan.geojson`);
+    expect(geojson.status).toBe(200);
+    const fc = JSON.parse(geojson.text);
+    expect(fc.type).toBe('FeatureCollection');
+    for (const f of fc.features) {
+      const positions = f.geometry.type === 'Point' ? [f.geometry.coordinates] : f.geometry.coordinates;
+      for (const [lon, lat] of positions) expect(Math.abs(lon) <= 180 && Math.abs(lat) <= 90 && lon > 14 && lon < 16 && lat > 44 && lat < 46).toBe(true); // near 15°E 45°N
+    }
+  });
+
   it('names the files it knows and refuses others', async () => {
     const res = await geo.get(`/api/models/${modelId}/export/section.svg`);
     expect(res.status).toBe(404);

@@ -43,6 +43,9 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/models/:modelId/export/:file': STAFF_A,
   'GET /api/runs/:runId/export/:file': STAFF_A,
   'GET /api/inversions/:inversionId/export/:file': STAFF_A,
+  'GET /api/projects/:projectId/plan': STAFF_A,
+  'GET /api/projects/:projectId/plan.dxf': STAFF_A,
+  'GET /api/projects/:projectId/plan.geojson': STAFF_A,
   'POST /api/projects/:projectId/members': ['admin', 'lead'],
   'DELETE /api/projects/:projectId/members/:userId': ['admin', 'lead'],
   // Issue 17 item 5: whoever may add and remove members changes a member's role in place.

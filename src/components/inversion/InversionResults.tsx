@@ -9,8 +9,9 @@ import { RunTabPanel, RunTabs, type RunTab } from '../run/RunTabs';
 import { ResidualTable } from '../run/table/ResidualTable';
 import { CheckerboardPanel } from './CheckerboardPanel';
 import { InversionSectionPanel } from './InversionSectionPanel';
+import { SectionExports } from '../exports/SectionExports';
 
-type View = 'section' | 'checkerboard' | 'misfit' | 'table';
+type View = 'section' | 'checkerboard' | 'misfit' | 'table' | 'exports';
 
 /**
  * A finished inversion's views: the final section, the checkerboard test when it was run, and the
@@ -26,6 +27,7 @@ export function InversionResults({ inversion, lineName }: { inversion: Inversion
     ...(inversion.settings.checkerboard ? [{ key: 'checkerboard' as const, label: 'Checkerboard test' }] : []),
     { key: 'misfit', label: 'Misfit map' },
     { key: 'table', label: 'Residual table' },
+    { key: 'exports', label: 'Depth to rock & exports' },
   ];
   const requested = params.get('view') as View | null;
   const view: View = requested && tabs.some((t) => t.key === requested) ? requested : 'section';
@@ -53,6 +55,7 @@ export function InversionResults({ inversion, lineName }: { inversion: Inversion
       <RunTabPanel idPrefix={idPrefix} tabKey={view}>
         {needsSection && section.isPending && <Loading what="section" />}
         {needsSection && section.isError && <LoadError error={section.error} what="section" onRetry={() => void section.refetch()} />}
+        {view === 'exports' && <SectionExports base={`/api/inversions/${inversion.id}/export`} />}
         {view === 'section' && section.data && <InversionSectionPanel section={section.data} lineId={inversion.lineId} />}
         {view === 'checkerboard' && section.data && (
           section.data.checkerboard ? (
@@ -61,8 +64,8 @@ export function InversionResults({ inversion, lineName }: { inversion: Inversion
             <p className="text-stone-700">The checkerboard test was asked for but no result was stored with this inversion.</p>
           )
         )}
-        {!needsSection && residuals.isPending && <Loading what="residuals" />}
-        {!needsSection && residuals.isError && <LoadError error={residuals.error} what="residuals" onRetry={() => void residuals.refetch()} />}
+        {!needsSection && view !== 'exports' && residuals.isPending && <Loading what="residuals" />}
+        {!needsSection && view !== 'exports' && residuals.isError && <LoadError error={residuals.error} what="residuals" onRetry={() => void residuals.refetch()} />}
         {residuals.data && view === 'misfit' && (
           <MisfitView rows={residuals.data} selected={selectedRow} onSelect={selectPick} onShowInTable={(r) => update({ view: 'table', filter: r.shotId, pick: String(r.pickIndex) })} />
         )}

@@ -9,16 +9,18 @@ import { MisfitView } from './misfit/MisfitView';
 import { preloadRunCharts } from './plot/RunPlot';
 import { RunTabPanel, RunTabs, type RunTab } from './RunTabs';
 import { SectionView } from './section/SectionView';
+import { SectionExports } from '../exports/SectionExports';
 import { RunSummary } from './summary/RunSummary';
 import { ResidualTable } from './table/ResidualTable';
 import { compareShotIds } from './table/residualFilters';
 
-type View = 'section' | 'curves' | 'misfit' | 'table';
+type View = 'section' | 'curves' | 'misfit' | 'table' | 'exports';
 const TABS: RunTab<View>[] = [
   { key: 'section', label: 'Section' },
   { key: 'curves', label: 'Travel-time curves' },
   { key: 'misfit', label: 'Misfit map' },
   { key: 'table', label: 'Residual table' },
+  { key: 'exports', label: 'Depth to rock & exports' },
 ];
 
 /**
@@ -79,8 +81,9 @@ export function RunResults({ run, stats, line }: { run: RunDetail; stats: RunSta
             onShot={(s) => update({ shot: s })}
           />
         )}
-        {view !== 'section' && residuals.isPending && <Loading what="residuals" />}
-        {view !== 'section' && residuals.isError && <LoadError error={residuals.error} what="residuals" onRetry={() => void residuals.refetch()} />}
+        {view === 'exports' && <SectionExports base={`/api/runs/${run.id}/export`} />}
+        {view !== 'section' && view !== 'exports' && residuals.isPending && <Loading what="residuals" />}
+        {view !== 'section' && view !== 'exports' && residuals.isError && <LoadError error={residuals.error} what="residuals" onRetry={() => void residuals.refetch()} />}
         {residuals.data && view === 'curves' && <TravelTimeCurves runId={run.id} rows={residuals.data} onPick={(i) => update({ view: 'misfit', pick: String(i) })} />}
         {residuals.data && view === 'misfit' && (
           <MisfitView
