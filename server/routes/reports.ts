@@ -11,6 +11,10 @@ import { projectFromParam, projectOfInversion, projectOfReport, projectOfRun } f
 import { presentReport } from '../presenters/report';
 import { getReport, listProjectReports, loadPdf, reportHistory } from '../services/reportQueries';
 import { startInversionReport, startReport, stepReport, type ReportStep } from '../services/reports';
+import { inversionSection, runSection, writeExport, type ExportFile } from '../services/exports';
+
+/** What a report hands on besides its PDF (the gridded section stays with the project team). */
+const REPORT_EXPORTS = ['section.dxf', 'depth-to-rock.csv', 'depth-to-rock.geojson'] as const;
 
 /** Clients (members without report.read_unshared) see only approved renders and a redacted history. */
 const isClientView = (req: Request) => !allows('report.read_unshared', req.access!.role, req.user!.globalRole === 'admin');
@@ -50,6 +54,18 @@ export function reportsRouter(queue: Queue, mailer: Mailer): Router {
     const pdf = await loadPdf(report.id, isClientView(req));
     if (!pdf) throw new HttpError(409, 'pdf_not_ready', 'The PDF is still being prepared. Try again in a few seconds.');
     res.type('application/pdf').attachment(`timefield-report-${report.id.slice(0, 8)}.pdf`).send(pdf);
+  });
+
+  // The report's section for CAD and GIS (issue 19 item 4): whoever may read the report, a client once it is shared.
+  // Rock surface: the report's iso-velocity; the files are written from the run or inversion the report was made from.
+  r.get('/reports/:reportId/export/:file', authorize('report.read', projectOfReport), async (req, res) => {
+    const report = await readableReport(req);
+    const file = req.params.file as string;
+    if (!(REPORT_EXPORTS as readonly string[]).includes(file)) throw new HttpError(404, 'unknown_export', `No export called "${file}": a report offers ${REPORT_EXPORTS.join(', ')}.`);
+    const options = report.options as { isoVelocity: number; coverageThreshold?: number };
+    const loaded = report.runId ? await runSection(report.runId) : await inversionSection(report.inversionId!, options.coverageThreshold ?? 1);
+    const out = writeExport(loaded, file as ExportFile, { rock: String(options.isoVelocity) });
+    res.type(out.type).attachment(`report-${report.id.slice(0, 8)}-${out.name}`).send(out.body);
   });
 
   for (const step of Object.keys(STEP_ACTIONS) as ReportStep[]) {

@@ -152,6 +152,17 @@ describe('section exports', () => {
     }
   });
 
+  it('hands a report\'s files to staff, and to a client only once the report is shared', async () => {
+    const staff = await geo.get(`/api/reports/${world.reportA}/export/depth-to-rock.csv`);
+    expect(staff.status).toBe(200);
+    expect(staff.text).toMatch(/# rock surface: the 2500 m\/s iso-velocity/); // the report's iso-velocity
+    const client = await signedInAgent(t.app, emailOf('client'), PASSWORD);
+    const refused = await client.get(`/api/reports/${world.reportA}/export/depth-to-rock.csv`);
+    expect(refused.status).toBe(403);
+    expect(refused.body.message).toBe('This report has not been shared with you yet.');
+    expect((await geo.get(`/api/reports/${world.reportA}/export/section.csv`)).status).toBe(404);
+  });
+
   it('names the files it knows and refuses others', async () => {
     const res = await geo.get(`/api/models/${modelId}/export/section.svg`);
     expect(res.status).toBe(404);

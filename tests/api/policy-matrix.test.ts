@@ -96,6 +96,8 @@ const EXPECTED: Record<string, Caller[]> = {
   // A draft: the project's client may not read it yet (tests/api/reports.test.ts covers a shared one).
   'GET /api/reports/:reportId': STAFF_A,
   'GET /api/reports/:reportId/pdf': STAFF_A,
+  // Issue 19: a report's CAD/GIS files, as its PDF (clients once it is shared; report A is a draft).
+  'GET /api/reports/:reportId/export/:file': STAFF_A,
   'POST /api/reports/:reportId/submit': ['geophysicist'],
   'POST /api/reports/:reportId/approve': ['lead'],
   'POST /api/reports/:reportId/return': ['lead'],

@@ -13,6 +13,22 @@ export function PdfPanel({ report, forClient = false }: { report: ReportDetail; 
         <PdfDownload reportId={report.id} state={state} />
         {state === 'ready' && renderedAt && <span className="text-sm text-stone-600">Made {dateTime(renderedAt)}</span>}
       </div>
+      <p className="mt-3 text-sm text-stone-700" data-testid="report-exports">
+        The same section for CAD and GIS:{' '}
+        {[
+          ['section.dxf', 'DXF'],
+          ['depth-to-rock.csv', 'depth-to-rock table (CSV)'],
+          ['depth-to-rock.geojson', 'GeoJSON'],
+        ].map(([file, label], i) => (
+          <span key={file}>
+            {i > 0 && ' · '}
+            <a href={`/api/reports/${report.id}/export/${file}`} download data-testid={`report-export-${file}`}>
+              {label}
+            </a>
+          </span>
+        ))}
+        . Depth to rock is read at the report&rsquo;s {report.options.isoVelocity} m/s iso-velocity.
+      </p>
       {isRendering(state) && (
         <p role="status" data-testid="pdf-pending" className="mt-3 max-w-prose text-stone-700">
           {state === 'queued' ? 'The PDF is waiting for the worker.' : 'The PDF is being drawn.'} This page checks again every few seconds;
