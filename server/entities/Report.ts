@@ -23,7 +23,8 @@ export interface ReportSnapshot {
   takenAt: string;
   project: { name: string; site: string; clientOrganisation: string };
   line: { id: string; name: string; notes: string };
-  stations: { station: number; x: number; z: number }[];
+  /** Easting and northing (m) in the project's CRS where the line has them (snapshots since issue 19). */
+  stations: { station: number; x: number; z: number; easting?: number; northing?: number }[];
   /** Exactly one of runId and inversionId names what the report is made from. */
   runId: string | null;
   inversionId?: string | null;
@@ -36,6 +37,8 @@ export interface ReportSnapshot {
   boreholes?: SnapshotBorehole[];
   /** The project's velocity colour range (m/s) when the report was made; absent in older snapshots (the section's own range is used). */
   velocityColours?: { min: number; max: number };
+  /** The project's coordinate reference system when the report was made, e.g. "EPSG:32630 WGS 84 / UTM zone 30N". */
+  crs?: string | null;
 }
 
 export interface SnapshotBorehole {

@@ -1,3 +1,4 @@
+import { crsByCode } from '../geo/crs';
 import type { EntityManager } from 'typeorm';
 import type { ReportSnapshot, SnapshotBorehole } from '../entities/Report';
 import { loadOrganisationText } from './organisation';
@@ -16,7 +17,7 @@ export const sourceOf = (r: { runId: string | null; inversionId: string | null }
 export async function takeReportSnapshot(em: EntityManager, source: ReportSource, preparedById: string | null): Promise<ReportSnapshot> {
   const fromRun = 'runId' in source;
   const [r] = await em.query(
-    `SELECT p.name AS project, p.site, p.client_organisation, p.velocity_colour_min, p.velocity_colour_max, l.id AS line_id, l.name AS line, l.notes AS line_notes,
+    `SELECT p.name AS project, p.site, p.client_organisation, p.velocity_colour_min, p.velocity_colour_max, p.crs_epsg, l.id AS line_id, l.name AS line, l.notes AS line_notes,
             src.model_id, src.pick_set_revision, s.file_name, author.name AS prepared_by
      FROM ${fromRun ? '(SELECT id, line_id, pick_set_id, pick_set_revision, model_id FROM runs)' : '(SELECT id, line_id, pick_set_id, pick_set_revision, start_model_id AS model_id FROM inversions)'} src
      JOIN survey_lines l ON l.id = src.line_id JOIN projects p ON p.id = l.project_id
@@ -25,12 +26,12 @@ export async function takeReportSnapshot(em: EntityManager, source: ReportSource
     [fromRun ? source.runId : source.inversionId, preparedById],
   );
   if (!r) throw new Error(`${fromRun ? `run ${source.runId}` : `inversion ${source.inversionId}`} no longer exists`);
-  const stations: ReportSnapshot['stations'] = await em.query('SELECT station, x, z FROM stations WHERE line_id = $1 ORDER BY x', [r.line_id]);
+  const stations: ReportSnapshot['stations'] = await em.query('SELECT station, x, z, easting, northing FROM stations WHERE line_id = $1 ORDER BY x', [r.line_id]);
   return {
     takenAt: new Date().toISOString(),
     project: { name: r.project, site: r.site, clientOrganisation: r.client_organisation },
     line: { id: r.line_id, name: r.line, notes: r.line_notes },
-    stations: stations.map(({ station, x, z }) => ({ station: Number(station), x: Number(x), z: Number(z) })),
+    stations: stations.map(({ station, x, z, easting, northing }) => ({ station: Number(station), x: Number(x), z: Number(z), ...(easting == null ? {} : { easting: Number(easting), northing: Number(northing) }) })),
     runId: fromRun ? source.runId : null,
     inversionId: fromRun ? null : source.inversionId,
     modelVersionId: r.model_id ?? null,
@@ -39,6 +40,7 @@ export async function takeReportSnapshot(em: EntityManager, source: ReportSource
     consultancy: await loadOrganisationText(em),
     boreholes: await lineBoreholes(em, r.line_id),
     velocityColours: { min: Number(r.velocity_colour_min), max: Number(r.velocity_colour_max) },
+    crs: r.crs_epsg ? crsLabel(Number(r.crs_epsg)) : null,
   };
 }
 
@@ -54,4 +56,9 @@ export async function lineBoreholes(em: Pick<EntityManager, 'query'>, lineId: st
     waterDepth: h.water_depth === null ? null : Number(h.water_depth),
     contacts: h.contacts.map((c) => ({ depth: c.depth, material: c.material, rockTop: c.rockTop === true })),
   }));
+}
+
+/** "EPSG:code name" of a CRS, as reports print it. */
+function crsLabel(code: number): string {
+  return `EPSG:${code} ${crsByCode(code).name}`;
 }

@@ -36,6 +36,7 @@ export async function gatherInversionReportInput(reportId: string, r: InversionR
       consultancyLogo: logo?.data ?? null,
       project: snap.project,
       velocityColours: snap.velocityColours ?? null,
+      crs: snap.crs ?? null,
       line: { name: snap.line.name, notes: r.options.acquisitionNotes || snap.line.notes },
       preparedBy: snap.preparedBy,
       reviewedBy: r.reviewed_by ?? null,

@@ -80,6 +80,7 @@ export async function gatherReportInput(reportId: string): Promise<ReportInput> 
     consultancyLogo: (await loadLogo())?.data ?? null,
     project: snap.project,
     velocityColours: snap.velocityColours ?? null,
+    crs: snap.crs ?? null,
     line: { name: snap.line.name, notes: snap.line.notes },
     preparedBy: snap.preparedBy,
     reviewedBy: r.reviewed_by ?? null,

@@ -11,6 +11,7 @@ import { dot, stationMark } from './markers';
 import { Plot, type Box } from './plot';
 import { COLOUR, CONTENT, SIZE } from './style';
 import { drawTable } from './table';
+import { drawMapDepthTable } from './map-depths';
 import { label } from './text';
 import { niceStep } from './ticks';
 
@@ -88,6 +89,13 @@ export function drawIsoDepth(ctx: ReportContext): void {
       return [String(s.station), fixed(s.x, 2), fixed(r.groundZ, 2), fixed(r.depth, 1), fixed(r.elevation, 1)];
     }),
   });
+  const byStation = new Map(input.stations.map((s) => [s.station, s]));
+  drawMapDepthTable(
+    ctx,
+    atStations.map((s) => ({ ...byStation.get(s.station), station: s.station, groundZ: s.result?.groundZ ?? null, depth: s.result?.depth ?? null, elevation: s.result?.elevation ?? null })),
+    `the ${v} m/s surface`,
+    input.crs,
+  );
 }
 
 function drawProfile(ctx: ReportContext, box: Box, atStations: ReturnType<typeof stationIsoDepths>): void {

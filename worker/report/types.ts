@@ -20,6 +20,8 @@ export interface ReportMeta {
   reviewedBy: string | null;
   /** The project's velocity colour range (m/s) for every section figure; null: each figure's own range (older reports). */
   velocityColours?: { min: number; max: number } | null;
+  /** The project's CRS ("EPSG:code name") the station eastings and northings are in; null or absent without one. */
+  crs?: string | null;
 }
 
 /** A borehole or trial pit as the report was made (the snapshot's copy): depths in m below ground. */
@@ -43,7 +45,7 @@ export interface ReportResidual {
 export interface ReportInput extends ReportMeta {
   /** Free text from the geophysicist: acquisition notes for the survey section. */
   acquisitionNotes: string;
-  stations: { station: number; x: number; z: number }[];
+  stations: { station: number; x: number; z: number; easting?: number; northing?: number }[];
   shots: { shotId: string; sourceX: number; sourceZ: number }[];
   model: { name: string; version: number; comment: string; file: ModelFile };
   run: {

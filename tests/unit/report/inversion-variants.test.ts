@@ -91,6 +91,17 @@ describe('inversion report on a known answer', () => {
     expect(checked).toBeGreaterThan(velocity.length / 2);
   }, 60_000);
 
+  it('adds the depth-to-rock table in map coordinates when the stations carry them (issue 19 item 3)', async () => {
+    const base = knownInversionInput();
+    const input = { ...base, crs: 'EPSG:32633 WGS 84 / UTM zone 33N', stations: base.stations.map((st) => ({ ...st, easting: 500000 + st.x, northing: 5000000 })) };
+    const { lines, flow } = await render(input);
+    expect(flow).toContain('in map coordinates (EPSG:32633 WGS 84 / UTM zone 33N)');
+    expect(lines).toContain('G1 500000.00 5000000.00 20.00 10.0 10.0'); // as the chainage table: 10 m at G1
+    expect(lines).toContain('G4 500015.00 5000000.00 20.00 — —'); // not resolved there
+    const plain = await render(knownInversionInput());
+    expect(plain.flow).not.toContain('in map coordinates');
+  }, 60_000);
+
   it('moves the mask with the threshold given: 6 m of ray greys every node (5 m each), 0 none', async () => {
     for (const [threshold, share] of [[6, 1], [0, 0]] as const) {
       const input = { ...knownInversionInput(), coverageThreshold: threshold };

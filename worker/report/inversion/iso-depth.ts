@@ -11,6 +11,7 @@ import { fixed, NONE, plain } from '../format';
 import { drawBoreholes, type TieSurface } from '../boreholes';
 import { drawTable } from '../table';
 import type { InversionContext } from './context';
+import { drawMapDepthTable } from '../map-depths';
 
 export { BELOW_DOI, NO_RAYS, NOT_REACHED_ABOVE_DOI, OUTSIDE_GRID, UNCOVERED, type IsoDepthStatus } from '../../../shared/model/resolved-iso-depth';
 
@@ -87,4 +88,14 @@ export function drawInversionIsoDepth(ctx: InversionContext): void {
       return [...head, fixed(r.result!.depth, 1), fixed(r.result!.elevation, 1)];
     }),
   });
+  const byStation = new Map(input.stations.map((s) => [String(s.station), s]));
+  drawMapDepthTable(
+    ctx,
+    rows.map((r) => {
+      const ok = r.status === 'resolved';
+      return { ...byStation.get(String(r.station)), station: r.station, groundZ: r.result?.groundZ ?? null, depth: ok ? r.result!.depth : null, elevation: ok ? r.result!.elevation : null };
+    }),
+    `the ${v} m/s surface`,
+    input.crs,
+  );
 }

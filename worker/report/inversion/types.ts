@@ -11,7 +11,7 @@ export type NodeValues = ArrayLike<number | null>;
  * Pure data, SI units (m, s, m/s) unless a name says ms. Node arrays are row-major, iz outer.
  */
 export interface InversionReportInput extends ReportMeta {
-  stations: { station: number | string; x: number; z: number }[];
+  stations: { station: number | string; x: number; z: number; easting?: number; northing?: number }[];
   shots: { shotId: string; sourceX: number; sourceZ: number }[];
   inversion: {
     id: string;
