@@ -11,6 +11,7 @@ import { SelectField, TextField } from '../Field';
 import { Loading, LoadError } from '../LoadState';
 import { AssignmentChart } from './AssignmentChart';
 import { DepthSection } from './DepthSection';
+import { InterpretationExports } from './InterpretationExports';
 import { SectionColoursControl } from '../plot/colours/SectionColoursControl';
 import { useLineSectionColours } from '../plot/colours/useSectionColours';
 import { useBoreholes } from '../../api/boreholes';
@@ -284,7 +285,15 @@ function SaveAsModel({ result, model, modelId, lineId, canSave, picks, handChang
   const layered = () => ({ ...layeredModelFromResult(result, model), interpretation: interpretationRecord(result, picks, handChanges) });
   const save = useSaveModel(lineId);
   const [name, setName] = useState('layers');
-  if (!canSave) return <p className="mt-6 text-stone-600">A geophysicist can save this interpretation as a layered model version of the line.</p>;
+  const files = <InterpretationExports lineId={lineId} model={layered} method={result.method} />;
+  if (!canSave) {
+    return (
+      <>
+        <p className="mt-6 text-stone-600">A geophysicist can save this interpretation as a layered model version of the line.</p>
+        {files}
+      </>
+    );
+  }
   if (save.data) {
     return (
       <p data-testid="layers-saved" className="mt-6 rounded-lg border border-emerald-300 bg-emerald-50 px-5 py-3 text-emerald-950">
@@ -296,7 +305,7 @@ function SaveAsModel({ result, model, modelId, lineId, canSave, picks, handChang
       </p>
     );
   }
-  return (
+  const form = (
     <div className="mt-6 flex flex-wrap items-end gap-4 rounded-lg border border-stone-200 bg-white px-5 py-4">
       <TextField label="Model name" value={name} onChange={(e) => setName(e.target.value)} maxLength={80} data-testid="layers-model-name" />
       <Button
@@ -314,5 +323,11 @@ function SaveAsModel({ result, model, modelId, lineId, canSave, picks, handChang
         </p>
       )}
     </div>
+  );
+  return (
+    <>
+      {form}
+      {files}
+    </>
   );
 }
