@@ -45,9 +45,9 @@ export function SectionExports({ base, testId = 'section-exports' }: { base: str
     <section aria-label="Depth to rock and exports" data-testid={testId} className="mt-6">
       <h3 className="mb-2 text-lg font-semibold">Depth to rock and exports</h3>
       <div className="mb-3 flex flex-wrap items-end gap-4">
-        <label className="flex flex-col gap-1 font-semibold text-stone-800">
+        <label className="flex min-w-0 max-w-full flex-col gap-1 font-semibold text-stone-800">
           Rock surface
-          <select value={rock} onChange={(e) => setRock(e.target.value)} className="rounded-md border border-stone-300 bg-white px-2 py-1.5 font-normal" data-testid="export-rock">
+          <select value={rock} onChange={(e) => setRock(e.target.value)} className="max-w-full rounded-md border border-stone-300 bg-white px-2 py-1.5 font-normal" data-testid="export-rock">
             <option value="">{data?.interfaces.length ? `Base of ${data.interfaces[data.interfaces.length - 1]} (deepest interface)` : 'Iso-velocity 2500 m/s'}</option>
             {(data?.interfaces ?? []).slice(0, -1).map((name, i) => (
               <option key={name} value={`interface:${i + 1}`}>

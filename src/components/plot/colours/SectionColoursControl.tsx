@@ -20,7 +20,7 @@ export function SectionColoursControl({ colours, testId = 'section-colours' }: {
           id={`${id}-source`}
           value={source}
           onChange={(e) => setSource(e.target.value as ColourSource)}
-          className="rounded-md border border-stone-300 bg-white px-2 py-1.5"
+          className="max-w-full rounded-md border border-stone-300 bg-white px-2 py-1.5"
           data-testid={`${testId}-source`}
         >
           <option value="project">
