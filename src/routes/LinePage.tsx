@@ -13,12 +13,13 @@ import { PickSetsTab } from '../components/line/picksets/PickSetsTab';
 import { RecordsTab } from '../components/records/RecordsTab';
 import { BoreholesTab } from '../components/boreholes/BoreholesTab';
 import { StationsTab } from '../components/line/stations/StationsTab';
+import { DepthToRockTab } from '../components/exports/DepthToRockTab';
 import { Loading, LoadError } from '../components/LoadState';
 import { PageHeader } from '../components/PageHeader';
 import { formatDate, ROLE_LABELS } from '../lib/format';
 
-type TabKey = 'stations' | 'records' | 'boreholes' | 'picks' | 'checks' | 'layers' | 'models' | 'runs' | 'inversions';
-const TAB_KEYS: TabKey[] = ['stations', 'records', 'boreholes', 'picks', 'checks', 'layers', 'models', 'runs', 'inversions'];
+type TabKey = 'stations' | 'records' | 'boreholes' | 'picks' | 'checks' | 'layers' | 'models' | 'runs' | 'inversions' | 'rock';
+const TAB_KEYS: TabKey[] = ['stations', 'records', 'boreholes', 'picks', 'checks', 'layers', 'models', 'runs', 'inversions', 'rock'];
 
 /** Who may change field data on a line (the server's policy table decides; this only picks the view). */
 const FIELD_EDITORS: ProjectRole[] = ['geophysicist', 'field_tech'];
@@ -76,6 +77,7 @@ export function LinePage() {
     { key: 'models', label: 'Models', badge: l.models.length },
     { key: 'runs', label: 'Runs', badge: l.runs.length },
     { key: 'inversions', label: 'Inversions' },
+    { key: 'rock', label: 'Depth to rock' },
   ];
 
   return (
@@ -146,6 +148,11 @@ export function LinePage() {
       {visited.has('inversions') && (
         <TabPanel idPrefix={idPrefix} tabKey="inversions" hidden={tab !== 'inversions'}>
           <LineInversionsPanel line={l} />
+        </TabPanel>
+      )}
+      {visited.has('rock') && (
+        <TabPanel idPrefix={idPrefix} tabKey="rock" hidden={tab !== 'rock'}>
+          <DepthToRockTab line={l} />
         </TabPanel>
       )}
     </>

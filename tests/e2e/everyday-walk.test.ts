@@ -55,8 +55,8 @@ describe('every role, every page, desktop and phone: no sideways scroll, a clean
     const { projectId, lineId, modelId, runId, reportId } = ids;
     const common = ['/', '/account', `/projects/${projectId}`, `/reports/${reportId}`];
     if (role === 'client') return common;
-    const tabs = ['stations', 'records', 'boreholes', 'picks', 'checks', 'layers', 'models', 'runs', 'inversions'].map((t) => `/lines/${lineId}?tab=${t}`);
-    return [...common, ...tabs, `/lines/${lineId}/picking`, `/models/${modelId}`, `/runs/${runId}`, `/runs/${runId}?view=curves`, `/runs/${runId}?view=misfit`, `/runs/${runId}?view=table`];
+    const tabs = ['stations', 'records', 'boreholes', 'picks', 'checks', 'layers', 'models', 'runs', 'inversions', 'rock'].map((t) => `/lines/${lineId}?tab=${t}`);
+    return [...common, ...tabs, `/lines/${lineId}/picking`, `/models/${modelId}`, `/runs/${runId}`, `/runs/${runId}?view=curves`, `/runs/${runId}?view=misfit`, `/runs/${runId}?view=table`, `/runs/${runId}?view=exports`, `/projects/${projectId}/plan`];
   };
 
   async function walk(page: Page, role: string, size: { width: number }): Promise<string[]> {
