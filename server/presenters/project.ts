@@ -1,12 +1,18 @@
 import type { Project, SurveyLine } from '../entities';
 import type { ProjectRole } from '../../shared/schemas/projects';
-import { crsByCode } from '../geo/crs';
+import { crsByCode, CrsError } from '../geo/crs';
 
 /** The project's CRS as the pages show it: code, name and area of use. */
 function crsSummary(code: number | null) {
   if (code === null) return null;
-  const c = crsByCode(code);
-  return { code: c.code, name: c.name, area: c.area, lonLat: c.noDatumShift === null };
+  try {
+    const c = crsByCode(code);
+    return { code: c.code, name: c.name, area: c.area, lonLat: c.noDatumShift === null };
+  } catch (e) {
+    // A code stored earlier that today's definitions no longer serve: shown, not fatal.
+    if (e instanceof CrsError) return { code, name: e.message, area: '', lonLat: false };
+    throw e;
+  }
 }
 
 export function presentProject(p: Project, myRole: ProjectRole | null) {

@@ -5,7 +5,7 @@
 import { nodeX, nodeZ } from '../grid';
 import { doiBetweenColumns } from '../model/resolved-iso-depth';
 import { mapPositionAt } from './along-line';
-import { depthToRock, rockDepthAt, surfaceName, type RockSurface } from './depth-to-rock';
+import { depthToRock, rockDepthAt, rockTies, surfaceName, type RockSurface } from './depth-to-rock';
 import { EXCAVATABILITY_CAUTION, type ExcavatabilityClass } from './excavatability';
 import type { ExportSection } from './section';
 
@@ -51,11 +51,22 @@ export function depthToRockCsv(section: ExportSection, surface: RockSurface, cla
   lines.push(`# rock surface: ${surfaceName(section, surface)}`);
   const bands = (classes ?? []).filter((c) => c.from > 0);
   if (bands.length) lines.push(`# excavatability: depth to the velocity at which each class begins. ${EXCAVATABILITY_CAUTION}`);
-  const header = ['station', 'chainage_m', 'easting_m', 'northing_m', 'ground_elevation_m', 'rock_depth_m', 'rock_elevation_m', 'note', ...bands.map((b) => text(`depth_to_${b.from}_m_s_${b.name.replace(/\s+/g, '_')}_m`))];
+  // A layered model's other interfaces too, each by its layer's name.
+  const others = section.interfaces.map((f, index) => ({ f, index })).filter(({ index }) => !(surface.kind === 'interface' && surface.index === index));
+  const header = [
+    'station', 'chainage_m', 'easting_m', 'northing_m', 'ground_elevation_m', 'rock_depth_m', 'rock_elevation_m', 'note',
+    ...others.map(({ f }) => text(`base_of_${f.name.replace(/\s+/g, '_')}_depth_m`)),
+    ...bands.map((b) => text(`depth_to_${b.from}_m_s_${b.name.replace(/\s+/g, '_')}_m`)),
+  ];
   lines.push(header.join(','));
   for (const r of depthToRock(section, surface)) {
+    const interfaceDepths = others.map(({ index }) => cell(rockDepthAt(section, { kind: 'interface', index }, r.x).depth, 2));
     const classDepths = bands.map((b) => cell(rockDepthAt(section, { kind: 'iso', velocity: b.from }, r.x).depth, 2));
-    lines.push([text(String(r.station)), cell(r.x, 3), cell(r.easting, 3), cell(r.northing, 3), cell(r.groundZ, 3), cell(r.depth, 2), cell(r.elevation, 3), text(r.note), ...classDepths].join(','));
+    lines.push([text(String(r.station)), cell(r.x, 3), cell(r.easting, 3), cell(r.northing, 3), cell(r.groundZ, 3), cell(r.depth, 2), cell(r.elevation, 3), text(r.note), ...interfaceDepths, ...classDepths].join(','));
+  }
+  // Ties to the logs after the table, as comments so the table reads as one block.
+  for (const t of rockTies(section, surface)) {
+    lines.push(`# tie at ${t.hole} (x ${t.x} m): ${t.material} logged at ${t.logged} m, interpreted ${t.interpreted === null ? 'not resolved' : `${t.interpreted.toFixed(2)} m, difference ${t.difference! > 0 ? '+' : ''}${t.difference!.toFixed(2)} m`}`);
   }
   return lines.join('\n') + '\n';
 }

@@ -38,8 +38,9 @@ const MAX_TURN_DEG = 90;
 
 /**
  * A station list whose coordinates double back (a turn of more than 90° between consecutive steps),
- * jump (a step over three typical spacings and 5 m longer), repeat a point, or disagree with the
- * chainage given beside them (by more than 0.5 m or 5 % of the step): each problem at its point.
+ * jump (without chainage: a step over three typical spacings and 5 m longer), repeat a point, or
+ * disagree with the chainage given beside them (by more than 0.5 m or 5 % of the step): each problem
+ * at its point.
  */
 export function coordinateProblems(points: readonly MapPoint[], chainage?: readonly (number | null)[]): CoordinateProblem[] {
   const problems: CoordinateProblem[] = [];
@@ -51,8 +52,9 @@ export function coordinateProblems(points: readonly MapPoint[], chainage?: reado
     const at = i + 1;
     const length = lengths[i];
     if (length === 0) return problems.push({ index: at, message: 'has the same easting and northing as the station before it' });
-    if (typical > 0 && length > JUMP_FACTOR * typical && length > typical + 5) {
-      problems.push({ index: at, message: `is ${length.toFixed(1)} m from the station before it, where stations are typically ${typical.toFixed(1)} m apart: a coordinate looks wrong` });
+    // With the chainage given beside them, a long step that agrees with it is a real gap (checked below).
+    if (!chainage && typical > 0 && length > JUMP_FACTOR * typical && length > typical + 5) {
+      problems.push({ index: at, message: `is ${length.toFixed(1)} m from the station before it, where stations are typically ${typical.toFixed(1)} m apart: a coordinate looks wrong (if the line really skips here, give the chainage x as well)` });
     }
     if (i > 0 && lengths[i - 1] > 0) {
       const prev = steps[i - 1];

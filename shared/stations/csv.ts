@@ -1,7 +1,7 @@
 import { outOfRange, X_RANGE, Z_RANGE } from '../limits';
 import { parseDecimal, splitCsvLine } from '../picks/fields';
 import type { Station } from '../schemas/stations';
-import { chainageAlong } from '../geo/chainage';
+import { chainageAlong, coordinateProblems } from '../geo/chainage';
 import { checkStationTable, type StationIssue } from './rules';
 import { notTextMessage } from '../files/not-text';
 
@@ -99,7 +99,13 @@ export function parseStationCsv(text: string, options: StationCsvOptions = {}): 
   if (!rows.length && !issues.length) return { ok: false, issues: [{ row: 0, line: headerLine, column: null, message: 'the file has a header but no stations' }] };
   if (issues.length) return { ok: false, issues };
   const located = rows[0].easting !== null;
-  const chainage = header.x !== undefined ? rows.map((r) => r.x!) : chainageAlong(rows.map((r) => ({ easting: r.easting!, northing: r.northing! })));
+  const points = rows.map((r) => ({ easting: r.easting!, northing: r.northing! }));
+  if (header.x === undefined) {
+    // The chainage comes from the coordinates alone: they must hold together on their own (no jumps either).
+    for (const p of coordinateProblems(points)) issues.push({ row: p.index + 1, line: rowLines[p.index], column: 'easting', message: p.message });
+    if (issues.length) return { ok: false, issues };
+  }
+  const chainage = header.x !== undefined ? rows.map((r) => r.x!) : chainageAlong(points);
   const stations: Station[] = rows.map((r, i) => ({
     station: r.station,
     x: +chainage[i].toFixed(4),

@@ -83,6 +83,8 @@ describe('section exports', () => {
     expect(table.map((r) => Number(r[5]))).toEqual([3, 4, 5, 6, 7]);
     expect(table.map((r) => Number(r[2]))).toEqual([500000, 500010, 500020, 500030, 500040]);
     expect(res.text).toMatch(/# rock surface: the base of topsoil/);
+    // The line's borehole is tied after the table (world: a hole at x 5 m, top of rock logged at 3 m; the model puts it at 3 + 5/10 m).
+    expect(res.text).toMatch(/# tie at BH\d+ \(x 5 m\): rock logged at 3 m, interpreted 3\.50 m, difference \+0\.50 m/);
     const classes = await geo.get(`/api/models/${modelId}/export/depth-to-rock.csv`);
     expect(classes.text).toMatch(/Weaver|only indicate how the ground may dig/);
     expect(classes.text).toMatch(/depth_to_1200_m_s_hard_ripping_m/);
