@@ -13,6 +13,8 @@ export interface ReportEvent {
  */
 export function presentReport(r: Report, history: ReportEvent[], forClient: boolean) {
   const approvedReady = r.approvedPdfRenderedAt !== null;
+  // Whether the report's line was in map coordinates when it was made: its GeoJSON can then be offered.
+  const mapped = Boolean(r.snapshot?.crs && r.snapshot.stations.some((s) => s.easting !== undefined));
   if (forClient) {
     return {
       id: r.id,
@@ -24,6 +26,7 @@ export function presentReport(r: Report, history: ReportEvent[], forClient: bool
       render: { state: approvedReady ? 'ready' : 'queued', renderedAt: r.approvedPdfRenderedAt },
       pdfReady: approvedReady,
       options: r.options,
+      mapped,
       createdAt: r.createdAt,
       history: history.map(({ at, action }) => ({ at, action })),
     };
@@ -39,6 +42,7 @@ export function presentReport(r: Report, history: ReportEvent[], forClient: bool
     render: { state: r.renderState, error: r.renderError ?? undefined, renderedAt: r.pdfRenderedAt, approvedRenderedAt: r.approvedPdfRenderedAt },
     pdfReady: r.renderState === 'ready' || r.pdfRenderedAt !== null || approvedReady,
     options: r.options,
+    mapped,
     createdAt: r.createdAt,
     history,
   };

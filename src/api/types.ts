@@ -394,6 +394,8 @@ export interface ReportDetail {
   runId: string | null;
   inversionId: string | null;
   /** Staff only: the line the report is about. */
+  /** The report's line had map coordinates when it was made (its GeoJSON is offered). */
+  mapped?: boolean;
   lineId?: string | null;
   projectId: string;
   status: ReportStatus;

@@ -18,7 +18,7 @@ export function PdfPanel({ report, forClient = false }: { report: ReportDetail; 
         {[
           ['section.dxf', 'DXF'],
           ['depth-to-rock.csv', 'depth-to-rock table (CSV)'],
-          ['depth-to-rock.geojson', 'GeoJSON'],
+          ...(report.mapped ? [['depth-to-rock.geojson', 'GeoJSON']] : []),
         ].map(([file, label], i) => (
           <span key={file}>
             {i > 0 && ' · '}
