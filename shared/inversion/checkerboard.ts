@@ -7,6 +7,7 @@
  * how much of a feature of that size the data can resolve.
  */
 import type { Grid } from '../grid';
+import { mulberry32 } from '../random';
 
 export const CHECKER_AMPLITUDE = 0.07;
 
@@ -57,14 +58,7 @@ export function correlation(a: Float32Array, b: Float32Array, mask: (i: number) 
 
 /** Seeded normal deviates (mulberry32 + Box–Muller), so a checkerboard test repeats exactly. */
 export function normalDeviates(seed: number): () => number {
-  let s = seed >>> 0;
-  const uniform = (): number => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const uniform = mulberry32(seed);
   return () => {
     const u = Math.max(uniform(), 1e-12);
     return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * uniform());

@@ -2,17 +2,11 @@
  * Pieces of synthetic seismograms, for the demo records and the picker's measurements: a seeded
  * normal generator, a causal geophone-like wavelet, and band-limited noise. Deterministic.
  */
+import { mulberry32 } from '../random';
 
 /** Seeded normal deviates: mulberry32 uniforms through Box–Muller. */
 export function normals(seed: number): () => number {
-  let a = seed >>> 0;
-  const uniform = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const uniform = mulberry32(seed);
   return () => Math.sqrt(-2 * Math.log(1 - uniform())) * Math.cos(2 * Math.PI * uniform());
 }
 

@@ -1,0 +1,15 @@
+/**
+ * Seeded uniform deviates in [0, 1): mulberry32, a small 32-bit generator (T. Ettinger's public
+ * mulberry32; from memory), so synthetic data, checkerboards and ensemble members repeat exactly
+ * from their recorded seeds.
+ */
+export function mulberry32(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}

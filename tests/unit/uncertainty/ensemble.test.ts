@@ -1,0 +1,104 @@
+/**
+ * The pieces of an ensemble (issue 20): member plans, perturbed picks and the combination, against
+ * NumPy (a general-purpose reference library, installed with python3-segyio) for the statistics and
+ * against exact depths for the band: in a member whose velocity is v = 500 + k·depth, the depth of
+ * v* is (v* − 500)/k exactly (iso-depth interpolates linearly between node rows).
+ */
+import { execFileSync } from 'node:child_process';
+import { describe, expect, it } from 'vitest';
+import type { Grid } from '../../../shared/grid';
+import type { InversionShot } from '../../../shared/inversion/types';
+import { combineMembers, quantile, type MemberSection } from '../../../shared/uncertainty/combine';
+import { memberShots } from '../../../shared/uncertainty/perturb';
+import { planMembers, SPREAD } from '../../../shared/uncertainty/plan';
+
+const numpy = (script: string, input: unknown): unknown =>
+  JSON.parse(execFileSync('/usr/bin/python3', ['-c', `import sys, json, numpy as np\nd = json.loads(sys.stdin.read())\n${script}`], { input: JSON.stringify(input), encoding: 'utf8' }));
+
+describe('ensemble statistics', () => {
+  it('takes quantiles as NumPy does (linear between order statistics, Hyndman & Fan type 7)', () => {
+    const sets = [[3.2], [1, 2], [5, 1, 4, 2, 3], Array.from({ length: 24 }, (_, i) => Math.sin(i * 1.7) * 10 + i / 3)];
+    const ours = sets.map((s) => [0.05, 0.5, 0.95].map((p) => quantile([...s].sort((a, b) => a - b), p)));
+    const theirs = numpy('print(json.dumps([[float(np.percentile(s, q)) for q in (5, 50, 95)] for s in d]))', sets) as number[][];
+    ours.forEach((row, i) => row.forEach((v, j) => expect(v).toBeCloseTo(theirs[i][j], 10)));
+  });
+
+  // 21 × 11 nodes, 1 m apart, flat ground at z = 10: member k has v = 500 + g_k · depth, covered everywhere, rays to the bottom.
+  const grid: Grid = { x0: 0, dx: 1, nx: 21, z0: 10, dz: 1, nz: 11 };
+  const gradients = [100, 120, 150, 200, 250, 80];
+  const member = (g: number, chi2: number): MemberSection => ({
+    velocity: Float32Array.from({ length: grid.nx * grid.nz }, (_, i) => 500 + g * Math.floor(i / grid.nx)),
+    coverage: new Float32Array(grid.nx * grid.nz).fill(5),
+    doi: new Float64Array(grid.nx).fill(0),
+    chi2,
+  });
+  const members = [...gradients.map((g) => member(g, 1.0)), member(400, 3.5)]; // the last fits badly
+  const summary = combineMembers(members, grid, [[0, 10], [20, 10]], { threshold: 1, rockVelocity: 1200, stationXs: [0, 7.5, 20] });
+
+  it('leaves out members that do not fit (χ² > 1.2) and counts them', () => {
+    expect([summary.used, summary.excluded]).toEqual([6, 1]);
+  });
+
+  it('gives each node the mean and sample standard deviation of the members, as NumPy', () => {
+    const depth = 6;
+    const values = gradients.map((g) => 500 + g * depth);
+    const [mean, sd] = numpy('print(json.dumps([float(np.mean(d)), float(np.std(d, ddof=1))]))', values) as number[];
+    const i = depth * grid.nx + 4;
+    expect(summary.mean[i]).toBeCloseTo(mean, 3);
+    expect(summary.std[i]).toBeCloseTo(sd, 2);
+    // Faster than 1200 m/s at 6 m: 500 + 6g > 1200 for g > 116.7 → 4 of 6 members.
+    expect(summary.probabilityFaster[i]).toBeCloseTo(4 / 6, 6);
+  });
+
+  it('bands the depth of the chosen velocity at each station: median and 5–95 % of the exact member depths', () => {
+    const exact = gradients.map((g) => (1200 - 500) / g);
+    const [p5, median, p95] = numpy('print(json.dumps([float(np.percentile(d, q)) for q in (5, 50, 95)]))', exact) as number[];
+    for (const band of summary.bands) {
+      expect(band.resolved).toBe(6);
+      expect(band.median).toBeCloseTo(median, 5);
+      expect(band.p5).toBeCloseTo(p5, 5);
+      expect(band.p95).toBeCloseTo(p95, 5);
+    }
+  });
+});
+
+describe('member plans and picks', () => {
+  it('draws each member from its own seed, the same every time, within the stated spreads', () => {
+    const a = planMembers(64, 42, { start: true, smoothing: true, picks: 'sigma' });
+    expect(planMembers(64, 42, { start: true, smoothing: true, picks: 'sigma' })).toEqual(a);
+    expect(new Set(a.map((m) => m.seed)).size).toBe(64);
+    for (const m of a) {
+      expect(m.v0Factor).toBeGreaterThanOrEqual(1 / SPREAD.v0);
+      expect(m.v0Factor).toBeLessThanOrEqual(SPREAD.v0);
+      expect(m.kFactor).toBeGreaterThanOrEqual(1 / SPREAD.k);
+      expect(m.smoothingFactor).toBeLessThanOrEqual(SPREAD.smoothing);
+    }
+    const fixed = planMembers(4, 42, { start: false, smoothing: false, picks: 'none' });
+    expect(fixed.every((m) => m.v0Factor === 1 && m.kFactor === 1 && m.smoothingFactor === 1)).toBe(true);
+  });
+
+  const shots: InversionShot[] = Array.from({ length: 10 }, (_, k) => ({
+    shotId: `S${k + 1}`,
+    source: { x: 5 * k, z: 0 },
+    receivers: new Float64Array(4000),
+    times: Float64Array.from({ length: 2000 }, (_, i) => 0.01 + i * 1e-5),
+    sigmas: new Float64Array(2000).fill(0.0005),
+  }));
+
+  it('moves each pick by its sigma times a standard normal deviate', () => {
+    const moved = memberShots(shots, { seed: 7, picks: 'sigma' });
+    const z = moved.flatMap((s, k) => Array.from(s.times, (t, i) => (t - shots[k].times[i]) / shots[k].sigmas[i]));
+    const [mean, sd] = numpy('print(json.dumps([float(np.mean(d)), float(np.std(d, ddof=1))]))', z) as number[];
+    // 20 000 deviates: the mean within 3 standard errors (0.02) of 0, the spread within 2 % of 1.
+    expect(Math.abs(mean)).toBeLessThan(0.03);
+    expect(Math.abs(sd - 1)).toBeLessThan(0.02);
+  });
+
+  it('resamples whole shots with replacement, keeping their count', () => {
+    const drawn = memberShots(shots, { seed: 11, picks: 'bootstrap' });
+    expect(drawn).toHaveLength(shots.length);
+    expect(new Set(drawn.map((s) => s.shotId)).size).toBe(shots.length);
+    for (const s of drawn) expect(shots.some((o) => o.times === s.times && s.shotId.startsWith(`${o.shotId}#`))).toBe(true);
+    expect(new Set(drawn.map((s) => s.shotId.split('#')[0])).size).toBeLessThan(shots.length); // some drawn twice (seed 11)
+  });
+});
