@@ -84,6 +84,11 @@ export function gradientStart(
   settings: Pick<InversionSettings, 'vMin' | 'vMax'>,
 ): { velocity: Float32Array; v0: number; k: number } {
   const { v0, k } = fitGradient(shots);
+  return { velocity: gradientVelocity(grid, active, surfaceZ, v0, k, settings), v0, k };
+}
+
+/** v = v0 + k·depth below the ground surface at every ground node, clipped to the bounds; air nodes get v0. */
+export function gradientVelocity(grid: Grid, active: Uint8Array, surfaceZ: (x: number) => number, v0: number, k: number, settings: Pick<InversionSettings, 'vMin' | 'vMax'>): Float32Array {
   const velocity = new Float32Array(grid.nx * grid.nz);
   for (let ix = 0; ix < grid.nx; ix++) {
     const top = surfaceZ(grid.x0 + ix * grid.dx);
@@ -93,5 +98,5 @@ export function gradientStart(
       velocity[i] = active[i] ? Math.min(settings.vMax, Math.max(settings.vMin, v0 + k * depth)) : v0;
     }
   }
-  return { velocity, v0, k };
+  return velocity;
 }

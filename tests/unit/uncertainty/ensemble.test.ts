@@ -102,3 +102,20 @@ describe('member plans and picks', () => {
     expect(new Set(drawn.map((s) => s.shotId.split('#')[0])).size).toBeLessThan(shots.length); // some drawn twice (seed 11)
   });
 });
+
+describe('a member\'s problem', () => {
+  it('starts from the fitted gradient times the member\'s factors, with the final weight times its factor', async () => {
+    const { memberProblem } = await import('../../../shared/uncertainty/member');
+    const grid: Grid = { x0: 0, dx: 2, nx: 6, z0: 20, dz: 2, nz: 6 };
+    const active = new Uint8Array(36).fill(1);
+    const settings = { maxIterations: 10, smoothing: null, verticalWeight: 0.5, damping: 0.05, vMin: 100, vMax: 7000, order: 2 as const, checkerboard: true, checkerSize: null };
+    const base = { problem: { grid, active, start: new Float32Array(36).fill(1), shots: [], settings }, surfaceZ: () => 20, fit: { v0: 400, k: 50 }, finalSmoothing: 6 };
+    const p = memberProblem(base, { index: 0, seed: 1, v0Factor: 1.2, kFactor: 0.5, smoothingFactor: 2, picks: 'none' });
+    // Node (ix 3, iz 4) lies 8 m below the flat ground: 480 + 25 · 8 = 680 m/s.
+    expect(p.start[4 * 6 + 3]).toBe(680);
+    expect(p.settings.smoothing).toBe(12);
+    expect(p.settings.checkerboard).toBe(false);
+    // No start factors, or a saved-model start: the base's own start.
+    expect(memberProblem({ ...base, fit: null }, { index: 0, seed: 1, v0Factor: 1.2, kFactor: 0.5, smoothingFactor: 1, picks: 'none' }).start).toBe(base.problem.start);
+  });
+});
