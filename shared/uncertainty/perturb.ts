@@ -25,3 +25,25 @@ export function memberShots(shots: readonly InversionShot[], plan: Pick<MemberPl
     times: Float64Array.from(s.times, (t, i) => (t === 0 ? 0 : Math.max(0, t + s.sigmas[i] * normal()))),
   }));
 }
+
+/**
+ * χ² per datum of a member's computed times against the original picks (not its perturbed ones):
+ * perturbing picks by their sigma doubles their noise, so a member that fits its own picks as well
+ * as the data allow shows χ² ≈ 2 against them, while its model explains the real picks to χ² ≈ 1.
+ * `computed` is in the member's pick order; bootstrap copies map back to their shot by id.
+ */
+export function chi2AgainstOriginal(original: readonly InversionShot[], member: readonly InversionShot[], computed: ArrayLike<number>): number {
+  const byId = new Map(original.map((s) => [s.shotId, s]));
+  let sum = 0, count = 0, at = 0;
+  for (const s of member) {
+    const o = byId.get(s.shotId.split('#')[0])!;
+    for (let i = 0; i < s.times.length; i++, at++) {
+      const c = computed[at];
+      if (!Number.isFinite(c)) continue;
+      const r = (o.times[i] - c) / o.sigmas[i];
+      sum += r * r;
+      count++;
+    }
+  }
+  return count ? sum / count : Number.NaN;
+}

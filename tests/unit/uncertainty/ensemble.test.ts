@@ -119,3 +119,19 @@ describe('a member\'s problem', () => {
     expect(memberProblem({ ...base, fit: null }, { index: 0, seed: 1, v0Factor: 1.2, kFactor: 0.5, smoothingFactor: 1, picks: 'none' }).start).toBe(base.problem.start);
   });
 });
+
+describe('a member judged against the original picks', () => {
+  it('measures χ² per datum against the picks as observed, whatever the member fitted (hand-computed)', async () => {
+    const { chi2AgainstOriginal, memberShots } = await import('../../../shared/uncertainty/perturb');
+    const original: InversionShot[] = [
+      { shotId: 'A', source: { x: 0, z: 0 }, receivers: new Float64Array(4), times: Float64Array.of(0.01, 0.02), sigmas: Float64Array.of(0.001, 0.001) },
+      { shotId: 'B', source: { x: 9, z: 0 }, receivers: new Float64Array(2), times: Float64Array.of(0.03), sigmas: Float64Array.of(0.002) },
+    ];
+    const perturbed = memberShots(original, { seed: 5, picks: 'sigma' });
+    // Computed times 1 ms off on A's picks (1σ each) and 4 ms off on B's (2σ): (1 + 1 + 4) / 3 = 2.
+    expect(chi2AgainstOriginal(original, perturbed, [0.011, 0.019, 0.034])).toBeCloseTo(2, 10);
+    // A bootstrap member that drew B twice: each copy is compared with B's own pick.
+    const drawn = [{ ...original[1], shotId: 'B#1' }, { ...original[1], shotId: 'B#2' }];
+    expect(chi2AgainstOriginal(original, drawn, [0.032, 0.028])).toBeCloseTo(1, 10);
+  });
+});
