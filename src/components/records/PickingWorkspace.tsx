@@ -32,7 +32,6 @@ interface Props {
 }
 
 /** Hand picks stay when the picker runs again; its picks fill the rest. */
-const keepHandPicks = (auto: RecordPickMarks, before: RecordPickMarks | undefined): RecordPickMarks => auto.map((m, i) => (before?.[i]?.how === 'hand' ? before[i] : m));
 
 /**
  * Picking first breaks on a line's records: the record in view with its display controls, the
@@ -57,7 +56,7 @@ export function PickingWorkspace({ lineId, records, record, onRecord, canPick, p
       for (const [i, r] of records.entries()) {
         // The headers too: the curves beside the record need the receiver positions.
         const [read, headers] = await Promise.all([queryClient.fetchQuery(recordFileQuery(r.id, r.fileName)), queryClient.fetchQuery(recordDetailQuery(r.id))]);
-        dispatch({ kind: 'replace', recordId: r.id, marks: keepHandPicks(autoPickRecord(read, headers), picking.byRecord[r.id]) });
+        dispatch({ kind: 'auto', recordId: r.id, marks: await autoPickRecord(read, headers) });
         setAutoAll({ done: i + 1, error: null });
         // Let the page draw between records.
         await new Promise((resolve) => setTimeout(resolve, 0));
@@ -188,6 +187,19 @@ function RecordPicker({ summary, read, detail, display, canPick, marks, dispatch
     [prepared, dtMs, delayMs, shiftMs, traces, view, display.mode, display.gain, display.clip, picks, selected],
   );
 
+  // The picker runs in a worker; its picks arrive a moment later and never overwrite hand picks.
+  const [autoState, setAutoState] = useState<string | null>(null);
+  const autoPick = useCallback(() => {
+    setAutoState('busy');
+    autoPickRecord(read, detail).then(
+      (result) => {
+        dispatch({ kind: 'auto', recordId: summary.id, marks: result });
+        setAutoState(null);
+      },
+      (err) => setAutoState(errorMessage(err)),
+    );
+  }, [read, detail, dispatch, summary.id]);
+
   const setPick = useCallback(
     (trace: number, timeMs: number | null) =>
       dispatch({
@@ -238,7 +250,7 @@ function RecordPicker({ summary, read, detail, display, canPick, marks, dispatch
           return true;
         case 'a':
         case 'A':
-          if (canPick) dispatch({ kind: 'replace', recordId: summary.id, marks: keepHandPicks(autoPickRecord(read, detail), marks) });
+          if (canPick) autoPick();
           return true;
         case 'z':
         case 'Z':
@@ -290,9 +302,14 @@ function RecordPicker({ summary, read, detail, display, canPick, marks, dispatch
           Whole record
         </Button>
         {canPick && (
-          <Button size="sm" variant="secondary" onClick={() => dispatch({ kind: 'replace', recordId: summary.id, marks: keepHandPicks(autoPickRecord(read, detail), marks) })} data-testid="autopick-record">
+          <Button size="sm" variant="secondary" onClick={autoPick} busy={autoState === 'busy'} busyLabel="Auto-picking…" data-testid="autopick-record">
             Auto-pick this record
           </Button>
+        )}
+        {autoState && autoState !== 'busy' && (
+          <span role="alert" className="text-sm font-semibold text-red-800">
+            {autoState}
+          </span>
         )}
       </div>
       <RecordCanvas

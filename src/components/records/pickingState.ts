@@ -22,6 +22,8 @@ export interface PickingState {
 export type PickingAction =
   | { kind: 'set'; recordId: string; traces: number; trace: number; mark: TracePickMark | null }
   | { kind: 'replace'; recordId: string; marks: RecordPickMarks }
+  /** Automatic picks arriving (from the picker worker): hand picks made meanwhile or before are kept. */
+  | { kind: 'auto'; recordId: string; marks: RecordPickMarks }
   | { kind: 'undo' }
   | { kind: 'saved' };
 
@@ -41,6 +43,10 @@ export function pickingReducer(state: PickingState, action: PickingAction): Pick
     }
     case 'replace':
       return change(state, action.recordId, state.byRecord[action.recordId], action.marks);
+    case 'auto': {
+      const before = state.byRecord[action.recordId];
+      return change(state, action.recordId, before, action.marks.map((m, i) => (before?.[i]?.how === 'hand' ? before[i] : m)));
+    }
     case 'undo': {
       const last = state.history[state.history.length - 1];
       if (!last) return state;

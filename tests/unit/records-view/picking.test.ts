@@ -30,6 +30,16 @@ describe('picking state', () => {
     expect(u2.unsaved).toBe(1);
   });
 
+  it('takes automatic picks arriving from the picker worker without overwriting hand picks made before or meanwhile', () => {
+    const auto = (timeMs: number) => ({ timeMs, sigmaMs: 0.4, how: 'auto' as const });
+    const s = run([
+      { kind: 'set', recordId: 'r1', traces: 3, trace: 1, mark: hand(10) },
+      { kind: 'auto', recordId: 'r1', marks: [auto(8), auto(11), null] },
+    ]);
+    expect(s.byRecord.r1).toEqual([auto(8), hand(10), null]);
+    expect(run([{ kind: 'undo' }], s).byRecord.r1).toEqual([null, hand(10), null]);
+  });
+
   it('does not record a change that changes nothing, and a save clears the unsaved count but keeps undo', () => {
     const s = run([
       { kind: 'set', recordId: 'r1', traces: 2, trace: 0, mark: hand(3) },
