@@ -102,7 +102,7 @@ export async function invert(problem: InversionProblem, modeller: ForwardModelle
   if (fit.used === 0) throw new InversionInputError('no pick can be reached by a wave in the starting model');
 
   const history: IterationRecord[] = resume ? [...resume.history] : [];
-  let lambda = resume ? resume.nextSmoothing : settings.smoothing ?? AUTO_SMOOTHING_START;
+  let lambda = resume ? resume.nextSmoothing : settings.smoothing ?? problem.autoSmoothingStart ?? AUTO_SMOOTHING_START;
   let scale = resume ? resume.scale : 0;
   const checkpoint = (): InversionCheckpoint => ({ history: [...history], velocity, nextSmoothing: lambda, scale });
   if (!resume) {

@@ -55,6 +55,8 @@ export interface InversionProblem {
   smoothingActsOn?: 'model' | 'departure';
   /** The ground surface line (RasterModel.surface): the solver then follows it exactly near the surface. */
   surface?: Point[];
+  /** Where the automatic smoothing schedule starts (default AUTO_SMOOTHING_START); an ensemble member starts it elsewhere. */
+  autoSmoothingStart?: number;
 }
 
 /** Travel times and ray sensitivities for every pick, in problem order (shot by shot). */

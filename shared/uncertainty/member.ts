@@ -1,10 +1,11 @@
 /**
  * One member's inversion problem: the ensemble's base problem with this member's draws applied —
  * its own picks (perturb.ts), its own starting gradient (the fitted v0 and k times the member's
- * factors; a start from a saved model is kept as it is), and a fixed regularisation weight: the
- * weight the automatic schedule ended on in the base inversion, times the member's factor. A fixed
- * weight, not the schedule, so members really differ in smoothness; those that then fit the picks
- * poorly are left out when the members are combined (combine.ts).
+ * factors; a start from a saved model is kept as it is), and its own regularisation weight: the
+ * automatic schedule started at the weight the base inversion ended on times the member's factor
+ * (a base with a fixed weight: that weight times the factor). Each member then stops, as the base
+ * did, at the first weight that explains the picks, so members differ in smoothness yet fit.
+ * (Measured: a fixed weight instead left 11 of 12 members unfitted at 0.2 ms noise.)
  */
 import { gradientVelocity } from '../inversion/gradient-start';
 import type { InversionProblem } from '../inversion/types';
@@ -16,7 +17,7 @@ export interface EnsembleBase {
   surfaceZ: (x: number) => number;
   /** The gradient fitted for the automatic start; null when the base started from a saved model. */
   fit: { v0: number; k: number } | null;
-  /** The regularisation weight of the base inversion's last step. */
+  /** The regularisation weight of the base inversion's last step (used when it ran the automatic schedule). */
   finalSmoothing: number;
 }
 
@@ -30,6 +31,8 @@ export function memberProblem(base: EnsembleBase, plan: MemberPlan): InversionPr
     ...problem,
     start,
     shots: memberShots(problem.shots, plan),
-    settings: { ...problem.settings, smoothing: base.finalSmoothing * plan.smoothingFactor, checkerboard: false },
+    ...(problem.settings.smoothing === null
+      ? { settings: { ...problem.settings, checkerboard: false }, autoSmoothingStart: base.finalSmoothing * plan.smoothingFactor }
+      : { settings: { ...problem.settings, smoothing: problem.settings.smoothing * plan.smoothingFactor, checkerboard: false } }),
   };
 }

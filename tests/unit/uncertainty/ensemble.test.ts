@@ -104,7 +104,7 @@ describe('member plans and picks', () => {
 });
 
 describe('a member\'s problem', () => {
-  it('starts from the fitted gradient times the member\'s factors, with the final weight times its factor', async () => {
+  it('starts from the fitted gradient times the member\'s factors, and the weight schedule from the final weight times its factor', async () => {
     const { memberProblem } = await import('../../../shared/uncertainty/member');
     const grid: Grid = { x0: 0, dx: 2, nx: 6, z0: 20, dz: 2, nz: 6 };
     const active = new Uint8Array(36).fill(1);
@@ -113,8 +113,12 @@ describe('a member\'s problem', () => {
     const p = memberProblem(base, { index: 0, seed: 1, v0Factor: 1.2, kFactor: 0.5, smoothingFactor: 2, picks: 'none' });
     // Node (ix 3, iz 4) lies 8 m below the flat ground: 480 + 25 · 8 = 680 m/s.
     expect(p.start[4 * 6 + 3]).toBe(680);
-    expect(p.settings.smoothing).toBe(12);
+    expect(p.settings.smoothing).toBeNull(); // the automatic schedule, as the base ran it …
+    expect(p.autoSmoothingStart).toBe(12); // … started at 6 × 2
     expect(p.settings.checkerboard).toBe(false);
+    // A base with a fixed weight: the member's weight is fixed too, times its factor.
+    const fixed = memberProblem({ ...base, problem: { ...base.problem, settings: { ...settings, smoothing: 4 } } }, { index: 0, seed: 1, v0Factor: 1, kFactor: 1, smoothingFactor: 0.5, picks: 'none' });
+    expect([fixed.settings.smoothing, fixed.autoSmoothingStart]).toEqual([2, undefined]);
     // No start factors, or a saved-model start: the base's own start.
     expect(memberProblem({ ...base, fit: null }, { index: 0, seed: 1, v0Factor: 1.2, kFactor: 0.5, smoothingFactor: 1, picks: 'none' }).start).toBe(base.problem.start);
   });
