@@ -5,7 +5,7 @@ import { projectFromParam, projectOfInversion, projectOfModel, projectOfRun } fr
 import { planDxf, planGeoJson } from '../../shared/exports/plan';
 import { projectPlan } from '../services/plan';
 import { toLonLat } from '../geo/crs';
-import { EXPORT_FILES, inversionSection, modelSection, runSection, writeExport, type ExportFile, type LoadedSection } from '../services/exports';
+import { EXPORT_FILES, fileSafe, inversionSection, modelSection, runSection, writeExport, type ExportFile, type LoadedSection } from '../services/exports';
 
 /**
  * Sections leave Timefield for CAD and GIS (issue 19): the same four files from a model version, a
@@ -52,13 +52,13 @@ export function exportsRouter(): Router {
   });
   r.get('/projects/:projectId/plan.dxf', authorize('project.plan', projectFromParam), async (req, res) => {
     const { plan } = await projectPlan(req.access!.projectId);
-    res.type('application/dxf').attachment(`${plan.project.replace(/[^A-Za-z0-9._-]+/g, '-')}-plan.dxf`).send(planDxf(plan, new Date().toISOString().slice(0, 10)));
+    res.type('application/dxf').attachment(`${fileSafe(plan.project)}-plan.dxf`).send(planDxf(plan, new Date().toISOString().slice(0, 10)));
   });
   r.get('/projects/:projectId/plan.geojson', authorize('project.plan', projectFromParam), async (req, res) => {
     const { plan, crs } = await projectPlan(req.access!.projectId);
     if (!crs) throw new HttpError(422, 'no_coordinates', 'GeoJSON needs real-world coordinates: set the project’s coordinate system first.');
     if (crs.noDatumShift) throw new HttpError(422, 'no_coordinates', `${crs.noDatumShift}, so GeoJSON (WGS 84) cannot be written.`);
-    res.type('application/geo+json').attachment(`${plan.project.replace(/[^A-Za-z0-9._-]+/g, '-')}-plan.geojson`).send(JSON.stringify(planGeoJson(plan, (e, n) => toLonLat(crs.code, e, n))));
+    res.type('application/geo+json').attachment(`${fileSafe(plan.project)}-plan.geojson`).send(JSON.stringify(planGeoJson(plan, (e, n) => toLonLat(crs.code, e, n))));
   });
   return r;
 }

@@ -99,6 +99,9 @@ export async function inversionSection(inversionId: string, threshold: number): 
   };
 }
 
+/** A download name from free text: letters, digits, dot, dash and underscore; the rest one dash. */
+export const fileSafe = (text: string): string => text.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/-+/g, '-');
+
 export interface ExportOptions {
   rock?: string;
   classes?: string;
@@ -136,7 +139,7 @@ function levels(text: string | undefined): number[] | undefined {
 /** The file's bytes, type and name. */
 export function writeExport(loaded: LoadedSection, file: ExportFile, options: ExportOptions): { body: string; type: string; name: string } {
   const { section, ctx } = loaded;
-  const stem = `${ctx.line}-${section.title.what}`.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/-+/g, '-').slice(0, 80);
+  const stem = fileSafe(`${ctx.line}-${section.title.what}`).slice(0, 80);
   switch (file) {
     case 'section.dxf':
       return { body: sectionDxf(section, { colourRange: ctx.velocityColours, levels: levels(options.levels) }), type: 'application/dxf', name: `${stem}.dxf` };
