@@ -6,7 +6,7 @@
  */
 import { evalPolyline } from '../model/polyline';
 import { isoVelocityDepth } from '../model/iso-depth';
-import { raySupport, resolvedIsoDepth } from '../model/resolved-iso-depth';
+import { raySupport, resolvedIsoDepth, type RaySupport } from '../model/resolved-iso-depth';
 import { mapPositionAt } from './along-line';
 import type { ExportSection } from './section';
 
@@ -55,16 +55,28 @@ export function rockDepthAt(section: ExportSection, surface: RockSurface, x: num
     const z = Math.min(evalPolyline(line, x), groundZ);
     return { depth: groundZ - z, elevation: z, note: '' };
   }
-  const surfaceZ = (at: number) => evalPolyline(section.surface, at);
+  const support = supportOf(section);
   if (section.coverage && section.doi) {
-    const r = resolvedIsoDepth(raySupport(grid, section.velocity, section.coverage, section.doi, section.coverageThreshold, surfaceZ), surface.velocity, x);
+    const r = resolvedIsoDepth(support, surface.velocity, x);
     if (r.status !== 'resolved') return { depth: null, elevation: null, note: r.status };
     return { depth: r.result!.depth, elevation: r.result!.elevation, note: '' };
   }
   if (!(x >= grid.x0 && x <= grid.x0 + (grid.nx - 1) * grid.dx)) return { depth: null, elevation: null, note: 'outside the section' };
-  const raster = raySupport(grid, section.velocity, section.velocity, new Float64Array(grid.nx), 0, surfaceZ).raster;
-  const r = isoVelocityDepth(raster, surface.velocity, x);
+  const r = isoVelocityDepth(support.raster, surface.velocity, x);
   return r.depth === null ? { depth: null, elevation: null, note: 'not reached within the section' } : { depth: r.depth, elevation: r.elevation, note: '' };
+}
+
+/** The air-filled raster and ray support of a section, built once per section (a table reads it at every station and class). */
+const supports = new WeakMap<ExportSection, RaySupport>();
+function supportOf(section: ExportSection): RaySupport {
+  let support = supports.get(section);
+  if (!support) {
+    const surfaceZ = (at: number) => evalPolyline(section.surface, at);
+    // Without rays only the raster is read (a model's iso-depths are not filtered by coverage).
+    support = raySupport(section.grid, section.velocity, section.coverage ?? section.velocity, section.doi ?? new Float64Array(section.grid.nx), section.coverageThreshold, surfaceZ);
+    supports.set(section, support);
+  }
+  return support;
 }
 
 /** One row per station. */
