@@ -1,10 +1,10 @@
 import 'reflect-metadata';
-import { hostname } from 'node:os';
 import { Queue, Worker } from 'bullmq';
 import { initDataSource } from '../server/db/dataSource';
 import { createRedis, QUEUE_NAME } from '../server/queue/connection';
 import { logOutages } from '../server/queue/outage-log';
 import { startHeartbeat } from './heartbeat';
+import { WORKER_NAME } from './identity';
 import { markRowOfFailedJob } from './lifecycle/on-failed';
 import { reconcileOrphans } from './lifecycle/reconcile';
 import { dispatch } from './processors';
@@ -18,7 +18,7 @@ const heartbeat = startHeartbeat(redis);
 // One job at a time per process (each uses every core through its threads). A job whose worker
 // dies is noticed within ~10 s (lock expiry) and handed to the next worker that asks.
 const worker = new Worker(QUEUE_NAME, dispatch, {
-  name: process.env.WORKER_NAME ?? `${hostname()}:${process.pid}`,
+  name: WORKER_NAME,
   connection: createRedis({ forBullmq: true, name: 'worker' }),
   concurrency: 1,
   lockDuration: 10_000,

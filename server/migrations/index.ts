@@ -15,6 +15,7 @@ import { Boreholes1796450000000 } from './1796450000000-Boreholes';
 import { PasswordResets1796460000000 } from './1796460000000-PasswordResets';
 import { ProjectVelocityColours1796470000000 } from './1796470000000-ProjectVelocityColours';
 import { Coordinates1796480000000 } from './1796480000000-Coordinates';
+import { Ensembles1796490000000 } from './1796490000000-Ensembles';
 
 /** Every migration, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -22,4 +23,5 @@ export const migrations = [
   IdempotencyKeys1764680000000, OrganisationAndReportSnapshots1764690000000, StoredReads1764700000000, Inversions1796419332383,
   InversionReports1796430000000, StationRevisions1796444183694, PickSetRetirement1796445000000, Records1796447000000,
   Boreholes1796450000000, PasswordResets1796460000000, ProjectVelocityColours1796470000000, Coordinates1796480000000,
+  Ensembles1796490000000,
 ];

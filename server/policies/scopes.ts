@@ -86,3 +86,10 @@ export const projectOfInversion: ProjectScope = async (req) => {
   const rows = await dataSource.query('SELECT l.project_id FROM inversions i JOIN survey_lines l ON l.id = i.line_id WHERE i.id = $1', [id]);
   return rows[0]?.project_id ?? null;
 };
+
+export const projectOfEnsemble: ProjectScope = async (req) => {
+  const id = req.params.ensembleId;
+  if (!isUuid(id)) return null;
+  const rows = await dataSource.query('SELECT l.project_id FROM ensembles e JOIN survey_lines l ON l.id = e.line_id WHERE e.id = $1', [id]);
+  return rows[0]?.project_id ?? null;
+};

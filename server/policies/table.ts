@@ -72,6 +72,10 @@ export const policyTable = {
   'inversion.read': { roles: STAFF },
   'inversion.cancel': { roles: ['geophysicist', 'lead'] },
   'inversion.save_model': { roles: ['geophysicist'] },
+  // Issue 20: ensembles as inversions; clients see their bands only in a shared report.
+  'ensembles.create': { roles: ['geophysicist'] },
+  'ensemble.read': { roles: STAFF },
+  'ensemble.cancel': { roles: ['geophysicist', 'lead'] },
 
   'reports.create': { roles: ['geophysicist', 'lead'] },
   // A client reads a report only once it is shared with them (checked with report.read_unshared).

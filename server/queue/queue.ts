@@ -6,7 +6,7 @@ import { createRedis, QUEUE_NAME } from './connection';
 import { logOutages } from './outage-log';
 
 /** Job kinds on the one queue; the worker dispatches by name (worker/processors). */
-export type JobName = 'solve' | 'report' | 'invert';
+export type JobName = 'solve' | 'report' | 'invert' | 'ensemble-member';
 
 /**
  * Producer side of the queue (the API). The job id is the database row's id, so a retry never
@@ -46,11 +46,20 @@ export const queueUnavailable = () =>
 
 /** Adds a job, or throws the 503 above within a few seconds when Redis cannot take it. */
 export async function addJob(queue: Queue, name: JobName, data: object, jobId: string): Promise<void> {
+  await withinTimeout(queue, () => queue.add(name, data, { jobId }));
+}
+
+/** Adds several jobs in one round trip, or throws the 503 above. */
+export async function addJobs(queue: Queue, jobs: readonly { name: JobName; data: object; jobId: string }[]): Promise<void> {
+  await withinTimeout(queue, () => queue.addBulk(jobs.map((j) => ({ name: j.name, data: j.data, opts: { jobId: j.jobId } }))));
+}
+
+async function withinTimeout(queue: Queue, add: () => Promise<unknown>): Promise<void> {
   let timer: NodeJS.Timeout | undefined;
   try {
     await Promise.race([
       // A connection that is reconnecting (Redis just restarted) gets the same few seconds to come back.
-      ready(queue).then(() => queue.add(name, data, { jobId })),
+      ready(queue).then(add),
       new Promise((_, reject) => {
         timer = setTimeout(() => reject(new Error('timeout')), QUEUE_TIMEOUT_MS);
       }),

@@ -9,6 +9,7 @@ import { pickSetsRouter } from './pickSets';
 import { recordsRouter } from './records';
 import { boreholesRouter } from './boreholes';
 import { runsRouter } from './runs';
+import { ensemblesRouter } from './ensembles';
 import { inversionsRouter } from './inversions';
 import { reportsRouter } from './reports';
 import { adminRouter } from './admin';
@@ -20,5 +21,5 @@ import { usersRouter } from './users';
 
 /** Every router mounted under /api. The route × role test walks exactly this list. */
 export function apiRouters(redis: Redis, queue: Queue, mailer: Mailer): Router[] {
-  return [healthRouter(redis, queue), authRouter(redis), usersRouter(mailer), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), boreholesRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter(), exportsRouter()];
+  return [healthRouter(redis, queue), authRouter(redis), usersRouter(mailer), projectsRouter(), linesRouter(), pickSetsRouter(), recordsRouter(), boreholesRouter(), modelsRouter(), runsRouter(queue), inversionsRouter(queue), ensemblesRouter(queue), reportsRouter(queue, mailer), adminRouter(), organisationRouter(), exportsRouter()];
 }

@@ -17,6 +17,8 @@ export interface MemberSection {
   /** DOI elevation per column (m), NaN where no ray passes. */
   doi: Float64Array;
   chi2: number;
+  /** This member's rock velocity v*, when the ensemble draws it from a range (else the options' one). */
+  rockVelocity?: number;
 }
 
 export interface DepthBand {
@@ -68,7 +70,7 @@ export function combineMembers(
       covering[i]++;
       sum[i] += v;
       sumSq[i] += v * v;
-      if (v > options.rockVelocity) faster[i]++;
+      if (v > (m.rockVelocity ?? options.rockVelocity)) faster[i]++;
     }
   }
   const mean = new Float32Array(n).fill(Number.NaN), std = new Float32Array(n).fill(Number.NaN), probabilityFaster = new Float32Array(n).fill(Number.NaN);
@@ -83,10 +85,10 @@ export function combineMembers(
     probabilityFaster[i] = faster[i] / c;
   }
   const surfaceZ = (x: number) => evalPolyline(surface, x);
-  const supports = used.map((m) => raySupport(grid, m.velocity, m.coverage, m.doi, options.threshold, surfaceZ));
+  const supports = used.map((m) => ({ support: raySupport(grid, m.velocity, m.coverage, m.doi, options.threshold, surfaceZ), rock: m.rockVelocity ?? options.rockVelocity }));
   const bands = options.stationXs.map((x): DepthBand => {
     const depths = supports
-      .map((s) => resolvedIsoDepth(s, options.rockVelocity, x))
+      .map((s) => resolvedIsoDepth(s.support, s.rock, x))
       .filter((r) => r.status === 'resolved' && r.result?.depth != null)
       .map((r) => r.result!.depth!)
       .sort((a, b) => a - b);

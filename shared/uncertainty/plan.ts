@@ -53,3 +53,14 @@ export function planMembers(n: number, seed: number, variation: EnsembleVariatio
     };
   });
 }
+
+/**
+ * A member's rock velocity v*, log-uniform in [min, max], from a stream of its own seed apart from its
+ * pick draws: with a range, the depth band also covers the choice of v* (a sharp contact's iso-depth
+ * moves with v*, and no single v* is the contact).
+ */
+export function memberRockVelocity(seed: number, min: number, max: number): number {
+  if (!(max > min)) return min;
+  const u = mulberry32((seed ^ 0x5bd1e995) >>> 0)();
+  return min * Math.exp(u * Math.log(max / min));
+}

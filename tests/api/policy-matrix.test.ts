@@ -91,6 +91,14 @@ const EXPECTED: Record<string, Caller[]> = {
   'GET /api/inversions/:inversionId/residuals': STAFF_A,
   'POST /api/inversions/:inversionId/cancel': ['geophysicist', 'lead'],
   'POST /api/inversions/:inversionId/model': ['geophysicist'],
+  // Issue 20 item 5: ensembles as inversions (geophysicists start, leads may cancel, staff read);
+  // clients see the bands only in a shared report.
+  'POST /api/inversions/:inversionId/ensembles': ['geophysicist'],
+  'GET /api/inversions/:inversionId/ensembles': STAFF_A,
+  'GET /api/ensembles/:ensembleId': STAFF_A,
+  'GET /api/ensembles/:ensembleId/members': STAFF_A,
+  'GET /api/ensembles/:ensembleId/section': STAFF_A,
+  'POST /api/ensembles/:ensembleId/cancel': ['geophysicist', 'lead'],
   // Issue 11 item 7: leads report (as from runs); geophysicists make the report they submit.
   'POST /api/inversions/:inversionId/reports': ['geophysicist', 'lead'],
   // A draft: the project's client may not read it yet (tests/api/reports.test.ts covers a shared one).
@@ -150,6 +158,7 @@ function concretePath(path: string, w: World): string {
     .replace(':runId', w.runA)
     .replace(':reportId', w.reportA)
     .replace(':inversionId', w.inversionA)
+    .replace(':ensembleId', w.ensembleA)
     .replace(':recordId', w.recordA)
     .replace(':boreholeId', w.boreholeA)
     .replace(':shotId', 'F')
@@ -165,6 +174,7 @@ function concretePath(path: string, w: World): string {
 function bodyFor(key: string, w: World): object {
   if (key === 'POST /api/runs') return { modelId: w.modelA, pickSetId: w.pickSetA, order: 3 };
   if (key === 'POST /api/inversions') return { pickSetId: w.pickSetA, start: { kind: 'gradient' }, settings: { vMin: 5000, vMax: 100 } };
+  if (key === 'POST /api/inversions/:inversionId/ensembles') return { members: 1 };
   if (/^POST \/api\/reports\/:reportId\//.test(key)) return { comment: 42 }; // not a string: 400 before any step
   if (key === 'POST /api/runs/:runId/reports' || key === 'POST /api/inversions/:inversionId/reports') return { isoVelocity: -1 };
   return {};

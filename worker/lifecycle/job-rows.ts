@@ -5,6 +5,7 @@
  * A new job kind adds one entry here.
  */
 import { dataSource } from '../../server/db/dataSource';
+import { combineWhenComplete } from '../processors/ensembleCombine';
 
 export interface JobRowKind {
   /** The row's id from the job's data. */
@@ -45,6 +46,29 @@ export const jobRows: Record<string, JobRowKind> = {
     },
     async markFailed(id, reason) {
       await dataSource.query(`UPDATE inversions SET status = 'failed', error = $2, finished_at = now() WHERE id = $1 AND status IN ('queued', 'running')`, [id, reason]);
+    },
+  },
+  // A member's row is named "<ensemble id>/<index>"; marking it failed may complete its ensemble.
+  'ensemble-member': {
+    rowIdOf: (data) => {
+      const d = data as { ensembleId?: unknown; index?: unknown } | null;
+      return typeof d?.ensembleId === 'string' && Number.isInteger(d.index) ? `${d.ensembleId}/${d.index}` : undefined;
+    },
+    async unfinishedRows(grace) {
+      const rows = await dataSource.query(
+        `SELECT m.ensemble_id, m.index FROM ensemble_members m JOIN ensembles e ON e.id = m.ensemble_id
+         WHERE m.status IN ('queued', 'running') AND coalesce(m.started_at, e.created_at) < now() - make_interval(secs => $1)`,
+        [grace],
+      );
+      return rows.map((r: { ensemble_id: string; index: number }) => `${r.ensemble_id}/${r.index}`);
+    },
+    async markFailed(id, reason) {
+      const [ensembleId, index] = id.split('/');
+      await dataSource.query(
+        `UPDATE ensemble_members SET status = 'failed', error = $3, finished_at = now() WHERE ensemble_id = $1 AND index = $2 AND status IN ('queued', 'running')`,
+        [ensembleId, Number(index), reason],
+      );
+      await combineWhenComplete(ensembleId);
     },
   },
   report: {

@@ -1,4 +1,5 @@
 import type { Job } from 'bullmq';
+import { ensembleMemberJob } from './ensemble-member';
 import { invertJob } from './invert';
 import { reportJob } from './report';
 import { solveJob } from './solve';
@@ -10,6 +11,7 @@ export const processors: Record<string, Processor> = {
   solve: solveJob,
   report: reportJob,
   invert: invertJob,
+  'ensemble-member': ensembleMemberJob,
 };
 
 export async function dispatch(job: Job): Promise<unknown> {

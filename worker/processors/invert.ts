@@ -25,7 +25,7 @@ import { finishInversion, loadCheckpoint, saveIteration, stillOwn, type Residual
 /** How often a running inversion looks whether it was cancelled (ms). */
 const CANCEL_POLL_MS = 1000;
 
-interface InversionRow {
+export interface InversionRow {
   id: string;
   pick_set_id: string;
   pick_set_revision: number;
@@ -103,7 +103,7 @@ async function runInversion(row: InversionRow, job: Job): Promise<void> {
 }
 
 /** The engine's problem from the recorded inputs; the gradient start is fitted again (deterministic) and recorded once. */
-async function buildProblem(row: InversionRow) {
+export async function buildProblem(row: InversionRow) {
   const [picks, revisions] = await Promise.all([loadPicks(row.pick_set_id), listRevisions(row.pick_set_id)]);
   const revision = revisions.find((r) => r.number === row.pick_set_revision);
   if (!revision) throw new Error(`pick-set revision ${row.pick_set_revision} is missing`);
@@ -118,7 +118,7 @@ async function buildProblem(row: InversionRow) {
   }
   // A saved model's own structure (its layers) is kept: the smoothing measures the change from it.
   const problem: InversionProblem = { grid: raster.grid, active: raster.active, start, shots, settings: row.settings, surface: raster.surface, smoothingActsOn: row.start_kind === 'model' ? 'departure' : 'model' };
-  return { problem, placed };
+  return { problem, placed, raster };
 }
 
 /** Residual rows in problem order; picks no wave reaches (no finite time) have no row. */

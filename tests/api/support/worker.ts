@@ -7,10 +7,10 @@ export interface WorkerProcess {
   stop(signal?: NodeJS.Signals): Promise<void>;
 }
 
-export function startWorker(name = 'test-worker'): WorkerProcess {
+export function startWorker(name = 'test-worker', env: Record<string, string> = {}): WorkerProcess {
   const output: string[] = [];
   const child = spawn(process.execPath, ['--import', 'tsx', 'worker/index.ts'], {
-    env: { ...process.env, WORKER_NAME: name },
+    env: { ...process.env, ...env, WORKER_NAME: name },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout!.on('data', (d) => output.push(String(d)));

@@ -34,6 +34,7 @@ export interface World {
   boreholeA: string;
   /** A finished inversion row of pick set A (no iterations or result stored). */
   inversionA: string;
+  ensembleA: string;
   /** An active account that belongs to no project. */
   loner: User;
 }
@@ -73,11 +74,17 @@ export async function resetWorld(): Promise<World> {
     lineId: lineA.id, pickSetId: pickSetA, pickSetRevision: 0, startKind: 'gradient', startSpacing: 2.5, grid: WORLD_MODEL.grid, surface: null,
     settings: DEFAULT_INVERSION_SETTINGS, status: 'done', shots: 2, picks: 10, createdBy: users.geophysicist.id,
   }))).id;
+  // Finished, so a cancel that gets through answers 409 and changes nothing.
+  const [{ id: ensembleA }] = await dataSource.query(
+    `INSERT INTO ensembles (inversion_id, line_id, members, seed, variation, rock_velocity_min, rock_velocity_max, coverage_threshold, status)
+     VALUES ($1, $2, 2, 1, '{"start":true,"smoothing":true,"picks":"sigma"}', 2500, 2500, 1, 'done') RETURNING id`,
+    [inversionA, lineA.id],
+  );
   const recordA = (await storeRecord(users.field_tech.id, projectA.id, lineA.id, 'F.sg2', Buffer.from(worldRecord()))).id;
   // Linked to the pick set, so a DELETE of it (the route × role walk) is refused and changes nothing.
   await dataSource.query('INSERT INTO pick_set_records (pick_set_id, record_id) VALUES ($1, $2)', [pickSetA, recordA]);
   const boreholeA = await freshBorehole({ users, projectA, lineA });
-  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, recordA, boreholeA, loner };
+  return { users, projectA, projectB, lineA, lineB, pickSetA, modelA, runA, reportA, inversionA, ensembleA, recordA, boreholeA, loner };
 }
 
 /** Direct-wave times t = x / 600 m/s in ms, forward and reverse shots (invented test data). */

@@ -10,7 +10,7 @@ import type { Grid } from '../../../shared/grid';
 import type { InversionShot } from '../../../shared/inversion/types';
 import { combineMembers, quantile, type MemberSection } from '../../../shared/uncertainty/combine';
 import { memberShots } from '../../../shared/uncertainty/perturb';
-import { planMembers, SPREAD } from '../../../shared/uncertainty/plan';
+import { memberRockVelocity, planMembers, SPREAD } from '../../../shared/uncertainty/plan';
 
 const numpy = (script: string, input: unknown): unknown =>
   JSON.parse(execFileSync('/usr/bin/python3', ['-c', `import sys, json, numpy as np\nd = json.loads(sys.stdin.read())\n${script}`], { input: JSON.stringify(input), encoding: 'utf8' }));
@@ -59,6 +59,28 @@ describe('ensemble statistics', () => {
       expect(band.p5).toBeCloseTo(p5, 5);
       expect(band.p95).toBeCloseTo(p95, 5);
     }
+  });
+
+  it('with a rock velocity per member, bands each member\'s own v* depth and counts faster than its own v*', () => {
+    const rocks = [1000, 1100, 1200, 1300, 1400, 1250]; // every depth inside the 10 m grid
+    const own = combineMembers(gradients.map((g, k) => ({ ...member(g, 1), rockVelocity: rocks[k] })), grid, [[0, 10], [20, 10]], { threshold: 1, rockVelocity: 1200, stationXs: [10] });
+    const exact = gradients.map((g, k) => (rocks[k] - 500) / g);
+    const [p5, median, p95] = numpy('print(json.dumps([float(np.percentile(d, q)) for q in (5, 50, 95)]))', exact) as number[];
+    expect([own.bands[0].p5, own.bands[0].median, own.bands[0].p95].map((v) => Number(v!.toFixed(6)))).toEqual([p5, median, p95].map((v) => Number(v.toFixed(6))));
+    // At 6 m: member k is faster than its v* when 500 + 6 g_k > rocks[k]: 1100 > 1000, 1220 > 1100, 1400 > 1200, 1700 > 1300, 2000 > 1400, 980 < 1250.
+    expect(own.probabilityFaster[6 * grid.nx + 4]).toBeCloseTo(5 / 6, 6);
+  });
+});
+
+describe('a member\'s rock velocity drawn from a range', () => {
+  it('stays inside the range, is log-uniform (median at the geometric mean), and is the value itself for an empty range', () => {
+    const draws = Array.from({ length: 4001 }, (_, i) => memberRockVelocity(i * 2654435761 >>> 0, 1500, 3000)).sort((a, b) => a - b);
+    expect(draws[0]).toBeGreaterThanOrEqual(1500);
+    expect(draws.at(-1)!).toBeLessThanOrEqual(3000);
+    // Median of a log-uniform variable on [a, b] is sqrt(a·b) = 2121.3 m/s; 4001 draws put it within ~2 %.
+    expect(Math.abs(quantile(draws, 0.5) / Math.sqrt(1500 * 3000) - 1)).toBeLessThan(0.02);
+    expect(memberRockVelocity(12345, 2500, 2500)).toBe(2500);
+    expect(memberRockVelocity(12345, 1500, 3000)).toBe(memberRockVelocity(12345, 1500, 3000));
   });
 });
 
