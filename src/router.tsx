@@ -42,6 +42,7 @@ export const router = createBrowserRouter([
           // Inversion pages (issue 11) carry the section and chart code: their own chunks, loaded on first visit.
           { path: 'lines/:lineId/inversions/:inversionId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/InversionPage')).InversionPage }) },
           { path: 'lines/:lineId/inversions/:inversionId/compare', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/InversionComparePage')).InversionComparePage }) },
+          { path: 'lines/:lineId/ensembles/:ensembleId', hydrateFallbackElement: runPageLoading, lazy: async () => ({ Component: (await import('./routes/EnsemblePage')).EnsemblePage }) },
           // First-break picking on field records: the canvas and trace processing load on first visit.
           { path: 'lines/:lineId/picking', hydrateFallbackElement: <Loading what="records" />, lazy: async () => ({ Component: (await import('./routes/PickingPage')).PickingPage }) },
           { path: 'admin/accounts', element: <AccountsPage /> },

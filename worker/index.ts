@@ -9,6 +9,7 @@ import { markRowOfFailedJob } from './lifecycle/on-failed';
 import { reconcileOrphans } from './lifecycle/reconcile';
 import { dispatch } from './processors';
 import { closeSolvePool } from './processors/solve';
+import { closeSharedModellers } from './processors/invert-modeller';
 
 // The worker process: takes jobs from the queue, reports that it is alive, and keeps every job's
 // row honest (a job that fails for good marks its row failed; rows whose job is gone are found).
@@ -45,6 +46,7 @@ async function stop() {
   heartbeat();
   await worker.close();
   await closeSolvePool();
+  await closeSharedModellers();
   await Promise.allSettled([queue.close(), redis.quit(), dataSource.destroy()]);
   process.exit(0);
 }

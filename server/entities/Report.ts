@@ -39,6 +39,8 @@ export interface ReportSnapshot {
   velocityColours?: { min: number; max: number };
   /** The project's coordinate reference system when the report was made, e.g. "EPSG:32630 WGS 84 / UTM zone 30N". */
   crs?: string | null;
+  /** An inversion report: the newest combined ensemble of the inversion when the report was made (its band is stated); absent in older snapshots. */
+  ensembleId?: string | null;
 }
 
 export interface SnapshotBorehole {

@@ -41,7 +41,14 @@ export async function takeReportSnapshot(em: EntityManager, source: ReportSource
     boreholes: await lineBoreholes(em, r.line_id),
     velocityColours: { min: Number(r.velocity_colour_min), max: Number(r.velocity_colour_max) },
     crs: r.crs_epsg ? crsLabel(Number(r.crs_epsg)) : null,
+    ensembleId: fromRun ? null : await newestEnsemble(em, source.inversionId),
   };
+}
+
+/** The newest combined ensemble of an inversion (combined results never change), or null. */
+async function newestEnsemble(em: Pick<EntityManager, 'query'>, inversionId: string): Promise<string | null> {
+  const [row] = await em.query(`SELECT id FROM ensembles WHERE inversion_id = $1 AND status = 'done' ORDER BY finished_at DESC LIMIT 1`, [inversionId]);
+  return row?.id ?? null;
 }
 
 /** The line's boreholes and trial pits as a report keeps them (along the line). */

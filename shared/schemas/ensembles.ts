@@ -74,8 +74,8 @@ export interface EnsembleView {
   /** Members per state, and per worker process the members it has done, is running, and failed. */
   progress: { queued: number; running: number; done: number; failed: number; cancelled: number };
   workers: { worker: string; done: number; running: number; failed: number; seconds: number }[];
-  /** Once combined: members used and left out (χ² above the limit). */
-  stats: { used: number; excluded: number; maxChi2: number; seconds: number; medianMemberSeconds: number | null } | null;
+  /** Once combined: members used, left out (χ² above maxChi2: 1.2, or 25 % above the base's when it stopped higher) and failed. */
+  stats: { used: number; excluded: number; failed: number; maxChi2: number; baseChi2: number | null; seconds: number; medianMemberSeconds: number | null } | null;
   error?: string;
   createdAt: string;
   startedAt: string | null;

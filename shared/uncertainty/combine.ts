@@ -52,6 +52,17 @@ export function quantile(sorted: readonly number[], p: number): number {
 
 export const MAX_MEMBER_CHI2 = 1.2;
 
+/**
+ * The χ² against the observed picks a member must reach to be used: 1.2, or 25 % above the base
+ * inversion's χ² when that is larger. A member refitted to moved picks fits part of the move, so it
+ * explains the observed picks a little worse than the base (measured on a three-layer line whose base
+ * reached 1.06: members at 1.15–1.39); and where the base itself stopped above 1.2 (a smooth model
+ * against a sharp refractor: the demo line, 1.51) a fixed 1.2 would leave every member out.
+ */
+export function memberChi2Limit(baseChi2: number | null | undefined): number {
+  return Number.isFinite(baseChi2) ? Math.max(MAX_MEMBER_CHI2, 1.25 * baseChi2!) : MAX_MEMBER_CHI2;
+}
+
 export function combineMembers(
   members: readonly MemberSection[],
   grid: Grid,

@@ -47,3 +47,11 @@ export const inversionKeys = {
   section: (inversionId: string) => ['inversions', inversionId, 'section'] as const,
   residuals: (inversionId: string) => ['inversions', inversionId, 'residuals'] as const,
 };
+
+/** Ensembles of an inversion: the inversion's list, one ensemble, its members, and its combined section (never changes once done). */
+export const ensembleKeys = {
+  list: (inversionId: string) => ['inversions', inversionId, 'ensembles'] as const,
+  ensemble: (ensembleId: string) => ['ensembles', ensembleId] as const,
+  members: (ensembleId: string) => ['ensembles', ensembleId, 'members'] as const,
+  section: (ensembleId: string) => ['ensembles', ensembleId, 'section'] as const,
+};

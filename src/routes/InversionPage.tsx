@@ -18,6 +18,7 @@ import { canStartRuns } from '../components/run/StartRunForm';
 import { Disclosure } from '../components/Disclosure';
 import { StartReportForm } from '../components/reports/StartReportForm';
 import { DEFAULT_COVERAGE_THRESHOLD_M } from '../components/inversion/coverageMask';
+import { InversionEnsemblesPanel } from '../components/ensemble/InversionEnsemblesPanel';
 
 /**
  * One inversion (/lines/:lineId/inversions/:inversionId): live progress and convergence while it runs,
@@ -73,6 +74,9 @@ export function InversionPage() {
           </Section>
           <Section title="Results">
             <InversionResults inversion={inv} lineName={line.data?.name ?? 'line'} />
+          </Section>
+          <Section title="Uncertainty">
+            <InversionEnsemblesPanel inversion={inv} canStart={mayAct} />
           </Section>
           {line.data && list.data && (
             <Section title="Compare">

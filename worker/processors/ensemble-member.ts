@@ -9,7 +9,7 @@
  * stale worker's writes off. A cancel is noticed within a second.
  */
 import type { Job } from 'bullmq';
-import { AUTO_SMOOTHING_START, invert } from '../../shared/inversion';
+import { invert } from '../../shared/inversion';
 import { chi2AgainstOriginal } from '../../shared/uncertainty/perturb';
 import { memberProblem, type EnsembleBase } from '../../shared/uncertainty/member';
 import type { MemberPlan } from '../../shared/uncertainty/plan';
@@ -19,7 +19,7 @@ import { updateReturning } from '../../server/db/returning';
 import { WORKER_NAME } from '../identity';
 import { combineWhenComplete } from './ensembleCombine';
 import { buildProblem, type InversionRow } from './invert';
-import { openModellers } from './invert-modeller';
+import { sharedModellers } from './invert-modeller';
 
 const CANCEL_POLL_MS = 1000;
 
@@ -63,7 +63,7 @@ async function runMember(ensembleId: string, index: number, attempt: number, pla
     return row?.status === 'running' && row.attempts === attempt;
   };
   const watch = setInterval(() => void own().then((mine) => mine || stop.abort(), () => undefined), CANCEL_POLL_MS);
-  const modellers = await openModellers();
+  const modellers = sharedModellers();
   try {
     const result = await invert(problem, modellers.modeller(problem), { signal: stop.signal });
     if (result.stopReason === 'cancelled' || stop.signal.aborted) return;
@@ -80,7 +80,7 @@ async function runMember(ensembleId: string, index: number, attempt: number, pla
   }
 }
 
-/** The base inversion's problem, the gradient it fitted and the weight it ended on; kept for the next member of the same ensemble. */
+/** The base inversion's problem and the gradient it fitted; kept for the next member of the same ensemble. */
 let cached: { inversionId: string; base: EnsembleBase } | null = null;
 
 async function ensembleBase(inversionId: string): Promise<EnsembleBase> {
@@ -91,12 +91,10 @@ async function ensembleBase(inversionId: string): Promise<EnsembleBase> {
   );
   if (!row) throw new Error('the base inversion was deleted');
   const { problem, raster } = await buildProblem(row as InversionRow);
-  const [last] = await dataSource.query('SELECT smoothing FROM inversion_iterations WHERE inversion_id = $1 AND smoothing IS NOT NULL ORDER BY iteration DESC LIMIT 1', [inversionId]);
   const base: EnsembleBase = {
     problem,
     surfaceZ: raster.surfaceZ,
     fit: row.start_kind === 'gradient' && row.start_v0 !== null ? { v0: row.start_v0, k: row.start_k } : null,
-    finalSmoothing: last?.smoothing ?? problem.settings.smoothing ?? AUTO_SMOOTHING_START,
   };
   cached = { inversionId, base };
   return base;

@@ -4,7 +4,7 @@
  * writes the result. Too few members that fit the picks fail the ensemble with the count.
  */
 import type { Grid } from '../../shared/grid';
-import { combineMembers, MAX_MEMBER_CHI2, type MemberSection } from '../../shared/uncertainty/combine';
+import { combineMembers, memberChi2Limit, type MemberSection } from '../../shared/uncertainty/combine';
 import { memberRockVelocity, type MemberPlan } from '../../shared/uncertainty/plan';
 import { evalPolyline } from '../../shared/model/polyline';
 import { dataSource } from '../../server/db/dataSource';
@@ -23,7 +23,8 @@ interface MemberRow {
 export async function combineWhenComplete(ensembleId: string): Promise<void> {
   await dataSource.transaction(async (em) => {
     const [ensemble] = await em.query(
-      `SELECT e.id, e.status, e.members, e.rock_velocity_min, e.rock_velocity_max, e.coverage_threshold, e.started_at, i.grid, i.surface, i.line_id
+      `SELECT e.id, e.status, e.members, e.rock_velocity_min, e.rock_velocity_max, e.coverage_threshold, e.started_at, i.grid, i.surface, i.line_id,
+              (i.stats->>'chi2')::float8 AS base_chi2
        FROM ensembles e JOIN inversions i ON i.id = e.inversion_id WHERE e.id = $1 FOR UPDATE OF e`,
       [ensembleId],
     );
@@ -44,7 +45,9 @@ export async function combineWhenComplete(ensembleId: string): Promise<void> {
       chi2: r.chi2 ?? Number.NaN,
       rockVelocity: memberRockVelocity(r.plan.seed, ensemble.rock_velocity_min, ensemble.rock_velocity_max),
     }));
+    const maxChi2 = memberChi2Limit(ensemble.base_chi2);
     const summary = combineMembers(members, grid, surface, {
+      maxChi2,
       threshold: ensemble.coverage_threshold,
       rockVelocity: ensemble.rock_velocity_min,
       stationXs: stations.map((s) => s.x),
@@ -55,12 +58,13 @@ export async function combineWhenComplete(ensembleId: string): Promise<void> {
       used: summary.used,
       excluded: summary.excluded,
       failed,
-      maxChi2: MAX_MEMBER_CHI2,
+      maxChi2,
+      baseChi2: ensemble.base_chi2,
       seconds: (Date.now() - new Date(ensemble.started_at).getTime()) / 1000,
       medianMemberSeconds: seconds.length ? seconds[Math.floor((seconds.length - 1) / 2)] : null,
     };
     if (summary.used < 2) {
-      const why = `Only ${summary.used} of ${ensemble.members} members fitted the picks (χ² ≤ ${MAX_MEMBER_CHI2}; ${summary.excluded} fitted worse, ${failed} failed), too few for a spread. Check the picks' sigmas and the base inversion's fit.`;
+      const why = `Only ${summary.used} of ${ensemble.members} members fitted the picks (χ² ≤ ${+maxChi2.toFixed(3)}; ${summary.excluded} fitted worse, ${failed} failed), too few for a spread. Check the picks' sigmas and the base inversion's fit.`;
       await em.query(`UPDATE ensembles SET status = 'failed', error = $2, stats = $3, finished_at = now() WHERE id = $1`, [ensembleId, why, JSON.stringify(stats)]);
       return;
     }

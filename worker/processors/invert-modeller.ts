@@ -17,3 +17,20 @@ export async function openModellers(): Promise<Modellers> {
   const pool = new SensitivityPool(SOLVER_THREADS);
   return { modeller: (problem) => pool.modeller(problem), close: () => pool.close() };
 }
+
+/**
+ * One pool for every ensemble member this process runs: a member is a short inversion, and starting
+ * threads (and compiling their code) for each one cost about a second of the two or three a member takes.
+ */
+let shared: SensitivityPool | null = null;
+
+export function sharedModellers(): Modellers {
+  shared ??= new SensitivityPool(SOLVER_THREADS);
+  const pool = shared;
+  return { modeller: (problem) => pool.modeller(problem), close: async () => undefined };
+}
+
+export async function closeSharedModellers(): Promise<void> {
+  await shared?.close();
+  shared = null;
+}

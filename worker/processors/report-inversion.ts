@@ -9,7 +9,8 @@ import { loadModelVersion } from '../../server/services/models';
 import { loadLogo } from '../../server/services/organisation';
 import { lineBoreholes } from '../../server/services/reportSnapshot';
 import { inversionReportInput } from '../report/inversion/from-views';
-import type { InversionReportInput } from '../report/inversion/types';
+import type { InversionReportInput, ReportEnsemble } from '../report/inversion/types';
+import { loadEnsembleSection, loadEnsembleView } from '../../server/services/ensembleReads';
 
 export interface InversionReportRow {
   status: string;
@@ -54,7 +55,18 @@ export async function gatherInversionReportInput(reportId: string, r: InversionR
   // The stations and holes as they were when the report was made or submitted, not as edited since
   // (a snapshot taken before reports carried the holes: the line's holes now).
   const boreholes = snap.boreholes ?? (await lineBoreholes(dataSource.manager, snap.line.id));
-  return { ...input, stations: snap.stations, boreholes };
+  return { ...input, stations: snap.stations, boreholes, ensemble: snap.ensembleId ? await reportEnsemble(snap.ensembleId) : null };
+}
+
+/** The ensemble the snapshot names, as the report states it (null when it was deleted since). */
+async function reportEnsemble(id: string): Promise<ReportEnsemble | null> {
+  const view = await loadEnsembleView(id).catch(() => null);
+  if (!view?.stats || view.status !== 'done') return null;
+  const section = await loadEnsembleSection(id);
+  return {
+    members: view.members, used: view.stats.used, excluded: view.stats.excluded, maxChi2: view.stats.maxChi2, seed: view.seed,
+    vary: view.vary, rock: view.rockVelocity, bands: section.bands,
+  };
 }
 
 export const inversionRowOf = async (reportId: string): Promise<InversionReportRow | undefined> =>

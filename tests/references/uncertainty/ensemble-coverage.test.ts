@@ -5,7 +5,7 @@
  * 1100 m/s is exactly 15 m everywhere. Twelve members vary the start, the weight and the picks
  * (shared/uncertainty); the true depth must lie inside the 5–95 % band at ≥ 80 % of the banded
  * stations at both noise levels, and the band must be narrower at 0.2 ms than at 1 ms.
- * (On a sharp contact the band covers what was varied, not the choice of v*: docs in the session notes.)
+ * (On a sharp contact the band covers what was varied, not the choice of v*: docs/uncertainty.md.)
  */
 import { describe, expect, it } from 'vitest';
 import { gradientStart, inProcessModeller, invert } from '../../../shared/inversion';
@@ -26,10 +26,9 @@ async function ensembleBand(sigma: number) {
   const fit = gradientStart(grid, active, () => 0, shots, settings);
   const problem: InversionProblem = { grid, active, start: fit.velocity, shots, settings };
   const base = await invert(problem, inProcessModeller(problem));
-  const finalSmoothing = [...base.history].reverse().find((h) => h.smoothing !== null)?.smoothing ?? 50;
-  const members = [];
+    const members = [];
   for (const plan of planMembers(12, 7, { start: true, smoothing: true, picks: 'sigma' })) {
-    const p = memberProblem({ problem, surfaceZ: () => 0, fit: { v0: fit.v0, k: fit.k }, finalSmoothing }, plan);
+    const p = memberProblem({ problem, surfaceZ: () => 0, fit: { v0: fit.v0, k: fit.k } }, plan);
     const r = await invert(p, inProcessModeller(p));
     members.push({ velocity: r.velocity, coverage: r.coverage, doi: r.doi, chi2: chi2AgainstOriginal(shots, p.shots, r.computed) });
   }

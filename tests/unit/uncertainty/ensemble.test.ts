@@ -8,7 +8,7 @@ import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import type { Grid } from '../../../shared/grid';
 import type { InversionShot } from '../../../shared/inversion/types';
-import { combineMembers, quantile, type MemberSection } from '../../../shared/uncertainty/combine';
+import { combineMembers, memberChi2Limit, quantile, type MemberSection } from '../../../shared/uncertainty/combine';
 import { memberShots } from '../../../shared/uncertainty/perturb';
 import { memberRockVelocity, planMembers, SPREAD } from '../../../shared/uncertainty/plan';
 
@@ -126,17 +126,17 @@ describe('member plans and picks', () => {
 });
 
 describe('a member\'s problem', () => {
-  it('starts from the fitted gradient times the member\'s factors, and the weight schedule from the final weight times its factor', async () => {
+  it('starts from the fitted gradient times the member\'s factors, and the automatic weight schedule from its first weight times its factor', async () => {
     const { memberProblem } = await import('../../../shared/uncertainty/member');
     const grid: Grid = { x0: 0, dx: 2, nx: 6, z0: 20, dz: 2, nz: 6 };
     const active = new Uint8Array(36).fill(1);
     const settings = { maxIterations: 10, smoothing: null, verticalWeight: 0.5, damping: 0.05, vMin: 100, vMax: 7000, order: 2 as const, checkerboard: true, checkerSize: null };
-    const base = { problem: { grid, active, start: new Float32Array(36).fill(1), shots: [], settings }, surfaceZ: () => 20, fit: { v0: 400, k: 50 }, finalSmoothing: 6 };
+    const base = { problem: { grid, active, start: new Float32Array(36).fill(1), shots: [], settings }, surfaceZ: () => 20, fit: { v0: 400, k: 50 } };
     const p = memberProblem(base, { index: 0, seed: 1, v0Factor: 1.2, kFactor: 0.5, smoothingFactor: 2, picks: 'none' });
     // Node (ix 3, iz 4) lies 8 m below the flat ground: 480 + 25 · 8 = 680 m/s.
     expect(p.start[4 * 6 + 3]).toBe(680);
     expect(p.settings.smoothing).toBeNull(); // the automatic schedule, as the base ran it …
-    expect(p.autoSmoothingStart).toBe(12); // … started at 6 × 2
+    expect(p.autoSmoothingStart).toBe(100); // … started at its first weight (50, shared/inversion/README.md) × 2
     expect(p.settings.checkerboard).toBe(false);
     // A base with a fixed weight: the member's weight is fixed too, times its factor.
     const fixed = memberProblem({ ...base, problem: { ...base.problem, settings: { ...settings, smoothing: 4 } } }, { index: 0, seed: 1, v0Factor: 1, kFactor: 1, smoothingFactor: 0.5, picks: 'none' });
@@ -159,5 +159,26 @@ describe('a member judged against the original picks', () => {
     // A bootstrap member that drew B twice: each copy is compared with B's own pick.
     const drawn = [{ ...original[1], shotId: 'B#1' }, { ...original[1], shotId: 'B#2' }];
     expect(chi2AgainstOriginal(original, drawn, [0.032, 0.028])).toBeCloseTo(1, 10);
+  });
+});
+
+describe('which members are used', () => {
+  it('holds members to χ² ≤ 1.2, or to 25 % above the base inversion when it stopped higher', () => {
+    expect(memberChi2Limit(0.95)).toBe(1.2);
+    expect(memberChi2Limit(1.5)).toBeCloseTo(1.875, 12);
+    expect(memberChi2Limit(null)).toBe(1.2);
+    expect(memberChi2Limit(Number.NaN)).toBe(1.2);
+  });
+});
+
+describe('the band drawn on a section', () => {
+  it('outlines each run of stations with a band, 5 % depth out and 95 % depth back, never across a gap (hand-worked)', async () => {
+    const { bandOutlines } = await import('../../../shared/uncertainty/band-outline');
+    const band = (x: number, p5: number | null, p95: number | null) => ({ x, resolved: 5, median: p5, p5, p95 });
+    const outlines = bandOutlines([band(0, 1, 3), band(2, 2, 4), band(4, null, null), band(6, 1, 2), band(8, 2, 5), band(10, 3, 6), band(12, 1, 1)], (x) => 100 + x / 2);
+    expect(outlines).toEqual([
+      { x: [0, 2, 2, 0], z: [99, 99, 97, 97] },
+      { x: [6, 8, 10, 12, 12, 10, 8, 6], z: [102, 102, 102, 105, 105, 99, 99, 101] },
+    ]);
   });
 });

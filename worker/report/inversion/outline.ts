@@ -1,18 +1,20 @@
 /** The inversion report's numbered sections, in order; the checkerboard test only when it was run. */
 import { plain } from '../format';
+import { rockWords } from '../../../shared/uncertainty/wording';
 import type { InversionReportInput } from './types';
 
-export type InversionSectionKey = 'section' | 'isoDepth' | 'boreholes' | 'convergence' | 'misfit' | 'checkerboard' | 'method' | 'cautions';
+export type InversionSectionKey = 'section' | 'isoDepth' | 'accuracy' | 'boreholes' | 'convergence' | 'misfit' | 'checkerboard' | 'method' | 'cautions';
 
 export function inversionSections(input: InversionReportInput): InversionSectionKey[] {
-  const all: InversionSectionKey[] = ['section', 'isoDepth', 'boreholes', 'convergence', 'misfit', 'checkerboard', 'method', 'cautions'];
-  return all.filter((k) => k !== 'checkerboard' || input.inversion.checkerboard);
+  const all: InversionSectionKey[] = ['section', 'isoDepth', 'accuracy', 'boreholes', 'convergence', 'misfit', 'checkerboard', 'method', 'cautions'];
+  return all.filter((k) => (k !== 'checkerboard' || input.inversion.checkerboard) && (k !== 'accuracy' || input.ensemble));
 }
 
 export function inversionSectionTitle(key: InversionSectionKey, input: InversionReportInput): string {
   switch (key) {
     case 'section': return 'Velocity section from the inversion';
     case 'isoDepth': return `Depth to the ${plain(input.isoVelocity, 0)} m/s surface`;
+    case 'accuracy': return `Accuracy of the depth to ${rockWords(input.ensemble?.rock ?? { min: input.isoVelocity, max: input.isoVelocity })}`;
     case 'boreholes': return 'Boreholes and ties';
     case 'convergence': return 'Convergence';
     case 'misfit': return 'Misfit of the final model';

@@ -8,6 +8,7 @@ import { drawCoverPage } from '../cover';
 import { openReportDocument } from '../document';
 import { isoDate } from '../format';
 import { drawPageFrames } from '../frame';
+import { drawInversionAccuracy } from './accuracy';
 import { drawInversionCautions } from './cautions';
 import { drawCheckerboard } from './checkerboard';
 import { InversionContext } from './context';
@@ -33,6 +34,7 @@ export async function renderInversionReportPdf(input: InversionReportInput): Pro
   });
   drawInversionSection(ctx);
   drawInversionIsoDepth(ctx);
+  drawInversionAccuracy(ctx);
   drawInversionBoreholes(ctx);
   drawConvergence(ctx);
   drawInversionMisfit(ctx);

@@ -56,6 +56,20 @@ export interface InversionReportInput extends ReportMeta {
   coverageThreshold?: number;
   /** The line's boreholes and trial pits (absent in inputs made before reports carried them: none). */
   boreholes?: ReportBorehole[];
+  /** The newest combined ensemble of this inversion when the report was made (absent or null: none). */
+  ensemble?: ReportEnsemble | null;
+}
+
+/** An ensemble's depth band as a report states it (shared/uncertainty). */
+export interface ReportEnsemble {
+  members: number;
+  used: number;
+  excluded: number;
+  maxChi2: number;
+  seed: number;
+  vary: { start: boolean; smoothing: boolean; picks: 'none' | 'sigma' | 'bootstrap' };
+  rock: { min: number; max: number };
+  bands: { station: string; x: number; groundZ: number; resolved: number; median: number | null; p5: number | null; p95: number | null }[];
 }
 
 export const DEFAULT_COVERAGE_THRESHOLD = 1;

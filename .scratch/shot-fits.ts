@@ -1,0 +1,17 @@
+import { readFileSync } from 'node:fs';
+import { fitGradient, inversionShots } from '../shared/inversion';
+import { groupPicksByShot, placeShots } from '../shared/picks';
+import { gridForLine } from '../shared/inversion/grid-for-line';
+import { surfaceRaster } from '../server/services/inversionInputs';
+import { readPicks } from '../scripts/lib/cli-inputs';
+import { parseStationCsv } from '../shared/stations';
+const picks = await readPicks(process.argv[2] ?? 'fixtures/demo/tq-l1.picks.csv');
+const st = parseStationCsv(readFileSync('fixtures/demo/tq-l1.stations.csv', 'utf8'));
+if (!st.ok) throw 1;
+const line = gridForLine({ stations: st.stations, shotXs: [...new Set(picks.map((p) => p.sourceX))] });
+const raster = surfaceRaster(line.grid, line.surface);
+const pl = placeShots(raster, groupPicksByShot(picks));
+if (!pl.ok) throw 2;
+const shots = inversionShots(pl.shots);
+console.log('all', fitGradient(shots));
+for (const s of shots) console.log(s.shotId, s.source.x, s.times.length, fitGradient([s]));

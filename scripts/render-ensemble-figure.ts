@@ -1,0 +1,122 @@
+/**
+ * Renders docs/img/ensemble-band.png and prints the figures quoted in docs/uncertainty.md: the
+ * invented three-layer line of docs/inversion.md (first arrivals computed on a 0.25 m grid, 0.5 ms
+ * noise), inverted on a 1 m grid, then an ensemble of its members (the worker's member problem and
+ * combine, run here in one process on every core). Panels: mean velocity with the 5–95 % depth band
+ * of v* over the true weathered/rock interface; the spread between members.
+ *   npx tsx scripts/render-ensemble-figure.ts [--members 24] [--rock 1800] [--rock-max 3000]
+ */
+import { parseArgs } from 'node:util';
+import { writePlotlyPng } from './lib/plotly-png';
+import { sampleTime, solveTravelTimes } from '../shared/eikonal';
+import { fitGradient, gradientStart, invert } from '../shared/inversion';
+import { normalDeviates } from '../shared/inversion/checkerboard';
+import { evalPolyline, rasteriseModel, type ModelFile } from '../shared/model';
+import { DEFAULT_INVERSION_SETTINGS } from '../shared/schemas/inversions';
+import { bandOutlines } from '../shared/uncertainty/band-outline';
+import { combineMembers, memberChi2Limit, quantile } from '../shared/uncertainty/combine';
+import { memberProblem } from '../shared/uncertainty/member';
+import { chi2AgainstOriginal } from '../shared/uncertainty/perturb';
+import { memberRockVelocity, planMembers } from '../shared/uncertainty/plan';
+import { SensitivityPool } from '../worker/threads/sensitivity-pool';
+
+const { values } = parseArgs({ options: { members: { type: 'string', default: '24' }, rock: { type: 'string', default: '1800' }, 'rock-max': { type: 'string' } } });
+const MEMBERS = Number(values.members);
+const ROCK = { min: Number(values.rock), max: Number(values['rock-max'] ?? values.rock) };
+
+const surface: [number, number][] = [[-10, 101], [20, 102.5], [50, 101.5], [80, 99.5], [110, 100]];
+const base1: [number, number][] = [[-10, 97], [30, 97.5], [60, 96], [110, 95.5]];
+const base2: [number, number][] = [[-10, 90], [20, 88], [45, 91], [70, 87], [110, 89]];
+const truth = (dx: number) => ({
+  format: 'timefield-model/1',
+  grid: { x0: -10, dx, nx: 120 / dx + 1, z0: 104, dz: dx, nz: 34 / dx + 1 },
+  surface,
+  layers: [
+    { name: 'soil', base: base1, v_top: 450, v_base: 550 },
+    { name: 'weathered rock', base: base2, v_top: 1300, v_base: 1500 },
+    { name: 'rock', v_top: 3200, v_base: 3400 },
+  ],
+}) as unknown as ModelFile;
+
+const fine = rasteriseModel(truth(0.25));
+const geophones = Array.from({ length: 48 }, (_, i) => 2 * i + 3);
+const shotXs = [-5, 3, 15, 27, 39, 51, 63, 75, 87, 97, 105];
+const noise = normalDeviates(2026);
+const shots = shotXs.map((sx) => {
+  const source = { x: sx, z: fine.surfaceZ(sx) };
+  const T = solveTravelTimes(fine.grid, fine.velocity, fine.active, source, { cellSlowness: fine.cellSlowness });
+  const xs = geophones.filter((x) => x !== sx);
+  return {
+    shotId: `S${sx}`,
+    source,
+    receivers: Float64Array.from(xs.flatMap((x) => [x, fine.surfaceZ(x)])),
+    times: Float64Array.from(xs, (x) => sampleTime(fine.grid, T, fine.active, { x, z: fine.surfaceZ(x) }) + 0.0005 * noise()),
+    sigmas: new Float64Array(xs.length).fill(0.0005),
+  };
+});
+
+const coarse = rasteriseModel(truth(1));
+const { grid, active } = coarse;
+const settings = DEFAULT_INVERSION_SETTINGS;
+const start = gradientStart(grid, active, coarse.surfaceZ, shots, settings).velocity;
+const problem = { grid, active, start, shots, settings, surface: coarse.surface };
+const pool = new SensitivityPool();
+let t0 = performance.now();
+const base = await invert(problem, pool.modeller(problem));
+const baseSeconds = (performance.now() - t0) / 1000;
+const baseChi2 = base.history.at(-1)!.chi2;
+const fit = fitGradient(shots);
+
+t0 = performance.now();
+const members = [];
+for (const plan of planMembers(MEMBERS, 2026, { start: true, smoothing: true, picks: 'sigma' })) {
+  const p = memberProblem({ problem, surfaceZ: coarse.surfaceZ, fit }, plan);
+  const r = await invert(p, pool.modeller(p));
+  members.push({ velocity: r.velocity, coverage: r.coverage, doi: r.doi, chi2: chi2AgainstOriginal(shots, p.shots, r.computed), rockVelocity: memberRockVelocity(plan.seed, ROCK.min, ROCK.max) });
+}
+const memberSeconds = (performance.now() - t0) / 1000;
+await pool.close();
+const maxChi2 = memberChi2Limit(baseChi2);
+const summary = combineMembers(members, grid, surface, { threshold: 1, rockVelocity: ROCK.min, stationXs: geophones, maxChi2 });
+
+// The truth: the weathered/rock interface below the ground at each geophone.
+const trueDepth = (x: number) => evalPolyline(surface, x) - evalPolyline(base2, x);
+const banded = summary.bands.filter((b) => b.p5 !== null);
+const inside = banded.filter((b) => b.p5! <= trueDepth(b.x) && trueDepth(b.x) <= b.p95!).length;
+const widths = banded.map((b) => b.p95! - b.p5!).sort((a, b) => a - b);
+const bias = banded.map((b) => b.median! - trueDepth(b.x)).sort((a, b) => a - b);
+console.log(`base: ${base.history.at(-1)!.iteration} iterations, chi2 ${baseChi2.toFixed(3)}, ${baseSeconds.toFixed(1)} s`);
+console.log(`members: ${MEMBERS} in ${memberSeconds.toFixed(1)} s (${(memberSeconds / baseSeconds).toFixed(1)}x the base), used ${summary.used}, left out ${summary.excluded} (chi2 > ${maxChi2.toFixed(2)})`);
+console.log(`v* ${ROCK.min}${ROCK.max > ROCK.min ? `-${ROCK.max}` : ''} m/s: banded at ${banded.length} of ${geophones.length} geophones; true interface inside the 5-95 % band at ${inside} (${((100 * inside) / Math.max(1, banded.length)).toFixed(0)} %); median width ${widths.length ? quantile(widths, 0.5).toFixed(2) : '-'} m; median (median − truth) ${bias.length ? quantile(bias, 0.5).toFixed(2) : '-'} m`);
+
+const xs = Array.from({ length: grid.nx }, (_, i) => grid.x0 + i * grid.dx);
+const zs = Array.from({ length: grid.nz }, (_, i) => grid.z0 - i * grid.dz);
+const rows = (a: Float32Array) => zs.map((_, iz) => xs.map((_, ix) => (Number.isFinite(a[iz * grid.nx + ix]) ? a[iz * grid.nx + ix] : null)));
+const VELOCITY_SCALE = [[0, '#f6e7c8'], [0.3, '#dfe8c9'], [0.6, '#b5d6d6'], [1, '#7fa9c9']];
+const elevation = (pick: (b: (typeof summary.bands)[number]) => number | null) => summary.bands.map((b) => (pick(b) === null ? null : evalPolyline(surface, b.x) - pick(b)!));
+const line = (pts: [number, number][], name: string, dash: string, color: string, axis: string, show = true) => ({ type: 'scatter', mode: 'lines', x: pts.map((p) => p[0]), y: pts.map((p) => p[1]), name, showlegend: show, xaxis: `x${axis}`, yaxis: `y${axis}`, line: { color, width: 2, dash } });
+const data = [
+  { type: 'heatmap', x: xs, y: zs, z: rows(summary.mean), colorscale: VELOCITY_SCALE, zmin: 400, zmax: 3400, colorbar: { title: { text: 'mean v (m/s)' }, len: 0.45, y: 0.78 }, hoverinfo: 'skip', xaxis: 'x', yaxis: 'y' },
+  line(surface, 'ground surface', 'solid', '#6b4f2a', ''),
+  line(base2, 'true weathered/rock interface', 'dash', '#000', ''),
+  ...bandOutlines(summary.bands, (x) => evalPolyline(surface, x)).map((o, k) => ({
+    type: 'scatter', mode: 'lines', x: o.x, y: o.z, name: `5–95 % band of the ${ROCK.min}${ROCK.max > ROCK.min ? `–${ROCK.max}` : ''} m/s depth`, showlegend: k === 0,
+    fill: 'toself', fillcolor: 'rgba(194,65,12,0.3)', line: { color: '#9a3412', width: 1 }, xaxis: 'x', yaxis: 'y',
+  })),
+  { type: 'scatter', mode: 'lines', x: geophones, y: elevation((b) => b.median), name: 'median depth', line: { color: '#9a3412', width: 2, dash: 'dot' }, xaxis: 'x', yaxis: 'y' },
+  { type: 'heatmap', x: xs, y: zs, z: rows(summary.std), colorscale: [[0, '#f5f5f4'], [0.5, '#a5b4c4'], [1, '#334155']], zmin: 0, colorbar: { title: { text: 'spread (m/s)' }, len: 0.45, y: 0.22 }, hoverinfo: 'skip', xaxis: 'x2', yaxis: 'y2' },
+  line(surface, '', 'solid', '#6b4f2a', '2', false),
+  line(base2, '', 'dash', '#000', '2', false),
+];
+const axis = { title: { text: 'elevation (m)' }, range: [zs[zs.length - 1], 105.5] };
+const layout = {
+  width: 1200, height: 880, margin: { l: 60, r: 20, t: 60, b: 60 },
+  title: { text: `${MEMBERS} inversions, ${summary.used} used: mean velocity and depth band (top), spread (bottom)` },
+  xaxis: { title: { text: 'x along the line (m)' }, range: [-10, 110], anchor: 'y', zeroline: false },
+  yaxis: { ...axis, domain: [0.56, 1], scaleanchor: 'x', scaleratio: 1 },
+  xaxis2: { title: { text: 'x along the line (m)' }, range: [-10, 110], anchor: 'y2', zeroline: false },
+  yaxis2: { ...axis, domain: [0, 0.44], scaleanchor: 'x2', scaleratio: 1 },
+  legend: { orientation: 'h', y: 0.5 },
+  plot_bgcolor: '#e7e5e4',
+};
+await writePlotlyPng(new URL('../docs/img/ensemble-band.png', import.meta.url), data, layout);
