@@ -43,9 +43,13 @@ shutdown() {
 }
 trap shutdown INT TERM EXIT
 
-# The worker is started again whenever it stops (crash, out of memory, killed); /api/health shows
-# "worker" not ok until it is back. The API keeps answering meanwhile.
-( supervise worker node --import tsx worker/index.ts ) & pids+=($!)
+# TF_WORKERS worker processes (default 1), each started again whenever it stops (crash, out of
+# memory, killed); /api/health shows "worker" not ok until one is back. The API keeps answering meanwhile.
+workers=${TF_WORKERS:-1}
+[[ "$workers" =~ ^[1-9][0-9]*$ ]] || { log "TF_WORKERS must be a whole number from 1 (got '$workers')"; exit 2; }
+for _ in $(seq 1 "$workers"); do
+  ( supervise worker node --import tsx worker/index.ts ) & pids+=($!)
+done
 node --import tsx server/index.ts & api=$! pids+=($!)
 
 for _ in $(seq 1 100); do

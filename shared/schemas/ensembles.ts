@@ -36,7 +36,7 @@ export const startEnsembleBody = z
       ctx.addIssue({ code: 'custom', path: ['vary'], message: 'nothing varies: every member would repeat the same inversion; vary the start, the weight or the picks' });
     }
     if (b.rockVelocityMax !== undefined && b.rockVelocityMax < b.rockVelocity) {
-      ctx.addIssue({ code: 'custom', path: ['rockVelocityMax'], message: `must be at least rockVelocity (${b.rockVelocity} m/s)` });
+      ctx.addIssue({ code: 'custom', path: ['rockVelocityMax'], message: `must be at least the rock velocity (${b.rockVelocity} m/s)` });
     }
   });
 

@@ -13,7 +13,7 @@ export const ENSEMBLE_CAUTION =
 export function variationWords(vary: EnsembleVariation, rock: { min: number; max: number }): string[] {
   const out: string[] = [];
   if (vary.start) out.push(`the starting gradient (v0 ×/÷ ${SPREAD.v0}, its increase with depth ×/÷ ${SPREAD.k})`);
-  if (vary.smoothing) out.push(`the smoothing weight (×/÷ ${SPREAD.smoothing})`);
+  if (vary.smoothing) out.push(`the smoothing weight (its schedule started ×/÷ ${SPREAD.smoothing})`);
   if (vary.picks === 'sigma') out.push('each pick within its stated uncertainty');
   if (vary.picks === 'bootstrap') out.push('the shots, resampled with replacement');
   if (rock.max > rock.min) out.push(`the rock velocity v* (${rock.min}–${rock.max} m/s)`);

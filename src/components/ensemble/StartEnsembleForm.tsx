@@ -61,7 +61,7 @@ export function StartEnsembleForm({ inversionId, lineId }: { inversionId: string
         </label>
         <label className="flex items-center gap-2">
           <input type="checkbox" checked={form.varySmoothing} onChange={(e) => set('varySmoothing', e.target.checked)} className="accent-accent-700" data-testid="ensemble-vary-smoothing" />
-          Smoothing weight within ×/÷ {SPREAD.smoothing} of the one this inversion settled on
+          Smoothing: the automatic weight schedule started within ×/÷ {SPREAD.smoothing} of its usual first weight
         </label>
         <div className="max-w-md">
           <SelectField label="Picks" value={form.picks} onChange={(e) => set('picks', e.target.value as EnsembleFormState['picks'])} error={shown.vary} data-testid="ensemble-vary-picks">
