@@ -9,7 +9,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/dataSource';
 import type { EnsembleMemberView, EnsembleSectionView, EnsembleView } from '../../shared/schemas/ensembles';
-import { signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { pageTexts } from '../unit/report/poppler';
+import { binaryBody, signedInAgent, startTestApp, type Agent, type TestApp } from './support/app';
 import { flatStations, gradientPicks, range } from './support/inversion-data';
 import { startWorker, waitFor, type WorkerProcess } from './support/worker';
 import { emailOf, PASSWORD, resetWorld, type World } from './support/world';
@@ -139,6 +143,23 @@ describe('ensembles through the workers', () => {
     const list: EnsembleView[] = (await geo.get(`/api/inversions/${inversionId}/ensembles`).expect(200)).body;
     expect(list.map((e) => e.id)).toContain(doneId);
   }, 300_000);
+
+  it('a report of the inversion made now states the newest ensemble\'s band as its accuracy', async () => {
+    const reportId = (await lead.post(`/api/inversions/${inversionId}/reports`).set('X-CSRF-Token', lead.csrf).send({ isoVelocity: ROCK }).expect(202)).body.id;
+    const ready = await waitFor(async () => {
+      const r = (await lead.get(`/api/reports/${reportId}`)).body;
+      return r.render.state === 'ready' || r.render.state === 'failed' ? r : undefined;
+    }, 90_000, 'the PDF');
+    expect(ready.render.state, `${ready.render.error} ${logs()}`).toBe('ready');
+    const [{ snapshot }] = await dataSource.query('SELECT snapshot FROM reports WHERE id = $1', [reportId]);
+    expect(snapshot.ensembleId).toBe(doneId);
+    const pdf = await lead.get(`/api/reports/${reportId}/pdf`).buffer(true).parse(binaryBody);
+    const file = join(mkdtempSync(join(tmpdir(), 'tf-ensemble-report-')), 'report.pdf');
+    writeFileSync(file, pdf.body);
+    const text = pageTexts(file).join('\n').replace(/\s+/g, ' ');
+    expect(text).toContain(`Accuracy of the depth to ${ROCK} m/s`);
+    expect(text).toContain('The band covers only what was varied between the members');
+  }, 120_000);
 
   it('hands a member whose worker was killed to the other worker, which finishes it', async () => {
     const id = (await start({ members: 4, seed: 11, rockVelocity: ROCK }).expect(202)).body.id;

@@ -200,3 +200,25 @@ describe('convergence chart ticks', () => {
     expect(logTicks(0.9, 260)).toEqual([1, 2, 5, 10, 20, 50, 100, 200]);
   });
 });
+
+describe('inversion report with an ensemble', () => {
+  it('states the accuracy from the band (median width over the banded stations, hand-computed) and tabulates it per station', async () => {
+    const input = knownInversionInput();
+    // Widths 2.0, 1.0 and 3.0 m at three stations, none at the fourth: median 2.0 m, range 1.0–3.0 m.
+    const bands = [
+      { station: 'G1', x: 0, groundZ: 20, resolved: 10, p5: 9, median: 10, p95: 11 },
+      { station: 'G2', x: 5, groundZ: 20, resolved: 10, p5: 9.5, median: 10, p95: 10.5 },
+      { station: 'G3', x: 10, groundZ: 20, resolved: 9, p5: 8, median: 10, p95: 11 },
+      { station: 'G4', x: 15, groundZ: 20, resolved: 3, p5: null, median: null, p95: null },
+    ];
+    const { flow, lines } = await render({ ...input, ensemble: { members: 12, used: 10, excluded: 2, maxChi2: 1.2, seed: 7, vary: { start: true, smoothing: true, picks: 'sigma' }, rock: { min: 1500, max: 1500 }, bands } });
+    expect(flow).toContain('Accuracy of the depth to 1500 m/s');
+    expect(flow).toContain('the 5–95 % band of 10 ensemble members is 2.0 m wide at the median station (1.0–3.0 m), about ±1.0 m, at the 3 of 4 stations where the rays resolve it');
+    expect(flow).toContain('10 members explain the picks to χ² ≤ 1.20 and make the band; 2 explained them worse and were left out');
+    expect(flow).toContain('The band covers only what was varied between the members');
+    expect(lines).toContain('G2 5.00 9.5 10.0 10.5 1.0 10');
+    expect(lines).toContain('G4 15.00 — — — — 3');
+    // Without an ensemble the section is not there.
+    expect((await render(input)).flow).not.toContain('Accuracy of the depth to');
+  }, 60_000);
+});
