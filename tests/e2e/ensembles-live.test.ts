@@ -97,9 +97,13 @@ describe('ensemble pages on the real routes and workers', () => {
     expect(await page.getByTestId('ensemble-members').locator('tbody tr').count()).toBe(8);
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'ensemble-done.png'), fullPage: true });
 
-    // The inversion page lists it.
+    // The inversion page lists it; the line's depth-to-rock table carries its band beside the inversion's depth.
     await page.goto(`${server.baseUrl}/lines/${lineId}/inversions/${inversionId}`);
     await page.getByTestId('ensembles-table').getByRole('link').first().waitFor();
+    await page.goto(`${server.baseUrl}/lines/${lineId}?tab=rock`);
+    await page.getByTestId('depth-to-rock-table').getByText('Ensemble band, 1800–3000 m/s (m)').waitFor();
+    const banded = section.bands[firstBanded];
+    await page.getByTestId('depth-to-rock-table').getByText(`${banded.p5!.toFixed(1)}–${banded.p95!.toFixed(1)}`).first().waitFor();
     await page.close();
   }, 360_000);
 

@@ -5,6 +5,7 @@ import { lineRuns } from '../../api/runs';
 import type { LineDetail } from '../../api/types';
 import { SelectField } from '../Field';
 import { SectionExports } from './SectionExports';
+import { useEnsembleBandColumn } from '../ensemble/useEnsembleBandColumn';
 
 /**
  * The line's depth-to-rock table and files (issue 19 item 3) from any of its sections: a model
@@ -19,6 +20,7 @@ export function DepthToRockTab({ line }: { line: LineDetail }) {
   ];
   const [chosen, setChosen] = useState<string | null>(null);
   const base = chosen ?? choices[0]?.key ?? null;
+  const band = useEnsembleBandColumn(/^\/api\/inversions\/([^/]+)\/export$/.exec(base ?? '')?.[1] ?? '');
   if (!base) return <p className="text-stone-700">No section yet: save a model version, finish a forward run or an inversion, and its depth to rock appears here.</p>;
   return (
     <div data-testid="depth-to-rock-tab">
@@ -31,7 +33,7 @@ export function DepthToRockTab({ line }: { line: LineDetail }) {
           ))}
         </SelectField>
       </div>
-      <SectionExports key={base} base={base} />
+      <SectionExports key={base} base={base} band={band ?? undefined} />
     </div>
   );
 }

@@ -21,7 +21,13 @@ const m = (v: number | null, digits = 2) => (v === null ? '—' : v.toFixed(digi
  * surface chosen here (an interface of a layered model or an iso-velocity) and, optionally, the
  * excavatability classes by velocity.
  */
-export function SectionExports({ base, testId = 'section-exports' }: { base: string; testId?: string }) {
+/** An ensemble's 5–95 % depth band beside the table (an inversion with a combined ensemble). */
+export interface BandColumn {
+  title: string;
+  byStation: Map<string, { p5: number | null; p95: number | null }>;
+}
+
+export function SectionExports({ base, band, testId = 'section-exports' }: { base: string; band?: BandColumn; testId?: string }) {
   const [rock, setRock] = useState<string>('');
   const [iso, setIso] = useState(2500);
   const [classes, setClasses] = useState(true);
@@ -90,6 +96,7 @@ export function SectionExports({ base, testId = 'section-exports' }: { base: str
                 <Th numeric>Ground (m)</Th>
                 <Th numeric>Depth (m)</Th>
                 <Th numeric>Elevation (m)</Th>
+                {band && <Th numeric title="The 5–95 % band of the depth over the ensemble's members">{band.title}</Th>}
                 {data.classes.map((c) => (
                   <Th key={c.from} numeric title={`Depth where the velocity first reaches ${c.from} m/s`}>
                     {c.name} from (m)
@@ -107,6 +114,7 @@ export function SectionExports({ base, testId = 'section-exports' }: { base: str
                   <Td numeric>{m(r.groundZ)}</Td>
                   <Td numeric>{r.depth === null ? r.note : m(r.depth)}</Td>
                   <Td numeric>{m(r.elevation)}</Td>
+                  {band && <Td numeric>{bandText(band.byStation.get(String(r.station)))}</Td>}
                   {r.classes.map((d, k) => (
                     <Td key={k} numeric>
                       {m(d, 1)}
@@ -132,3 +140,5 @@ export function SectionExports({ base, testId = 'section-exports' }: { base: str
     </section>
   );
 }
+
+const bandText = (b: { p5: number | null; p95: number | null } | undefined) => (b && b.p5 !== null && b.p95 !== null ? `${b.p5.toFixed(1)}–${b.p95.toFixed(1)}` : '—');

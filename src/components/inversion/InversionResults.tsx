@@ -10,6 +10,7 @@ import { ResidualTable } from '../run/table/ResidualTable';
 import { CheckerboardPanel } from './CheckerboardPanel';
 import { InversionSectionPanel } from './InversionSectionPanel';
 import { SectionExports } from '../exports/SectionExports';
+import { useEnsembleBandColumn } from '../ensemble/useEnsembleBandColumn';
 
 type View = 'section' | 'checkerboard' | 'misfit' | 'table' | 'exports';
 
@@ -22,6 +23,7 @@ export function InversionResults({ inversion, lineName }: { inversion: Inversion
   const idPrefix = useId().replace(/[^a-zA-Z0-9_-]/g, '');
   const section = useInversionSection(inversion.id);
   const residuals = useInversionResiduals(inversion.id);
+  const band = useEnsembleBandColumn(inversion.id);
   const tabs: RunTab<View>[] = [
     { key: 'section', label: 'Velocity section' },
     ...(inversion.settings.checkerboard ? [{ key: 'checkerboard' as const, label: 'Checkerboard test' }] : []),
@@ -55,7 +57,7 @@ export function InversionResults({ inversion, lineName }: { inversion: Inversion
       <RunTabPanel idPrefix={idPrefix} tabKey={view}>
         {needsSection && section.isPending && <Loading what="section" />}
         {needsSection && section.isError && <LoadError error={section.error} what="section" onRetry={() => void section.refetch()} />}
-        {view === 'exports' && <SectionExports base={`/api/inversions/${inversion.id}/export`} />}
+        {view === 'exports' && <SectionExports base={`/api/inversions/${inversion.id}/export`} band={band ?? undefined} />}
         {view === 'section' && section.data && <InversionSectionPanel section={section.data} lineId={inversion.lineId} />}
         {view === 'checkerboard' && section.data && (
           section.data.checkerboard ? (
