@@ -32,10 +32,11 @@ export function useEnsemble(ensembleId: string) {
   });
 }
 
-/** Every member's state and draws; polled with the ensemble while it runs. */
-export function useEnsembleMembers(ensembleId: string, active: boolean) {
+/** Every member's state and draws; polled with the ensemble while it runs, and read once more when the ensemble's state changes (its last members). */
+export function useEnsembleMembers(ensembleId: string, status: EnsembleView['status'] | undefined) {
+  const active = isEnsembleActive(status);
   return useQuery({
-    queryKey: ensembleKeys.members(ensembleId),
+    queryKey: [...ensembleKeys.members(ensembleId), status ?? 'unknown'],
     queryFn: ({ signal }) => apiRequest<EnsembleMemberView[]>(`${ensemblePath(ensembleId)}/members`, { signal }),
     enabled: Boolean(ensembleId),
     refetchInterval: active ? PROGRESS_POLL_MS : false,

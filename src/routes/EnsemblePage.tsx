@@ -4,6 +4,7 @@ import { useInversion } from '../api/inversions';
 import { useRunLine } from '../api/runs';
 import { Loading, LoadError } from '../components/LoadState';
 import { Section } from '../components/Section';
+import { BandTiesTable } from '../components/ensemble/BandTiesTable';
 import { DepthBandTable } from '../components/ensemble/DepthBandTable';
 import { EnsembleCaution } from '../components/ensemble/EnsembleCaution';
 import { MeanWithBand, ProbabilityChart, SpreadChart } from '../components/ensemble/EnsembleCharts';
@@ -29,7 +30,7 @@ export function EnsemblePage() {
   const ensemble = useEnsemble(ensembleId);
   const e = ensemble.data;
   const active = isEnsembleActive(e?.status);
-  const members = useEnsembleMembers(ensembleId, active);
+  const members = useEnsembleMembers(ensembleId, e?.status);
   const section = useEnsembleSection(ensembleId, e?.status === 'done');
   const base = useInversion(e?.inversionId ?? '');
   const line = useRunLine(e?.lineId ?? lineId);
@@ -98,6 +99,7 @@ export function EnsemblePage() {
           </Section>
           <Section title="Depth band per station">
             <DepthBandTable section={section.data} ensemble={e} title={`${line.data?.name ?? 'line'} ${title}`} />
+            <BandTiesTable lineId={e.lineId} section={section.data} />
           </Section>
         </>
       )}

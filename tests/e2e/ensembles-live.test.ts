@@ -95,6 +95,11 @@ describe('ensemble pages on the real routes and workers', () => {
     expect(text).toContain('station,x_m,ground_z_m,members_resolving,depth_p5_m,depth_median_m,depth_p95_m,elevation_median_m');
     expect(text.trim().split('\n').filter((l) => !l.startsWith('#'))).toHaveLength(section.bands.length + 1);
     expect(await page.getByTestId('ensemble-members').locator('tbody tr').count()).toBe(8);
+    // Read once more when the ensemble settled: no member is left showing as running.
+    await page.waitForFunction(() => [...document.querySelectorAll('[data-testid="ensemble-members"] tbody tr')].every((r) => r.textContent?.includes('done')));
+    // The demo's two boreholes log a top of rock (the trial pit does not): each is set against the band.
+    expect(await page.getByTestId('band-ties-table').locator('tbody tr').count()).toBe(2);
+    await page.getByTestId('band-ties').getByText(/The logged top of rock lies inside the band of 1800–3000 m\/s at \d of \d holes/).waitFor();
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'ensemble-done.png'), fullPage: true });
 
     // The inversion page lists it; the line's depth-to-rock table carries its band beside the inversion's depth.

@@ -211,11 +211,17 @@ describe('inversion report with an ensemble', () => {
       { station: 'G3', x: 10, groundZ: 20, resolved: 9, p5: 8, median: 10, p95: 11 },
       { station: 'G4', x: 15, groundZ: 20, resolved: 3, p5: null, median: null, p95: null },
     ];
-    const { flow, lines } = await render({ ...input, ensemble: { members: 12, used: 10, excluded: 2, maxChi2: 1.2, seed: 7, vary: { start: true, smoothing: true, picks: 'sigma' }, rock: { min: 1500, max: 1500 }, bands } });
+    const holes = [
+      { name: 'BH1', kind: 'borehole' as const, x: 2.5, groundZ: 20, waterDepth: null, contacts: [{ depth: 0, material: 'soil', rockTop: false }, { depth: 9.8, material: 'rock', rockTop: true }] },
+      { name: 'BH2', kind: 'borehole' as const, x: 7.5, groundZ: 20, waterDepth: null, contacts: [{ depth: 12, material: 'rock', rockTop: true }] },
+    ];
+    const { flow, lines } = await render({ ...input, boreholes: holes, ensemble: { members: 12, used: 10, excluded: 2, maxChi2: 1.2, seed: 7, vary: { start: true, smoothing: true, picks: 'sigma' }, rock: { min: 1500, max: 1500 }, bands } });
     expect(flow).toContain('Accuracy of the depth to 1500 m/s');
     expect(flow).toContain('the 5–95 % band of 10 ensemble members is 2.0 m wide at the median station (1.0–3.0 m), about ±1.0 m, at the 3 of 4 stations where the rays resolve it');
     expect(flow).toContain('10 members explain the picks to χ² ≤ 1.20 and make the band; 2 explained them worse and were left out');
     expect(flow).toContain('The band covers only what was varied between the members');
+    // BH1 half-way between G1 (9–11) and G2 (9.5–10.5): 9.25–10.75 m; BH2 between G2 and G3 (8–11): 8.75–10.75 m.
+    expect(flow).toContain('BH1 (x 2.5 m) logs the top of rock at 9.8 m, band 9.3–10.8 m: inside the band; BH2 (x 7.5 m) logs the top of rock at 12.0 m, band 8.8–10.8 m: deeper than the band');
     expect(lines).toContain('G2 5.00 9.5 10.0 10.5 1.0 10');
     expect(lines).toContain('G4 15.00 — — — — 3');
     // Without an ensemble the section is not there.

@@ -182,3 +182,34 @@ describe('the band drawn on a section', () => {
     ]);
   });
 });
+
+describe('the band at the boreholes', () => {
+  // Stations every 10 m; no band at x = 30 (too few members resolve it there).
+  const band = (x: number, p5: number | null, median: number | null, p95: number | null) => ({ x, resolved: 8, p5, median, p95 });
+  const bands = [band(0, 4, 5, 6), band(10, 6, 7, 10), band(20, 5, 6, 7), band(30, null, null, null), band(40, 8, 9, 10)];
+
+  it('interpolates the band linearly between neighbouring stations that both have one (hand-worked), and gives none next to a gap or beyond the ends', async () => {
+    const { bandAt } = await import('../../../shared/uncertainty/band-ties');
+    expect(bandAt(bands, 10)).toEqual({ p5: 6, median: 7, p95: 10 });
+    // x = 2.5 between 0 and 10: a quarter of the way.
+    expect(bandAt(bands, 2.5)).toEqual({ p5: 4.5, median: 5.5, p95: 7 });
+    expect(bandAt(bands, 25)).toBeNull();
+    expect(bandAt(bands, 30)).toBeNull();
+    expect(bandAt(bands, -1)).toBeNull();
+    expect(bandAt(bands, 41)).toBeNull();
+  });
+
+  it('says whether the logged top of rock lies inside the band, shallower or deeper, for holes that log one', async () => {
+    const { bandTies } = await import('../../../shared/uncertainty/band-ties');
+    const ties = bandTies(bands, [
+      { name: 'BH1', x: 2.5, contacts: [{ depth: 1, rockTop: false }, { depth: 6, rockTop: true }] },
+      { name: 'BH2', x: 15, contacts: [{ depth: 5, rockTop: true }] },
+      { name: 'BH3', x: 20, contacts: [{ depth: 7.5, rockTop: true }] },
+      { name: 'TP1', x: 10, contacts: [{ depth: 1.2 }] },
+      { name: 'BH4', x: 35, contacts: [{ depth: 9, rockTop: true }] },
+    ]);
+    expect(ties.map((t) => [t.name, t.verdict])).toEqual([['BH1', 'inside'], ['BH2', 'shallower'], ['BH3', 'deeper'], ['BH4', 'no band']]);
+    // BH2 at x = 15, half-way from 10 to 20: 5.5–8.5 m, logged 5 m.
+    expect(ties[1].band).toEqual({ p5: 5.5, median: 6.5, p95: 8.5 });
+  });
+});

@@ -3,6 +3,7 @@
  * ensemble (issue 20): the accuracy statement taken from the 5–95 % band, what the members varied and
  * which were used, the band per station, and what the band does not cover.
  */
+import { bandTies } from '../../../shared/uncertainty/band-ties';
 import { ENSEMBLE_CAUTION, accuracyStatement, variationWords } from '../../../shared/uncertainty/wording';
 import { caption, paragraph, sectionHeading } from '../flow';
 import { fixed, NONE } from '../format';
@@ -21,6 +22,15 @@ export function drawInversionAccuracy(ctx: InversionContext): void {
       `${e.used} members explain the picks to χ² ≤ ${fixed(e.maxChi2, 2)} and make the band; ${e.excluded} explained them worse and were left out. ` +
       'At each station the depth is the median of the members that resolve it there, and the band runs from the 5th to the 95th percentile of their depths; where fewer than half resolve it, no band is given.',
   );
+  const ties = bandTies(e.bands, ctx.input.boreholes ?? []);
+  if (ties.length) {
+    const words = { inside: 'inside the band', shallower: 'shallower than the band', deeper: 'deeper than the band', 'no band': 'where there is no band' };
+    paragraph(
+      ctx,
+      `Against the logs: ${ties.map((t) => `${t.name} (x ${fixed(t.x, 1)} m) logs the top of rock at ${fixed(t.logged, 1)} m${t.band ? `, band ${fixed(t.band.p5, 1)}–${fixed(t.band.p95, 1)} m` : ''}: ${words[t.verdict]}`).join('; ')}. ` +
+        'Where a log lies outside the band, the rock velocity or the model does not match the ground there; calibrate before reading depths elsewhere.',
+    );
+  }
   paragraph(ctx, ENSEMBLE_CAUTION);
   ctx.ensureSpace(60);
   const table = caption(ctx, 'Table', 'Depth below ground (m) at the stations: 5th percentile, median and 95th percentile of the ensemble members, the width of the band, and how many members resolve the depth there.');

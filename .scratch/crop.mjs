@@ -1,0 +1,10 @@
+import { chromium } from 'playwright-core';
+const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--no-sandbox', '--disable-background-networking'] });
+const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+await page.goto('file://' + process.cwd() + '/tests/e2e/screenshots/ensemble-done.png');
+const h = await page.evaluate(() => document.images[0].naturalHeight);
+console.log(h);
+await page.setViewportSize({ width: 1440, height: 1100 });
+await page.evaluate((y) => window.scrollTo(0, y), Number(process.argv[2] ?? 1500));
+await page.screenshot({ path: '.scratch/crop.png' });
+await browser.close();
