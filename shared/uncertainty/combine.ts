@@ -63,48 +63,89 @@ export function memberChi2Limit(baseChi2: number | null | undefined): number {
   return Number.isFinite(baseChi2) ? Math.max(MAX_MEMBER_CHI2, 1.25 * baseChi2!) : MAX_MEMBER_CHI2;
 }
 
-export function combineMembers(
-  members: readonly MemberSection[],
-  grid: Grid,
-  surface: [number, number][],
-  options: { threshold: number; rockVelocity: number; stationXs: readonly number[]; maxChi2?: number },
-): EnsembleSummary {
-  const maxChi2 = options.maxChi2 ?? MAX_MEMBER_CHI2;
-  const used = members.filter((m) => Number.isFinite(m.chi2) && m.chi2 <= maxChi2);
-  const n = grid.nx * grid.nz;
-  const covering = new Uint16Array(n);
-  const sum = new Float64Array(n), sumSq = new Float64Array(n), faster = new Float64Array(n);
-  for (const m of used) {
-    for (let i = 0; i < n; i++) {
-      const v = m.velocity[i];
-      if (!Number.isFinite(v) || !(m.coverage[i] >= options.threshold)) continue;
-      covering[i]++;
-      sum[i] += v;
-      sumSq[i] += v * v;
-      if (v > (m.rockVelocity ?? options.rockVelocity)) faster[i]++;
+export interface CombineOptions {
+  threshold: number;
+  rockVelocity: number;
+  stationXs: readonly number[];
+  maxChi2?: number;
+}
+
+/**
+ * The combination one member at a time, so a worker holds a few node-sized sums and each member's
+ * depths at the stations, never every member's section at once (256 members of a 2 M-node grid
+ * would not fit in a worker's memory otherwise).
+ */
+export class EnsembleAccumulator {
+  private readonly n: number;
+  private readonly maxChi2: number;
+  private readonly covering: Uint16Array;
+  private readonly sum: Float64Array;
+  private readonly sumSq: Float64Array;
+  private readonly faster: Float64Array;
+  private readonly depths: number[][];
+  private readonly surfaceZ: (x: number) => number;
+  private used = 0;
+  private excluded = 0;
+
+  constructor(private readonly grid: Grid, surface: [number, number][], private readonly options: CombineOptions) {
+    this.n = grid.nx * grid.nz;
+    this.maxChi2 = options.maxChi2 ?? MAX_MEMBER_CHI2;
+    this.covering = new Uint16Array(this.n);
+    this.sum = new Float64Array(this.n);
+    this.sumSq = new Float64Array(this.n);
+    this.faster = new Float64Array(this.n);
+    this.depths = options.stationXs.map(() => []);
+    this.surfaceZ = (x: number) => evalPolyline(surface, x);
+  }
+
+  add(m: MemberSection): void {
+    if (!(Number.isFinite(m.chi2) && m.chi2 <= this.maxChi2)) {
+      this.excluded++;
+      return;
     }
+    this.used++;
+    const { threshold } = this.options;
+    const rock = m.rockVelocity ?? this.options.rockVelocity;
+    for (let i = 0; i < this.n; i++) {
+      const v = m.velocity[i];
+      if (!Number.isFinite(v) || !(m.coverage[i] >= threshold)) continue;
+      this.covering[i]++;
+      this.sum[i] += v;
+      this.sumSq[i] += v * v;
+      if (v > rock) this.faster[i]++;
+    }
+    const support = raySupport(this.grid, m.velocity, m.coverage, m.doi, threshold, this.surfaceZ);
+    this.options.stationXs.forEach((x, k) => {
+      const r = resolvedIsoDepth(support, rock, x);
+      if (r.status === 'resolved' && r.result?.depth != null) this.depths[k].push(r.result.depth);
+    });
   }
-  const mean = new Float32Array(n).fill(Number.NaN), std = new Float32Array(n).fill(Number.NaN), probabilityFaster = new Float32Array(n).fill(Number.NaN);
-  // A node counts when at least half the members cover it (and two at least, for a spread).
-  const enough = Math.max(2, Math.ceil(used.length / 2));
-  for (let i = 0; i < n; i++) {
-    const c = covering[i];
-    if (c < enough) continue;
-    mean[i] = sum[i] / c;
-    // Sample standard deviation (n − 1), clamped at 0 against rounding.
-    std[i] = Math.sqrt(Math.max(0, (sumSq[i] - (sum[i] * sum[i]) / c) / (c - 1)));
-    probabilityFaster[i] = faster[i] / c;
+
+  finish(): EnsembleSummary {
+    const { n, covering, sum, sumSq, faster } = this;
+    const mean = new Float32Array(n).fill(Number.NaN), std = new Float32Array(n).fill(Number.NaN), probabilityFaster = new Float32Array(n).fill(Number.NaN);
+    // A node counts when at least half the members cover it (and two at least, for a spread).
+    const enough = Math.max(2, Math.ceil(this.used / 2));
+    for (let i = 0; i < n; i++) {
+      const c = covering[i];
+      if (c < enough) continue;
+      mean[i] = sum[i] / c;
+      // Sample standard deviation (n − 1), clamped at 0 against rounding.
+      std[i] = Math.sqrt(Math.max(0, (sumSq[i] - (sum[i] * sum[i]) / c) / (c - 1)));
+      probabilityFaster[i] = faster[i] / c;
+    }
+    const bands = this.options.stationXs.map((x, k): DepthBand => {
+      const depths = [...this.depths[k]].sort((a, b) => a - b);
+      if (depths.length < enough) return { x, resolved: depths.length, median: null, p5: null, p95: null };
+      return { x, resolved: depths.length, median: quantile(depths, 0.5), p5: quantile(depths, 0.05), p95: quantile(depths, 0.95) };
+    });
+    return { used: this.used, excluded: this.excluded, covering, mean, std, probabilityFaster, bands };
   }
-  const surfaceZ = (x: number) => evalPolyline(surface, x);
-  const supports = used.map((m) => ({ support: raySupport(grid, m.velocity, m.coverage, m.doi, options.threshold, surfaceZ), rock: m.rockVelocity ?? options.rockVelocity }));
-  const bands = options.stationXs.map((x): DepthBand => {
-    const depths = supports
-      .map((s) => resolvedIsoDepth(s.support, s.rock, x))
-      .filter((r) => r.status === 'resolved' && r.result?.depth != null)
-      .map((r) => r.result!.depth!)
-      .sort((a, b) => a - b);
-    if (depths.length < enough) return { x, resolved: depths.length, median: null, p5: null, p95: null };
-    return { x, resolved: depths.length, median: quantile(depths, 0.5), p5: quantile(depths, 0.05), p95: quantile(depths, 0.95) };
-  });
-  return { used: used.length, excluded: members.length - used.length, covering, mean, std, probabilityFaster, bands };
+}
+
+/** All members at once (tests, studies): the same as adding them one by one. */
+export function combineMembers(members: readonly MemberSection[], grid: Grid, surface: [number, number][], options: CombineOptions): EnsembleSummary {
+  const acc = new EnsembleAccumulator(grid, surface, options);
+  for (const m of members) acc.add(m);
+  return acc.finish();
 }

@@ -4,7 +4,7 @@
  * writes the result. Too few members that fit the picks fail the ensemble with the count.
  */
 import type { Grid } from '../../shared/grid';
-import { combineMembers, memberChi2Limit, type MemberSection } from '../../shared/uncertainty/combine';
+import { EnsembleAccumulator, memberChi2Limit } from '../../shared/uncertainty/combine';
 import { memberRockVelocity, type MemberPlan } from '../../shared/uncertainty/plan';
 import { evalPolyline } from '../../shared/model/polyline';
 import { dataSource } from '../../server/db/dataSource';
@@ -14,7 +14,6 @@ import { listStations } from '../../server/services/stations';
 interface MemberRow {
   plan: MemberPlan;
   chi2: number | null;
-  seconds: number;
   velocity: Buffer;
   coverage: Buffer;
   doi: Buffer;
@@ -31,29 +30,26 @@ export async function combineWhenComplete(ensembleId: string): Promise<void> {
     if (!ensemble || ensemble.status !== 'running') return;
     const [{ open }] = await em.query(`SELECT count(*)::int AS open FROM ensemble_members WHERE ensemble_id = $1 AND status IN ('queued', 'running')`, [ensembleId]);
     if (open > 0) return;
-    const rows: MemberRow[] = await em.query(
-      `SELECT plan, chi2, seconds, velocity, coverage, doi FROM ensemble_members WHERE ensemble_id = $1 AND status = 'done' ORDER BY index`,
-      [ensembleId],
-    );
     const grid: Grid = ensemble.grid;
     const surface: [number, number][] = ensemble.surface ?? [[grid.x0, grid.z0], [grid.x0 + (grid.nx - 1) * grid.dx, grid.z0]];
     const stations = await listStations(ensemble.line_id);
-    const members: MemberSection[] = rows.map((r) => ({
-      velocity: unpackFloat32(r.velocity),
-      coverage: unpackFloat32(r.coverage),
-      doi: unpackFloat64(r.doi),
-      chi2: r.chi2 ?? Number.NaN,
-      rockVelocity: memberRockVelocity(r.plan.seed, ensemble.rock_velocity_min, ensemble.rock_velocity_max),
-    }));
     const maxChi2 = memberChi2Limit(ensemble.base_chi2);
-    const summary = combineMembers(members, grid, surface, {
-      maxChi2,
-      threshold: ensemble.coverage_threshold,
-      rockVelocity: ensemble.rock_velocity_min,
-      stationXs: stations.map((s) => s.x),
-    });
-    const failed = ensemble.members - rows.length;
-    const seconds = rows.map((r) => r.seconds).sort((a, b) => a - b);
+    const acc = new EnsembleAccumulator(grid, surface, { maxChi2, threshold: ensemble.coverage_threshold, rockVelocity: ensemble.rock_velocity_min, stationXs: stations.map((s) => s.x) });
+    // One member's arrays at a time: the worker never holds the whole ensemble.
+    const done: { index: number; seconds: number }[] = await em.query(`SELECT index, seconds FROM ensemble_members WHERE ensemble_id = $1 AND status = 'done' ORDER BY index`, [ensembleId]);
+    for (const { index } of done) {
+      const [r]: MemberRow[] = await em.query('SELECT plan, chi2, velocity, coverage, doi FROM ensemble_members WHERE ensemble_id = $1 AND index = $2', [ensembleId, index]);
+      acc.add({
+        velocity: unpackFloat32(r.velocity),
+        coverage: unpackFloat32(r.coverage),
+        doi: unpackFloat64(r.doi),
+        chi2: r.chi2 ?? Number.NaN,
+        rockVelocity: memberRockVelocity(r.plan.seed, ensemble.rock_velocity_min, ensemble.rock_velocity_max),
+      });
+    }
+    const summary = acc.finish();
+    const failed = ensemble.members - done.length;
+    const seconds = done.map((r) => r.seconds).sort((a, b) => a - b);
     const stats = {
       used: summary.used,
       excluded: summary.excluded,
