@@ -7,7 +7,7 @@ import { HttpError } from '../http/errors';
 import { addJobs } from '../queue/queue';
 import { audit } from './audit';
 
-/** The queue's job id of a member (BullMQ refuses ':' in custom ids); the worker uses the same. */
+/** The queue's job id of a member, so a repeated add never duplicates it (BullMQ refuses ':' in custom ids). */
 export const memberJobId = (ensembleId: string, index: number) => `ensemble-${ensembleId}-${index}`;
 
 /**
