@@ -7,45 +7,13 @@
  *   npx tsx scripts/render-inversion-figure.ts
  */
 import { writePlotlyPng } from './lib/plotly-png';
-import { sampleTime, solveTravelTimes } from '../shared/eikonal';
+import { base1, base2, geophones, shotXs, surface, threeLayerSurvey } from './lib/three-layer-line';
 import { gradientStart, invert } from '../shared/inversion';
-import { normalDeviates } from '../shared/inversion/checkerboard';
-import { evalPolyline, rasteriseModel, type ModelFile } from '../shared/model';
+import { evalPolyline } from '../shared/model';
 import { DEFAULT_INVERSION_SETTINGS } from '../shared/schemas/inversions';
 import { SensitivityPool } from '../worker/threads/sensitivity-pool';
 
-const surface: [number, number][] = [[-10, 101], [20, 102.5], [50, 101.5], [80, 99.5], [110, 100]];
-const base1: [number, number][] = [[-10, 97], [30, 97.5], [60, 96], [110, 95.5]];
-const base2: [number, number][] = [[-10, 90], [20, 88], [45, 91], [70, 87], [110, 89]];
-const truth = (dx: number) => ({
-  format: 'timefield-model/1',
-  grid: { x0: -10, dx, nx: 120 / dx + 1, z0: 104, dz: dx, nz: 34 / dx + 1 },
-  surface,
-  layers: [
-    { name: 'soil', base: base1, v_top: 450, v_base: 550 },
-    { name: 'weathered rock', base: base2, v_top: 1300, v_base: 1500 },
-    { name: 'rock', v_top: 3200, v_base: 3400 },
-  ],
-}) as unknown as ModelFile;
-
-const fine = rasteriseModel(truth(0.25));
-const geophones = Array.from({ length: 48 }, (_, i) => 2 * i + 3);
-const shotXs = [-5, 3, 15, 27, 39, 51, 63, 75, 87, 97, 105];
-const noise = normalDeviates(2026);
-const shots = shotXs.map((sx) => {
-  const source = { x: sx, z: fine.surfaceZ(sx) };
-  const T = solveTravelTimes(fine.grid, fine.velocity, fine.active, source, { cellSlowness: fine.cellSlowness });
-  const xs = geophones.filter((x) => x !== sx);
-  return {
-    shotId: `S${sx}`,
-    source,
-    receivers: Float64Array.from(xs.flatMap((x) => [x, fine.surfaceZ(x)])),
-    times: Float64Array.from(xs, (x) => sampleTime(fine.grid, T, fine.active, { x, z: fine.surfaceZ(x) }) + 0.0005 * noise()),
-    sigmas: new Float64Array(xs.length).fill(0.0005),
-  };
-});
-
-const coarse = rasteriseModel(truth(1));
+const { shots, coarse } = threeLayerSurvey();
 const { grid, active } = coarse;
 const settings = { ...DEFAULT_INVERSION_SETTINGS, checkerboard: true };
 const start = gradientStart(grid, active, coarse.surfaceZ, shots, settings).velocity;
