@@ -14,6 +14,9 @@ interface EnsembleRow {
   stats: EnsembleView['stats']; error: string | null; created_at: Date; started_at: Date | null; finished_at: Date | null;
 }
 
+/** v to `digits` decimals, for the views' JSON. */
+const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
+
 interface MemberCountRow { ensemble_id: string; worker: string | null; status: EnsembleStatus; count: number; seconds: number }
 
 function present(e: EnsembleRow, counts: readonly MemberCountRow[]): EnsembleView {
@@ -39,7 +42,7 @@ function present(e: EnsembleRow, counts: readonly MemberCountRow[]): EnsembleVie
     rockVelocity: { min: e.rock_velocity_min, max: e.rock_velocity_max },
     coverageThreshold: e.coverage_threshold,
     progress,
-    workers: [...workers.values()].map((w) => ({ ...w, seconds: Math.round(w.seconds * 10) / 10 })).sort((a, b) => a.worker.localeCompare(b.worker)),
+    workers: [...workers.values()].map((w) => ({ ...w, seconds: round(w.seconds, 1) })).sort((a, b) => a.worker.localeCompare(b.worker)),
     stats: e.stats,
     ...(e.error ? { error: e.error } : {}),
     createdAt: e.created_at.toISOString(),
@@ -75,7 +78,6 @@ export async function listEnsembleMembers(id: string): Promise<EnsembleMemberVie
   if (!e) throw new HttpError(404, 'not_found', 'Not found.');
   const rows: { index: number; status: EnsembleStatus; worker: string | null; attempts: number; chi2: number | null; iterations: number | null; seconds: number | null; plan: MemberPlan; error: string | null }[] =
     await dataSource.query('SELECT index, status, worker, attempts, chi2, iterations, seconds, plan, error FROM ensemble_members WHERE ensemble_id = $1 ORDER BY index', [id]);
-  const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
   return rows.map((r) => ({
     index: r.index,
     status: r.status,
@@ -109,7 +111,6 @@ export async function loadEnsembleSection(id: string): Promise<EnsembleSectionVi
   const covering = unpackInt32(r.covering);
   const node = (a: Float32Array, f: (v: number) => number) => Array.from(a, (v) => (Number.isFinite(v) ? f(v) : null));
   const { x0, dx, nx, z0, dz, nz } = e.grid;
-  const round = (digits: number) => (v: number) => Math.round(v * 10 ** digits) / 10 ** digits;
   return {
     grid: { x0, dx, nx, z0, dz, nz },
     surface: e.surface,
@@ -119,13 +120,13 @@ export async function loadEnsembleSection(id: string): Promise<EnsembleSectionVi
     covering: Array.from(covering),
     mean: node(unpackFloat32(r.mean), Math.round),
     std: node(unpackFloat32(r.std), Math.round),
-    probability: node(unpackFloat32(r.probability), round(2)),
+    probability: node(unpackFloat32(r.probability), (v) => round(v, 2)),
     bands: (r.bands as EnsembleSectionView['bands']).map((b) => ({
       ...b,
-      median: b.median === null ? null : round(2)(b.median),
-      p5: b.p5 === null ? null : round(2)(b.p5),
-      p95: b.p95 === null ? null : round(2)(b.p95),
-      groundZ: round(3)(b.groundZ),
+      median: b.median === null ? null : round(b.median, 2),
+      p5: b.p5 === null ? null : round(b.p5, 2),
+      p95: b.p95 === null ? null : round(b.p95, 2),
+      groundZ: round(b.groundZ, 3),
     })),
     stations: (await listStations(e.line_id)).map((s) => ({ station: String(s.station), x: s.x, z: s.z })),
   };

@@ -1,3 +1,4 @@
+import { useMemo } from 'react';
 import { useParams } from 'react-router';
 import { isEnsembleActive, useEnsemble, useEnsembleMembers, useEnsembleSection } from '../api/ensembles';
 import { useInversion } from '../api/inversions';
@@ -11,14 +12,15 @@ import { MeanWithBand, ProbabilityChart, SpreadChart } from '../components/ensem
 import { EnsembleProgress } from '../components/ensemble/EnsembleProgress';
 import { EnsembleStatusBadge } from '../components/ensemble/EnsembleStatusBadge';
 import { MembersTable } from '../components/ensemble/MembersTable';
-import { extent } from '../components/ensemble/bandTraces';
 import { inversionTitle } from '../components/inversion/InversionHeader';
+import { toFloat32 } from '../components/inversion/sectionArrays';
 import { PageHeader } from '../components/PageHeader';
 import { SectionColoursControl } from '../components/plot/colours/SectionColoursControl';
 import { useLineSectionColours } from '../components/plot/colours/useSectionColours';
 import { duration, when } from '../components/run/format';
 import { canCancelInversions } from '../lib/permissions';
 import { accuracyStatement, rockWords, variationWords } from '../../shared/uncertainty/wording';
+import { finiteRange } from '../../shared/colour/velocity-scale';
 
 /**
  * One ensemble (/lines/:lineId/ensembles/:ensembleId): live progress over the workers while members
@@ -34,7 +36,8 @@ export function EnsemblePage() {
   const section = useEnsembleSection(ensembleId, e?.status === 'done');
   const base = useInversion(e?.inversionId ?? '');
   const line = useRunLine(e?.lineId ?? lineId);
-  const colours = useLineSectionColours(e?.lineId ?? lineId, section.data ? extent(section.data.mean) : null);
+  const meanRange = useMemo(() => (section.data ? finiteRange(toFloat32(section.data.mean)) : null), [section.data]);
+  const colours = useLineSectionColours(e?.lineId ?? lineId, meanRange);
 
   if (ensemble.isPending) return <Loading what="ensemble" />;
   if (ensemble.isError || !e) return <LoadError error={ensemble.error} what="ensemble" onRetry={() => void ensemble.refetch()} />;

@@ -1,11 +1,11 @@
 import { useMemo } from 'react';
-import { VELOCITY_CSS_STOPS, type VelocityColourRange } from '../../../shared/colour/velocity-scale';
+import { finiteRange, VELOCITY_CSS_STOPS, type VelocityColourRange } from '../../../shared/colour/velocity-scale';
 import type { EnsembleSectionView } from '../../../shared/schemas/ensembles';
 import { rockWords } from '../../../shared/uncertainty/wording';
-import { gridAxes } from '../inversion/sectionArrays';
+import { gridAxes, heatmapRows, toFloat32 } from '../inversion/sectionArrays';
 import { RunPlot } from '../run/plot/RunPlot';
 import { RUN_CHART_CONFIG, RUN_CHART_FONT, runAxis } from '../run/plot/runChartTheme';
-import { bandShapes, extent, rowsOf } from './bandTraces';
+import { bandShapes } from './bandTraces';
 
 /** Spread: pale to deep slate (a light background reads as "little spread"). Ours; no source. */
 const SPREAD_SCALE: [number, string][] = [[0, '#f5f5f4'], [0.5, '#a5b4c4'], [1, '#334155']];
@@ -37,7 +37,7 @@ export function MeanWithBand({ section, colours, height = 300 }: { section: Ense
     const band = bandShapes(section.bands);
     return [
       {
-        type: 'heatmap' as const, x: xs, y: zs, z: rowsOf(section.mean, section.grid), zmin: colours.min, zmax: colours.max,
+        type: 'heatmap' as const, x: xs, y: zs, z: heatmapRows(section.mean, section.grid), zmin: colours.min, zmax: colours.max,
         colorscale: VELOCITY_CSS_STOPS.map(([t, c]) => [t, c]), colorbar: { title: { text: 'm/s' }, thickness: 12 },
         hovertemplate: 'x %{x} m, elevation %{y} m: mean %{z:.0f} m/s<extra></extra>', hoverongaps: false,
       },
@@ -60,10 +60,10 @@ export function MeanWithBand({ section, colours, height = 300 }: { section: Ense
 /** Standard deviation of velocity between members (m/s). */
 export function SpreadChart({ section, height = 300 }: { section: EnsembleSectionView; height?: number }) {
   const { xs, zs } = useMemo(() => gridAxes(section.grid), [section.grid]);
-  const top = useMemo(() => Math.max(10, extent(section.std)?.max ?? 10), [section.std]);
+  const top = useMemo(() => Math.max(10, finiteRange(toFloat32(section.std))?.max ?? 10), [section.std]);
   const data = useMemo(
     () => [
-      { type: 'heatmap' as const, x: xs, y: zs, z: rowsOf(section.std, section.grid), zmin: 0, zmax: top, colorscale: SPREAD_SCALE, colorbar: { title: { text: 'm/s' }, thickness: 12 }, hovertemplate: 'x %{x} m, elevation %{y} m: ±%{z:.0f} m/s<extra></extra>', hoverongaps: false },
+      { type: 'heatmap' as const, x: xs, y: zs, z: heatmapRows(section.std, section.grid), zmin: 0, zmax: top, colorscale: SPREAD_SCALE, colorbar: { title: { text: 'm/s' }, thickness: 12 }, hovertemplate: 'x %{x} m, elevation %{y} m: ±%{z:.0f} m/s<extra></extra>', hoverongaps: false },
       ground(section),
     ],
     [xs, zs, section, top],
@@ -80,7 +80,7 @@ export function ProbabilityChart({ section, height = 300 }: { section: EnsembleS
   const { xs, zs } = useMemo(() => gridAxes(section.grid), [section.grid]);
   const data = useMemo(
     () => [
-      { type: 'heatmap' as const, x: xs, y: zs, z: rowsOf(section.probability, section.grid, 100), zmin: 0, zmax: 100, colorscale: PROBABILITY_SCALE, colorbar: { title: { text: '%' }, thickness: 12 }, hovertemplate: 'x %{x} m, elevation %{y} m: %{z:.0f} %% of members faster<extra></extra>', hoverongaps: false },
+      { type: 'heatmap' as const, x: xs, y: zs, z: heatmapRows(section.probability, section.grid, undefined, 100), zmin: 0, zmax: 100, colorscale: PROBABILITY_SCALE, colorbar: { title: { text: '%' }, thickness: 12 }, hovertemplate: 'x %{x} m, elevation %{y} m: %{z:.0f} %% of members faster<extra></extra>', hoverongaps: false },
       ground(section),
     ],
     [xs, zs, section],

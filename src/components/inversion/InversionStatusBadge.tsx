@@ -1,7 +1,8 @@
 import type { InversionView } from '../../../shared/schemas/inversions';
 import { INVERSION_STATUS_LABELS } from './wording';
 
-const TONES: Record<InversionView['status'], string> = {
+/** Tones per job state, shared by every job kind's badge (inversions, ensembles). */
+export const STATUS_TONES: Record<InversionView['status'], string> = {
   queued: 'bg-stone-100 text-stone-800 ring-stone-300',
   running: 'bg-accent-50 text-accent-800 ring-accent-200',
   done: 'bg-emerald-50 text-emerald-900 ring-emerald-200',
@@ -11,7 +12,7 @@ const TONES: Record<InversionView['status'], string> = {
 
 export function InversionStatusBadge({ status }: { status: InversionView['status'] }) {
   return (
-    <span data-testid="inversion-status" data-status={status} className={`inline-block rounded-full px-2.5 py-0.5 text-sm font-semibold ring-1 ring-inset ${TONES[status] ?? TONES.queued}`}>
+    <span data-testid="inversion-status" data-status={status} className={`inline-block rounded-full px-2.5 py-0.5 text-sm font-semibold ring-1 ring-inset ${STATUS_TONES[status] ?? STATUS_TONES.queued}`}>
       {INVERSION_STATUS_LABELS[status] ?? status}
     </span>
   );
